@@ -1,0 +1,33 @@
+// Settings shared by `npm start`, the command-line tools and the e2e server: one place decides
+// where the data folder, database and auth secret live.
+import { randomBytes } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+
+export function dataDir(env = process.env) {
+	return path.resolve(env.ORTHOGON_DATA_DIR || 'data');
+}
+
+/** Fills in DATABASE_URL, AUTH_SECRET, PORT and ORIGIN where they are not set. */
+export function resolveEnvironment(env = process.env) {
+	const dir = dataDir(env);
+	const port = env.PORT || '3000';
+	const resolved = {
+		...env,
+		PORT: port,
+		ORIGIN: env.ORIGIN || `http://localhost:${port}`,
+		DATABASE_URL: env.DATABASE_URL || `sqlite:${path.join(dir, 'orthogon.db')}`
+	};
+	if (!resolved.AUTH_SECRET) resolved.AUTH_SECRET = persistentSecret(dir);
+	return resolved;
+}
+
+/** A secret generated once into the data folder, so sessions survive restarts. */
+function persistentSecret(dir) {
+	const file = path.join(dir, 'auth-secret');
+	if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
+	fs.mkdirSync(dir, { recursive: true });
+	const secret = randomBytes(32).toString('base64url');
+	fs.writeFileSync(file, secret + '\n', { mode: 0o600 });
+	return secret;
+}

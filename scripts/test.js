@@ -1,0 +1,57 @@
+#!/usr/bin/env node
+// `npm test`: type checks, unit and reference tests, then browser tests against the built app.
+// Every stage runs even when an earlier one fails, and the last line sums up all of them.
+import { spawnSync } from 'node:child_process';
+import fs from 'node:fs';
+import { ensureChromium } from './ensure-chromium.js';
+
+const REPORTS = 'test-results';
+fs.mkdirSync(REPORTS, { recursive: true });
+const run = (cmd, args, env = {}) =>
+	spawnSync(cmd, args, { stdio: 'inherit', env: { ...process.env, ...env } }).status === 0;
+
+const failures = [];
+let passed = 0;
+let failed = 0;
+
+function count(file, read) {
+	try {
+		const [p, f] = read(JSON.parse(fs.readFileSync(file, 'utf8')));
+		passed += p;
+		failed += f;
+	} catch {
+		// no report: the stage failed before running tests and is counted below
+	}
+}
+
+console.log('\n▶ Type checks (svelte-check)');
+if (!run('npx', ['svelte-kit', 'sync']) || !run('npx', ['svelte-check', '--tsconfig', './tsconfig.json', '--fail-on-warnings'])) {
+	failures.push('type checks');
+	failed += 1;
+}
+
+console.log('\n▶ Unit and reference tests (vitest)');
+const vitestReport = `${REPORTS}/vitest.json`;
+fs.rmSync(vitestReport, { force: true });
+if (!run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`])) {
+	failures.push('unit tests');
+}
+count(vitestReport, (r) => [r.numPassedTests, r.numFailedTests + (r.numFailedTestSuites ?? 0)]);
+
+console.log('\n▶ Build');
+if (!run('node', ['scripts/start.js', '--build-only'])) failures.push('build');
+
+console.log('\n▶ Browser tests (Playwright on Debian Chromium)');
+const e2eReport = `${REPORTS}/playwright.json`;
+fs.rmSync(e2eReport, { force: true });
+if (!ensureChromium()) {
+	failures.push('browser tests (no Chromium)');
+	failed += 1;
+} else if (!run('npx', ['playwright', 'test', '-c', 'tests/e2e/playwright.config.ts'], { PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport })) {
+	failures.push('browser tests');
+}
+count(e2eReport, (r) => [r.stats.expected + r.stats.flaky, r.stats.unexpected]);
+
+console.log(failures.length ? `\nFailed stages: ${failures.join(', ')}` : '\nAll stages passed.');
+console.log(`${passed} passed, ${failed} failed`);
+process.exit(failures.length ? 1 : 0);

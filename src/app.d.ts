@@ -1,0 +1,33 @@
+import type { SessionUser } from '$lib/types';
+
+declare global {
+	namespace App {
+		interface Error {
+			message: string;
+			code?: string;
+		}
+		interface Locals {
+			/** Who is asking: from the session cookie, or from a Bearer API token. */
+			user: SessionUser | null;
+			/** How `user` was established; API tokens never open a browser session. */
+			via: 'session' | 'token' | null;
+		}
+		interface PageData {
+			user?: SessionUser | null;
+		}
+	}
+}
+
+declare module '@auth/core/types' {
+	interface Session {
+		user: { id: string; name?: string | null; email?: string | null; image?: string | null };
+	}
+}
+
+declare module '@auth/core/jwt' {
+	interface JWT {
+		uid?: string;
+	}
+}
+
+export {};

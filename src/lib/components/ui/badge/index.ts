@@ -1,0 +1,1 @@
+export { default as RoleBadge } from './RoleBadge.svelte';

@@ -1,0 +1,63 @@
+import { isHttpError, json, type RequestEvent, type RequestHandler } from '@sveltejs/kit';
+import { ZodError, type z } from 'zod';
+
+/** The one error shape every `/api` response uses: `{ error: { code, message, details? } }`. */
+export type ApiErrorBody = { error: { code: string; message: string; details?: unknown } };
+
+const CODES_BY_STATUS: Record<number, string> = {
+	400: 'bad_request',
+	401: 'unauthenticated',
+	403: 'forbidden',
+	404: 'not_found',
+	405: 'method_not_allowed',
+	409: 'conflict',
+	413: 'too_large',
+	415: 'unsupported_media_type',
+	422: 'invalid',
+	429: 'rate_limited',
+	500: 'internal'
+};
+
+export function codeForStatus(status: number): string {
+	return CODES_BY_STATUS[status] ?? (status >= 500 ? 'internal' : 'bad_request');
+}
+
+export function apiError(status: number, code: string, message: string, details?: unknown): Response {
+	const body: ApiErrorBody = { error: { code, message, ...(details === undefined ? {} : { details }) } };
+	return json(body, { status });
+}
+
+/**
+ * Wraps a `+server.ts` handler so guards' `error()` throws, invalid bodies and surprises all
+ * leave as the API error shape. Unknown errors are logged here and never echoed to the client.
+ */
+export function apiHandler(handler: (event: RequestEvent) => Promise<Response>): RequestHandler {
+	return async (event) => {
+		try {
+			return await handler(event);
+		} catch (caught) {
+			if (isHttpError(caught)) {
+				const { status, body } = caught;
+				return apiError(status, body.code ?? codeForStatus(status), body.message);
+			}
+			if (caught instanceof ZodError) {
+				return apiError(400, 'invalid_body', 'The request body does not have the expected fields.', caught.issues);
+			}
+			console.error('[api]', event.request.method, event.url.pathname, caught);
+			return apiError(500, 'internal', 'Something went wrong on the server; nothing was changed.');
+		}
+	};
+}
+
+/** Reads a JSON body and validates it; throws ZodError (→ 400) or a 400 for non-JSON. */
+export async function readJson<S extends z.ZodType>(event: RequestEvent, schema: S): Promise<z.output<S>> {
+	let body: unknown;
+	try {
+		body = await event.request.json();
+	} catch {
+		throw new ZodError([
+			{ code: 'custom', path: [], message: 'The body must be JSON (Content-Type: application/json).', input: undefined }
+		]);
+	}
+	return schema.parse(body);
+}

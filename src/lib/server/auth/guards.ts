@@ -1,0 +1,76 @@
+import { error, redirect, type RequestEvent } from '@sveltejs/kit';
+import { can, ROLE_LABELS, type Action, type Role } from '../../policy';
+import { paths } from '../../paths';
+import { dbReady, Membership, Project } from '../db';
+import type { SessionUser } from './credentials';
+
+// Every page load, form action and API handler passes through these. The rules:
+// no identity → sign-in page (pages) or 401 (API); not a member of the team → 404, so other
+// teams' data is indistinguishable from data that does not exist; member without the grant → 403.
+
+type GuardEvent = Pick<RequestEvent, 'locals' | 'url'>;
+
+export function isApiPath(url: URL): boolean {
+	return url.pathname === '/api' || url.pathname.startsWith('/api/');
+}
+
+/** The signed-in (or token-bearing) user; otherwise redirects to sign-in or answers 401. */
+export function requireUser(event: GuardEvent): SessionUser {
+	const user = event.locals.user;
+	if (user) return user;
+	if (isApiPath(event.url)) {
+		error(401, { code: 'unauthenticated', message: 'Sign in, or send an API token as a Bearer token.' });
+	}
+	redirect(303, paths.signIn(event.url.pathname + event.url.search));
+}
+
+/** The user's role in a team, read from the database on every call (never from the session). */
+export async function roleIn(userId: string, teamId: string): Promise<Role | null> {
+	await dbReady();
+	const membership = await Membership.findOne({ where: { userId, teamId } });
+	return membership?.role ?? null;
+}
+
+export function notFound(what = 'That'): never {
+	error(404, { code: 'not_found', message: `${what} does not exist, or is not shared with you.` });
+}
+
+const ACTION_PHRASES: Record<Action, string> = {
+	'project.read': 'read this team’s work',
+	'project.create': 'create projects',
+	'project.edit': 'rename or archive projects',
+	'route.edit': 'edit routes',
+	'route.comment': 'comment on routes',
+	'route.review': 'review routes',
+	'library.add': 'add to the condition library',
+	'library.approve': 'approve condition library entries',
+	'team.manage': 'manage the team'
+};
+
+/** Passes when the user is in the team with a role that grants the action. */
+export async function requireTeamAction(event: GuardEvent, teamId: string, action: Action) {
+	const user = requireUser(event);
+	const role = await roleIn(user.id, teamId);
+	if (!role) notFound('That team');
+	if (!can(role, action)) {
+		error(403, {
+			code: 'forbidden',
+			message: `As ${ROLE_LABELS[role].toLowerCase()} you cannot ${ACTION_PHRASES[action]}.`
+		});
+	}
+	return { user, role };
+}
+
+/** Loads a project and checks the action against the role in the project's team. */
+export async function requireProjectAction(event: GuardEvent, projectId: string, action: Action) {
+	const user = requireUser(event);
+	await dbReady();
+	const project = isUuid(projectId) ? await Project.findByPk(projectId) : null;
+	if (!project || !(await roleIn(user.id, project.teamId))) notFound('That project');
+	const { role } = await requireTeamAction(event, project.teamId, action);
+	return { user, role, project };
+}
+
+function isUuid(value: string): boolean {
+	return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
+}

@@ -1,0 +1,14 @@
+import type { QueryInterface } from 'sequelize';
+import * as foundation from './0001-foundation';
+
+export type Migration = {
+	name: string;
+	up: (qi: QueryInterface) => Promise<void>;
+	down: (qi: QueryInterface) => Promise<void>;
+};
+
+/**
+ * Every migration, in order. Listed by import (not read from disk) so the bundler carries them
+ * into the built server, where the .ts files do not exist. Append new ones; never reorder.
+ */
+export const migrations: Migration[] = [{ name: '0001-foundation', ...foundation }];

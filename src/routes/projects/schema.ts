@@ -1,0 +1,1 @@
+export { newProjectSchema as createProjectSchema } from '$lib/schemas/project';

@@ -1,0 +1,11 @@
+import { z } from 'zod';
+import { ROLES } from '$lib/policy';
+
+export const addMemberSchema = z.object({
+	email: z.email('Enter their e-mail address.'),
+	name: z.string().trim().max(120).default(''),
+	role: z.enum(ROLES).default('chemist')
+});
+
+export const changeRoleSchema = z.object({ membershipId: z.uuid(), role: z.enum(ROLES) });
+export const removeMemberSchema = z.object({ membershipId: z.uuid() });
