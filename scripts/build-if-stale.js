@@ -25,10 +25,16 @@ export function buildIsStale() {
 export function buildIfStale({ force = false } = {}) {
 	if (!force && !buildIsStale()) return;
 	console.log('Building Orthogon (the first start takes a few seconds)…');
-	const result = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { stdio: 'inherit' });
+	const started = Date.now();
+	// The server bundler's notes about dependencies' internals are noise on success; the whole
+	// log is shown when the build fails.
+	const result = spawnSync('npx', ['vite', 'build'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
 	if (result.status !== 0) {
+		process.stdout.write(result.stdout ?? '');
+		process.stderr.write(result.stderr ?? '');
 		console.error('The build failed; see the messages above.');
 		process.exit(result.status ?? 1);
 	}
 	fs.writeFileSync(STAMP, new Date().toISOString() + '\n');
+	console.log(`Built in ${((Date.now() - started) / 1000).toFixed(1)} s.`);
 }

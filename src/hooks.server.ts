@@ -85,7 +85,7 @@ const shapeApiErrors: Handle = async ({ event, resolve }) => {
 	return shaped;
 };
 
-export const handle = sequence(authHandle, identify, limitScriptedSignIn, guardPages, shapeApiErrors);
+export const handle = sequence(limitScriptedSignIn, authHandle, identify, guardPages, shapeApiErrors);
 
 export const handleError: HandleServerError = ({ error, status, message }) => {
 	if (status !== 404) console.error('[server]', error);

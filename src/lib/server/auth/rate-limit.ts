@@ -4,7 +4,12 @@ import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 // spraying many accounts. Both windows are 15 minutes.
 const WINDOW_SECONDS = 15 * 60;
 const perEmail = new RateLimiterMemory({ keyPrefix: 'signin-email', points: 5, duration: WINDOW_SECONDS });
-const perAddress = new RateLimiterMemory({ keyPrefix: 'signin-ip', points: 30, duration: WINDOW_SECONDS });
+// A shared address (a site's outbound proxy, a test run) may need more: ORTHOGON_SIGNIN_LIMIT_PER_ADDRESS.
+const perAddress = new RateLimiterMemory({
+	keyPrefix: 'signin-ip',
+	points: Number(process.env.ORTHOGON_SIGNIN_LIMIT_PER_ADDRESS) || 30,
+	duration: WINDOW_SECONDS
+});
 
 export type SignInAllowance = { allowed: true } | { allowed: false; retryAfterSeconds: number };
 

@@ -1,0 +1,74 @@
+import { expect, test } from '@playwright/test';
+import { signIn, signInAndWait } from './helpers';
+
+const FIRST_TEAM = 'Cormorant — keto-diol side chain';
+const SECOND_TEAM = 'Heron — hydroxy lactone core';
+
+for (const role of ['lead', 'chemist', 'reviewer', 'viewer']) {
+	test(`the demo ${role} signs in and sees the team's projects`, async ({ page }) => {
+		await signInAndWait(page, `${role}@example.com`);
+		await expect(page.getByRole('link', { name: new RegExp(FIRST_TEAM) })).toBeVisible();
+		await expect(page.getByText(SECOND_TEAM)).toHaveCount(0);
+		await expect(page.getByTestId('signed-in-as')).not.toBeEmpty();
+	});
+}
+
+test('a wrong password shows a clear message and no session', async ({ page }) => {
+	await signIn(page, 'lead@example.com', 'not-the-password');
+	await expect(page.getByRole('alert')).toHaveText('That e-mail and password do not match an Orthogon account.');
+	await page.goto('/projects');
+	await expect(page).toHaveURL(/\/signin\?redirectTo=%2Fprojects/);
+});
+
+test('the outsider never sees the first team’s project, not even by its address', async ({ page, browser }) => {
+	const leadPage = await (await browser.newContext()).newPage();
+	await signInAndWait(leadPage, 'lead@example.com');
+	const href = await leadPage.getByRole('link', { name: new RegExp(FIRST_TEAM) }).getAttribute('href');
+	expect(href).toMatch(/^\/projects\/[0-9a-f-]{36}$/);
+
+	await signInAndWait(page, 'outsider@example.com');
+	await expect(page.getByRole('link', { name: new RegExp(SECOND_TEAM) })).toBeVisible();
+	await expect(page.getByText(FIRST_TEAM)).toHaveCount(0);
+	const response = await page.goto(href!);
+	expect(response?.status()).toBe(404);
+	await expect(page.getByText(FIRST_TEAM)).toHaveCount(0);
+	const api = await page.request.get('/api/projects');
+	expect((await api.json()).projects.map((p: { name: string }) => p.name)).toEqual([SECOND_TEAM]);
+});
+
+test('sign-out ends the session', async ({ page }) => {
+	await signInAndWait(page, 'viewer@example.com');
+	await page.getByRole('button', { name: 'Sign out' }).click();
+	await expect(page.getByRole('heading', { name: 'Sign in' })).toBeVisible();
+	await page.goto('/projects');
+	await expect(page).toHaveURL(/\/signin/);
+});
+
+test('after a sign-in the chemist lands where they were going', async ({ page }) => {
+	await page.goto('/account');
+	await expect(page).toHaveURL(/redirectTo=%2Faccount/);
+	await page.getByLabel('E-mail').fill('chemist@example.com');
+	await page.getByLabel('Password', { exact: true }).fill('orthogon-demo');
+	await page.getByRole('button', { name: 'Sign in' }).click();
+	await expect(page.getByRole('heading', { name: 'Your account' })).toBeVisible();
+});
+
+test('repeated wrong passwords are refused with 429 and Retry-After', async ({ request, page, baseURL }) => {
+	const email = 'no-such-person@example.com';
+	const attempt = () =>
+		request.post('/auth/callback/credentials', {
+			form: { email, password: 'guess' },
+			headers: { origin: new URL(baseURL!).origin },
+			maxRedirects: 0
+		});
+	const statuses = [];
+	for (let i = 0; i < 5; i++) statuses.push((await attempt()).status());
+	expect(statuses).not.toContain(429);
+	const refused = await attempt();
+	expect(refused.status()).toBe(429);
+	expect(Number(refused.headers()['retry-after'])).toBeGreaterThan(0);
+
+	// The sign-in page shares the same count and says so in words.
+	await signIn(page, email, 'guess');
+	await expect(page.getByRole('alert')).toContainText('Too many sign-in attempts. Try again in 15 minutes.');
+});

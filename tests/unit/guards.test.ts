@@ -1,0 +1,82 @@
+import { isHttpError, isRedirect } from '@sveltejs/kit';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { ACTIONS, can, ROLES } from '../../src/lib/policy';
+import { requireProjectAction, requireTeamAction, requireUser } from '../../src/lib/server/auth/guards';
+import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+
+type Fixture = Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
+let f: Fixture;
+
+async function outcome(run: () => Promise<unknown> | unknown): Promise<string> {
+	try {
+		await run();
+		return 'allowed';
+	} catch (caught) {
+		if (isRedirect(caught)) return `redirect ${caught.location}`;
+		if (isHttpError(caught)) return String(caught.status);
+		throw caught;
+	}
+}
+
+beforeAll(async () => {
+	await freshDatabase();
+	f = await makeTeamWithEveryRole();
+});
+
+describe('requireUser', () => {
+	it('sends a page visitor without a session to sign-in, keeping where they were going', async () => {
+		expect(await outcome(() => requireUser(fakeEvent({ path: '/projects?archived=1' })))).toBe(
+			'redirect /signin?redirectTo=%2Fprojects%3Farchived%3D1'
+		);
+	});
+	it('answers 401 on the API', async () => {
+		expect(await outcome(() => requireUser(fakeEvent({ path: '/api/projects' })))).toBe('401');
+	});
+	it('passes a signed-in user through', async () => {
+		expect(requireUser(fakeEvent({ user: f.people.viewer })).id).toBe(f.people.viewer.id);
+	});
+});
+
+describe('requireTeamAction: every role × every action', () => {
+	for (const role of ROLES) {
+		for (const action of ACTIONS) {
+			const expected = can(role, action) ? 'allowed' : '403';
+			it(`${role} → ${action}: ${expected}`, async () => {
+				const event = fakeEvent({ user: f.people[role], path: '/api/projects' });
+				expect(await outcome(() => requireTeamAction(event, f.team.id, action))).toBe(expected);
+			});
+		}
+	}
+
+	it('answers 404, not 403, to a lead of another team, for every action', async () => {
+		for (const action of ACTIONS) {
+			const event = fakeEvent({ user: f.people.outsider });
+			expect(await outcome(() => requireTeamAction(event, f.team.id, action))).toBe('404');
+		}
+	});
+
+	it('reads the role from the database on every call, so a role change applies at once', async () => {
+		const { Membership } = await import('../../src/lib/server/db');
+		const event = fakeEvent({ user: f.people.viewer });
+		expect(await outcome(() => requireTeamAction(event, f.team.id, 'project.create'))).toBe('403');
+		await Membership.update({ role: 'chemist' }, { where: { userId: f.people.viewer.id, teamId: f.team.id } });
+		expect(await outcome(() => requireTeamAction(event, f.team.id, 'project.create'))).toBe('allowed');
+		await Membership.update({ role: 'viewer' }, { where: { userId: f.people.viewer.id, teamId: f.team.id } });
+	});
+});
+
+describe('requireProjectAction', () => {
+	it('finds the project for members and hides it from other teams', async () => {
+		const project = await makeProject(f.team.id, 'Guarded project');
+		const mine = await requireProjectAction(fakeEvent({ user: f.people.reviewer }), project.id, 'project.read');
+		expect(mine.project.id).toBe(project.id);
+		expect(mine.role).toBe('reviewer');
+		expect(await outcome(() => requireProjectAction(fakeEvent({ user: f.people.outsider }), project.id, 'project.read'))).toBe('404');
+		expect(await outcome(() => requireProjectAction(fakeEvent({ user: f.people.viewer }), project.id, 'project.edit'))).toBe('403');
+	});
+	it('answers 404 for ids that do not exist or are not ids at all', async () => {
+		const event = fakeEvent({ user: f.people.lead });
+		expect(await outcome(() => requireProjectAction(event, '00000000-0000-4000-8000-000000000000', 'project.read'))).toBe('404');
+		expect(await outcome(() => requireProjectAction(event, 'not-an-id', 'project.read'))).toBe('404');
+	});
+});
