@@ -2,7 +2,7 @@
 // Creates a team with its first lead (for a database started with ORTHOGON_DEMO=0).
 import { createInterface } from 'node:readline/promises';
 import { parseArgs } from 'node:util';
-import { resolveEnvironment } from './environment.js';
+import { loadDotEnv, resolveEnvironment } from './environment.js';
 
 const { values } = parseArgs({
 	options: {
@@ -13,6 +13,7 @@ const { values } = parseArgs({
 	}
 });
 
+loadDotEnv();
 Object.assign(process.env, resolveEnvironment());
 const { createTeamWithLead } = await import('../src/lib/server/services/teams');
 

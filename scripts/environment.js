@@ -8,6 +8,11 @@ export function dataDir(env = process.env) {
 	return path.resolve(env.ORTHOGON_DATA_DIR || 'data');
 }
 
+/** Reads a `.env` file in the working folder, if there is one, without overriding the shell. */
+export function loadDotEnv() {
+	if (fs.existsSync('.env')) process.loadEnvFile('.env');
+}
+
 /** Fills in DATABASE_URL, AUTH_SECRET, PORT and ORIGIN where they are not set. */
 export function resolveEnvironment(env = process.env) {
 	const dir = dataDir(env);
@@ -16,7 +21,9 @@ export function resolveEnvironment(env = process.env) {
 		...env,
 		PORT: port,
 		ORIGIN: env.ORIGIN || `http://localhost:${port}`,
-		DATABASE_URL: env.DATABASE_URL || `sqlite:${path.join(dir, 'orthogon.db')}`
+		DATABASE_URL: env.DATABASE_URL || `sqlite:${path.join(dir, 'orthogon.db')}`,
+		// The API reads JSON bodies up to 2 MB and answers 413 above that (src/lib/server/api.ts).
+		BODY_SIZE_LIMIT: env.BODY_SIZE_LIMIT || '3M'
 	};
 	if (!resolved.AUTH_SECRET) resolved.AUTH_SECRET = persistentSecret(dir);
 	return resolved;

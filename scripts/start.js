@@ -4,12 +4,13 @@
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import { buildIfStale } from './build-if-stale.js';
-import { resolveEnvironment } from './environment.js';
+import { loadDotEnv, resolveEnvironment } from './environment.js';
 
 const args = new Set(process.argv.slice(2));
 buildIfStale({ force: args.has('--rebuild') });
 if (args.has('--build-only')) process.exit(0);
 
+loadDotEnv();
 const env = resolveEnvironment();
 const demo = env.ORTHOGON_DEMO !== '0';
 const server = spawn(process.execPath, ['build/index.js'], { env, stdio: ['ignore', 'inherit', 'inherit'] });

@@ -58,6 +58,12 @@ describe('POST /api/projects', () => {
 		const garbage = await call(POST, { user: f.people.lead, method: 'POST', body: 'not json' });
 		expect(garbage.status).toBe(400);
 	});
+	it('answers 413 for a body over 2 MB', async () => {
+		const huge = { name: 'Big', teamId: f.team.id, description: 'x'.repeat(2.5 * 1024 * 1024) };
+		const { status, body } = await call(POST, { user: f.people.lead, method: 'POST', body: huge });
+		expect(status).toBe(413);
+		expect(body.error.code).toBe('too_large');
+	});
 });
 
 describe('unknown API paths', () => {

@@ -1,4 +1,4 @@
-import { isHttpError, json, type RequestEvent, type RequestHandler } from '@sveltejs/kit';
+import { error, isHttpError, json, type RequestEvent, type RequestHandler } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
 
 /** The one error shape every `/api` response uses: `{ error: { code, message, details? } }`. */
@@ -49,12 +49,28 @@ export function apiHandler(handler: (event: RequestEvent) => Promise<Response>):
 	};
 }
 
-/** Reads a JSON body and validates it; throws ZodError (→ 400) or a 400 for non-JSON. */
+/** The largest JSON body an endpoint reads (structures up to 1 MB fit with room to spare). */
+export const MAX_JSON_BODY_BYTES = 2 * 1024 * 1024;
+
+function tooLarge(): never {
+	error(413, { code: 'too_large', message: `The request body is over ${MAX_JSON_BODY_BYTES / 1024 / 1024} MB.` });
+}
+
+/**
+ * Reads a JSON body and validates it: over 2 MB → 413, not JSON or the wrong shape → 400
+ * (a ZodError that `apiHandler` turns into `invalid_body`).
+ */
 export async function readJson<S extends z.ZodType>(event: RequestEvent, schema: S): Promise<z.output<S>> {
+	const declared = Number(event.request.headers.get('content-length') ?? 0);
+	if (declared > MAX_JSON_BODY_BYTES) tooLarge();
 	let body: unknown;
 	try {
-		body = await event.request.json();
-	} catch {
+		const text = await event.request.text();
+		if (Buffer.byteLength(text) > MAX_JSON_BODY_BYTES) tooLarge();
+		body = JSON.parse(text);
+	} catch (caught) {
+		// The server's own body limit (BODY_SIZE_LIMIT) reports itself with status 413.
+		if (isHttpError(caught) || (caught as { status?: number })?.status === 413) tooLarge();
 		throw new ZodError([
 			{ code: 'custom', path: [], message: 'The body must be JSON (Content-Type: application/json).', input: undefined }
 		]);
