@@ -3,6 +3,7 @@
 // Every stage runs even when an earlier one fails, and the last line sums up all of them.
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
+import path from 'node:path';
 import { ensureChromium } from './ensure-chromium.js';
 
 const REPORTS = 'test-results';
@@ -42,7 +43,7 @@ console.log('\n▶ Build');
 if (!run('node', ['scripts/start.js', '--build-only'])) failures.push('build');
 
 console.log('\n▶ Browser tests (Playwright on Debian Chromium)');
-const e2eReport = `${REPORTS}/playwright.json`;
+const e2eReport = path.resolve(REPORTS, 'playwright.json');
 fs.rmSync(e2eReport, { force: true });
 if (!ensureChromium()) {
 	failures.push('browser tests (no Chromium)');

@@ -22,18 +22,22 @@ test('a chemist creates, renames and archives a project', async ({ page }) => {
 	await expect(page.getByText('Gannet II')).toBeVisible();
 });
 
-test('a reviewer and a viewer cannot create or edit projects', async ({ page }) => {
+test('a reviewer and a viewer cannot create or edit projects', async ({ browser }) => {
 	for (const who of ['reviewer', 'viewer']) {
-		await page.context().clearCookies();
+		const page = await (await browser.newContext()).newPage();
 		await signInAndWait(page, `${who}@example.com`);
 		await expect(page.getByRole('button', { name: 'Create project' })).toHaveCount(0);
 		await page.getByRole('link', { name: /Cormorant/ }).click();
+		await expect(page.getByRole('heading', { name: /Cormorant/, level: 1 })).toBeVisible();
 		await expect(page.getByRole('button', { name: 'Archive' })).toHaveCount(0);
+		await expect(page.getByRole('button', { name: 'Rename or edit target' })).toHaveCount(0);
+
+		const teamId = await page.evaluate(async () => (await (await fetch('/api/projects')).json()).projects[0].teamId);
+		const refused = await page.request.post('/api/projects', { data: { name: 'Not allowed', teamId } });
+		expect(refused.status()).toBe(403);
+		expect((await refused.json()).error.code).toBe('forbidden');
+		await page.context().close();
 	}
-	const teamId = await page.evaluate(async () => (await (await fetch('/api/projects')).json()).projects[0].teamId);
-	const refused = await page.request.post('/api/projects', { data: { name: 'Not allowed', teamId } });
-	expect(refused.status()).toBe(403);
-	expect((await refused.json()).error.code).toBe('forbidden');
 });
 
 test('a lead adds a member, who sets a password with the one-time link and signs in', async ({ page, browser }) => {
