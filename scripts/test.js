@@ -5,6 +5,7 @@ import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { ensureChromium } from './ensure-chromium.js';
+import { startTestPostgres } from './test-postgres.js';
 
 const REPORTS = 'test-results';
 fs.mkdirSync(REPORTS, { recursive: true });
@@ -32,11 +33,15 @@ if (!run('npx', ['svelte-kit', 'sync']) || !run('npx', ['svelte-check', '--tscon
 }
 
 console.log('\n▶ Unit and reference tests (vitest)');
+const postgres = process.env.TEST_POSTGRES_URL ? { url: process.env.TEST_POSTGRES_URL } : startTestPostgres();
+console.log(postgres.url ? `PostgreSQL for the dialect test: ${postgres.url}` : `The PostgreSQL dialect test is skipped: ${postgres.reason}.`);
 const vitestReport = `${REPORTS}/vitest.json`;
 fs.rmSync(vitestReport, { force: true });
-if (!run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`])) {
-	failures.push('unit tests');
-}
+const vitestOk = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], {
+	...(postgres.url ? { TEST_POSTGRES_URL: postgres.url } : {})
+});
+postgres.stop?.();
+if (!vitestOk) failures.push('unit tests');
 count(vitestReport, (r) => [r.numPassedTests, r.numFailedTests + (r.numFailedTestSuites ?? 0)]);
 
 console.log('\n▶ Build');
