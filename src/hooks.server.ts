@@ -85,7 +85,21 @@ const shapeApiErrors: Handle = async ({ event, resolve }) => {
 	return shaped;
 };
 
-export const handle = sequence(limitScriptedSignIn, authHandle, identify, guardPages, shapeApiErrors);
+const SECURITY_HEADERS = { 'x-content-type-options': 'nosniff', 'referrer-policy': 'same-origin' };
+
+const securityHeaders: Handle = async ({ event, resolve }) => {
+	let response = await resolve(event);
+	try {
+		for (const [name, value] of Object.entries(SECURITY_HEADERS)) response.headers.set(name, value);
+	} catch {
+		// Response.redirect() (used inside Auth.js) has immutable headers: copy it first.
+		response = new Response(response.body, response);
+		for (const [name, value] of Object.entries(SECURITY_HEADERS)) response.headers.set(name, value);
+	}
+	return response;
+};
+
+export const handle = sequence(securityHeaders, limitScriptedSignIn, authHandle, identify, guardPages, shapeApiErrors);
 
 export const handleError: HandleServerError = ({ error, status, message }) => {
 	if (status !== 404) console.error('[server]', error);

@@ -72,3 +72,21 @@ test('repeated wrong passwords are refused with 429 and Retry-After', async ({ r
 	await signIn(page, email, 'guess');
 	await expect(page.getByRole('alert')).toContainText('Too many sign-in attempts. Try again in 15 minutes.');
 });
+
+test('pages run under the content security policy without console errors', async ({ page }) => {
+	const problems: string[] = [];
+	page.on('console', (message) => {
+		if (message.type() === 'error') problems.push(message.text());
+	});
+	page.on('pageerror', (error) => problems.push(error.message));
+	await signInAndWait(page, 'lead@example.com');
+	await page.getByRole('link', { name: /Cormorant/ }).click();
+	await expect(page.getByRole('heading', { name: /Cormorant/, level: 1 })).toBeVisible();
+	await page.getByRole('link', { name: 'Aster Process Chemistry' }).click();
+	await expect(page.getByRole('heading', { name: 'Add a member' })).toBeVisible();
+	await page.getByRole('link', { name: 'Account' }).click();
+	await expect(page.getByRole('heading', { name: 'API tokens' })).toBeVisible();
+	const response = await page.request.get('/projects');
+	expect(response.headers()['content-security-policy']).toContain("frame-ancestors 'none'");
+	expect(problems).toEqual([]);
+});
