@@ -5,6 +5,7 @@ declare global {
 		interface Error {
 			message: string;
 			code?: string;
+			details?: unknown;
 		}
 		interface Locals {
 			/** Who is asking: from the session cookie, or from a Bearer API token. */

@@ -1,4 +1,4 @@
-import { error, isHttpError, json, type RequestEvent, type RequestHandler } from '@sveltejs/kit';
+import { error, isHttpError, json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
 
 /** The one error shape every `/api` response uses: `{ error: { code, message, details? } }`. */
@@ -31,14 +31,16 @@ export function apiError(status: number, code: string, message: string, details?
  * Wraps a `+server.ts` handler so guards' `error()` throws, invalid bodies and surprises all
  * leave as the API error shape. Unknown errors are logged here and never echoed to the client.
  */
-export function apiHandler(handler: (event: RequestEvent) => Promise<Response>): RequestHandler {
+export function apiHandler<E extends RequestEvent = RequestEvent>(
+	handler: (event: E) => Promise<Response>
+): (event: E) => Promise<Response> {
 	return async (event) => {
 		try {
 			return await handler(event);
 		} catch (caught) {
 			if (isHttpError(caught)) {
 				const { status, body } = caught;
-				return apiError(status, body.code ?? codeForStatus(status), body.message);
+				return apiError(status, body.code ?? codeForStatus(status), body.message, body.details);
 			}
 			if (caught instanceof ZodError) {
 				return apiError(400, 'invalid_body', 'The request body does not have the expected fields.', caught.issues);

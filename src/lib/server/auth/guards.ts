@@ -1,7 +1,7 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { can, ROLE_LABELS, type Action, type Role } from '../../policy';
 import { paths } from '../../paths';
-import { dbReady, Membership, Project } from '../db';
+import { dbReady, Membership, Project, Route } from '../db';
 import type { SessionUser } from './credentials';
 
 // Every page load, form action and API handler passes through these. The rules:
@@ -69,6 +69,16 @@ export async function requireProjectAction(event: GuardEvent, projectId: string,
 	if (!project || !(await roleIn(user.id, project.teamId))) notFound('That project');
 	const { role } = await requireTeamAction(event, project.teamId, action);
 	return { user, role, project };
+}
+
+/** Loads a route and its project, and checks the action in the project's team. */
+export async function requireRouteAction(event: GuardEvent, routeId: string, action: Action) {
+	const user = requireUser(event);
+	await dbReady();
+	const route = isUuid(routeId) ? await Route.findByPk(routeId, { include: [{ model: Project, as: 'project' }] }) : null;
+	if (!route?.project || !(await roleIn(user.id, route.project.teamId))) notFound('That route');
+	const { role } = await requireTeamAction(event, route.project.teamId, action);
+	return { user, role, route, project: route.project };
 }
 
 function isUuid(value: string): boolean {

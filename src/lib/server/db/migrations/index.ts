@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as foundation from './0001-foundation';
+import * as routes from './0002-routes';
 
 export type Migration = {
 	name: string;
@@ -11,4 +12,7 @@ export type Migration = {
  * Every migration, in order. Listed by import (not read from disk) so the bundler carries them
  * into the built server, where the .ts files do not exist. Append new ones; never reorder.
  */
-export const migrations: Migration[] = [{ name: '0001-foundation', ...foundation }];
+export const migrations: Migration[] = [
+	{ name: '0001-foundation', ...foundation },
+	{ name: '0002-routes', ...routes }
+];

@@ -1,17 +1,21 @@
 import type { Sequelize } from 'sequelize';
 import { ActivityEvent } from './activity-event';
 import { ApiToken } from './api-token';
+import { Intermediate } from './intermediate';
 import { Membership } from './membership';
 import { Project } from './project';
+import { Route } from './route';
 import { SetPasswordLink } from './set-password-link';
+import { Step } from './step';
 import { Team } from './team';
 import { User } from './user';
 
-export { ActivityEvent, ApiToken, Membership, Project, SetPasswordLink, Team, User };
+export { ActivityEvent, ApiToken, Intermediate, Membership, Project, Route, SetPasswordLink, Step, Team, User };
+export { ROUTE_STATUSES, type RouteStatus } from './route';
 
 /** Binds every model to one Sequelize instance and wires the associations. */
 export function initModels(sequelize: Sequelize) {
-	for (const model of [User, Team, Membership, ApiToken, SetPasswordLink, Project, ActivityEvent]) {
+	for (const model of [User, Team, Membership, ApiToken, SetPasswordLink, Project, ActivityEvent, Route, Intermediate, Step]) {
 		model.initModel(sequelize);
 	}
 	Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' });
@@ -20,4 +24,7 @@ export function initModels(sequelize: Sequelize) {
 	Team.hasMany(Membership, { as: 'memberships', foreignKey: 'teamId' });
 	Project.belongsTo(Team, { as: 'team', foreignKey: 'teamId' });
 	ActivityEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
+	Route.belongsTo(Project, { as: 'project', foreignKey: 'projectId' });
+	Route.hasMany(Intermediate, { as: 'intermediates', foreignKey: 'routeId' });
+	Route.hasMany(Step, { as: 'steps', foreignKey: 'routeId' });
 }

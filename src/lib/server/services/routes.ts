@@ -1,0 +1,154 @@
+import type { Transaction } from 'sequelize';
+import type { RouteDocument } from '../../route/document';
+import type { SessionUser } from '../../types';
+import { dbReady, Intermediate, Project, Route, Step } from '../db';
+import { recordActivity } from './activity';
+
+export type RouteSummary = { id: string; name: string; status: string; version: number; updatedAt: Date; archived: boolean };
+
+export class VersionConflict extends Error {
+	constructor(readonly currentVersion: number) {
+		super(`The route was changed by someone else (now at version ${currentVersion}).`);
+	}
+}
+
+function summarise(route: Route): RouteSummary {
+	return {
+		id: route.id,
+		name: route.name,
+		status: route.status,
+		version: route.version,
+		updatedAt: route.updatedAt,
+		archived: route.archivedAt !== null
+	};
+}
+
+export async function listRoutes(projectId: string, options: { includeArchived?: boolean } = {}): Promise<RouteSummary[]> {
+	await dbReady();
+	const routes = await Route.findAll({
+		where: { projectId, ...(options.includeArchived ? {} : { archivedAt: null }) },
+		order: [['updatedAt', 'DESC']]
+	});
+	return routes.map(summarise);
+}
+
+async function writeChildren(routeId: string, doc: RouteDocument, transaction: Transaction) {
+	await Intermediate.destroy({ where: { routeId }, transaction });
+	await Step.destroy({ where: { routeId }, transaction });
+	await Intermediate.bulkCreate(
+		doc.intermediates.map((node, ordinal) => ({
+			routeId,
+			key: node.id,
+			label: node.label ?? null,
+			structure: node.structure,
+			canonical: null,
+			positionX: node.position?.x ?? null,
+			positionY: node.position?.y ?? null,
+			ordinal
+		})),
+		{ transaction }
+	);
+	await Step.bulkCreate(
+		doc.steps.map((step, ordinal) => ({
+			routeId,
+			key: step.id,
+			fromKeys: step.from,
+			toKey: step.to,
+			reagents: step.reagents ?? null,
+			conditionIds: step.conditions ?? null,
+			notes: step.notes ?? null,
+			quantities: null,
+			intent: step.intent ?? null,
+			ordinal
+		})),
+		{ transaction }
+	);
+}
+
+/** Creates a route from a validated route document. */
+export async function createRoute(actor: SessionUser, project: Project, doc: RouteDocument): Promise<Route> {
+	await dbReady();
+	return Route.sequelize!.transaction(async (transaction) => {
+		const route = await Route.create(
+			{ projectId: project.id, name: doc.name, createdById: actor.id, archivedAt: null },
+			{ transaction }
+		);
+		await writeChildren(route.id, doc, transaction);
+		await recordActivity(
+			{
+				teamId: project.teamId,
+				projectId: project.id,
+				actorId: actor.id,
+				kind: 'route.created',
+				summary: `${actor.name} created the route “${route.name}”.`,
+				details: { routeId: route.id }
+			},
+			transaction
+		);
+		return route;
+	});
+}
+
+/** The stored route as a route document, children in the order they were saved. */
+export async function routeDocument(route: Route): Promise<RouteDocument> {
+	const [intermediates, steps] = await Promise.all([
+		Intermediate.findAll({ where: { routeId: route.id }, order: [['ordinal', 'ASC']] }),
+		Step.findAll({ where: { routeId: route.id }, order: [['ordinal', 'ASC']] })
+	]);
+	return {
+		name: route.name,
+		intermediates: intermediates.map((node) => ({
+			id: node.key,
+			...(node.label ? { label: node.label } : {}),
+			structure: node.structure,
+			...(node.positionX !== null && node.positionY !== null ? { position: { x: node.positionX, y: node.positionY } } : {})
+		})),
+		steps: steps.map((step) => ({
+			id: step.key,
+			from: step.fromKeys,
+			to: step.toKey,
+			...(step.reagents ? { reagents: step.reagents } : {}),
+			...(step.conditionIds?.length ? { conditions: step.conditionIds } : {}),
+			...(step.notes ? { notes: step.notes } : {}),
+			...(step.intent ? { intent: step.intent } : {})
+		}))
+	};
+}
+
+/**
+ * Replaces the route's content when `expectedVersion` is still current; otherwise writes
+ * nothing and throws VersionConflict. Returns the new version.
+ */
+export async function saveRoute(
+	actor: SessionUser,
+	route: Route,
+	expectedVersion: number,
+	doc: RouteDocument,
+	teamId: string
+): Promise<number> {
+	await dbReady();
+	return Route.sequelize!.transaction(async (transaction) => {
+		// The version test and the increment are one UPDATE, so two saves cannot both win.
+		const [claimed] = await Route.update(
+			{ version: expectedVersion + 1, name: doc.name },
+			{ where: { id: route.id, version: expectedVersion }, transaction }
+		);
+		if (claimed === 0) {
+			const current = await Route.findByPk(route.id, { transaction });
+			throw new VersionConflict(current?.version ?? route.version);
+		}
+		await writeChildren(route.id, doc, transaction);
+		await recordActivity(
+			{
+				teamId,
+				projectId: route.projectId,
+				actorId: actor.id,
+				kind: 'route.saved',
+				summary: `${actor.name} saved the route “${doc.name}” (version ${expectedVersion + 1}).`,
+				details: { routeId: route.id }
+			},
+			transaction
+		);
+		return expectedVersion + 1;
+	});
+}

@@ -1,0 +1,22 @@
+import { json } from '@sveltejs/kit';
+import { z } from 'zod';
+import type { RequestHandler } from './$types';
+import { apiHandler, readJson } from '$lib/server/api';
+import { requireProjectAction } from '$lib/server/auth/guards';
+import { routeDocumentOr422 } from '$lib/server/route-api';
+import { createRoute, listRoutes } from '$lib/server/services/routes';
+
+/** `GET /api/projects/{projectId}/routes` → `{ routes: [{ id, name, status, version, updatedAt }] }`. */
+export const GET: RequestHandler = apiHandler(async (event) => {
+	const { project } = await requireProjectAction(event, event.params.projectId, 'project.read');
+	const routes = await listRoutes(project.id);
+	return json({ routes: routes.map(({ id, name, status, version, updatedAt }) => ({ id, name, status, version, updatedAt })) });
+});
+
+/** `POST /api/projects/{projectId}/routes` (route document) → `201 { id, version }`. */
+export const POST: RequestHandler = apiHandler(async (event) => {
+	const { project, user } = await requireProjectAction(event, event.params.projectId, 'route.edit');
+	const document = routeDocumentOr422(await readJson(event, z.unknown()));
+	const route = await createRoute(user, project, document);
+	return json({ id: route.id, version: route.version }, { status: 201 });
+});

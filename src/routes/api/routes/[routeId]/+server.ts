@@ -1,0 +1,34 @@
+import { json } from '@sveltejs/kit';
+import { z } from 'zod';
+import type { RequestHandler } from './$types';
+import { apiError, apiHandler, readJson } from '$lib/server/api';
+import { requireRouteAction } from '$lib/server/auth/guards';
+import { routeDocumentOr422 } from '$lib/server/route-api';
+import { routeDocument, saveRoute, VersionConflict } from '$lib/server/services/routes';
+
+/** `GET /api/routes/{id}` → `{ id, projectId, name, status, version, document }`. */
+export const GET: RequestHandler = apiHandler(async (event) => {
+	const { route } = await requireRouteAction(event, event.params.routeId, 'project.read');
+	const document = await routeDocument(route);
+	const { id, projectId, name, status, version } = route;
+	return json({ id, projectId, name, status, version, document });
+});
+
+const saveBody = z.object({ version: z.number().int().positive(), document: z.unknown() });
+
+/** `PUT /api/routes/{id}` `{ version, document }` → `{ version }`, or 409 `version-conflict`. */
+export const PUT: RequestHandler = apiHandler(async (event) => {
+	const { route, user, project } = await requireRouteAction(event, event.params.routeId, 'route.edit');
+	const body = await readJson(event, saveBody);
+	const document = routeDocumentOr422(body.document);
+	try {
+		return json({ version: await saveRoute(user, route, body.version, document, project.teamId) });
+	} catch (caught) {
+		if (caught instanceof VersionConflict) {
+			return apiError(409, 'version-conflict', `${caught.message} Reload it, or keep your copy as a new route.`, {
+				currentVersion: caught.currentVersion
+			});
+		}
+		throw caught;
+	}
+});
