@@ -4,7 +4,7 @@ import { defineConfig } from '@playwright/test';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const PORT = Number(process.env.E2E_PORT ?? 4173);
-const dataDir = path.join(root, 'test-results/e2e-data');
+const dataDir = path.join(root, `test-results/e2e-data-${PORT}`);
 
 // Browser tests run against the built app started exactly as `npm start` starts it, on a fresh
 // database with the demo scenario, in Debian's Chromium (no browser download).
