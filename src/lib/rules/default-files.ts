@@ -1,0 +1,16 @@
+/**
+ * The bundled rule files. Static JSON imports, so Vite bundles them into the server build and
+ * tests and scripts read the same data; nothing touches the file system at runtime.
+ */
+import conditions from '../../../rules/conditions.json';
+import protectingGroups from '../../../rules/drafts/protecting-group-conditions.json';
+import reactivity from '../../../rules/reactivity.json';
+import reagents from '../../../rules/reagents.json';
+import type { RawRuleFiles } from './validate';
+
+export const DEFAULT_RULE_FILES: RawRuleFiles = {
+	conditions,
+	reagents,
+	reactivity,
+	protectingGroups
+};

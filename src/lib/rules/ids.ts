@@ -1,0 +1,118 @@
+/**
+ * The fixed vocabularies of the rule table. Other modules (perception, the check, the planner,
+ * the API) depend on these ids exactly, so they live in code where the type checker sees them;
+ * the JSON files in rules/ must use them and the loader rejects anything else.
+ */
+
+/** Condition classes, in the order the rule table lists them. */
+export const CONDITION_IDS = [
+	'acid-strong',
+	'acid-mild',
+	'lewis-acid',
+	'base-aqueous',
+	'base-amine',
+	'base-strong',
+	'nucleophile',
+	'organometallic',
+	'hydride-strong',
+	'hydride-mild',
+	'hydrogenation',
+	'dissolving-metal',
+	'oxidant-mild',
+	'oxidant-strong',
+	'oxidant-electron-transfer',
+	'periodate',
+	'fluoride',
+	'palladium-zero',
+	'soft-metal',
+	'acylating',
+	'alkylating',
+	'heat'
+] as const;
+export type ConditionId = (typeof CONDITION_IDS)[number];
+
+/** Protecting groups, by trade abbreviation (shared with src/lib/chem perception). */
+export const PROTECTING_GROUP_IDS = [
+	'TMS',
+	'TES',
+	'TBS',
+	'TIPS',
+	'TBDPS',
+	'Bn',
+	'PMB',
+	'MOM',
+	'THP',
+	'Tr',
+	'Ac',
+	'Bz',
+	'Piv',
+	'acetonide',
+	'benzylidene',
+	'dioxolane',
+	'dioxane',
+	'dithiane',
+	'dimethyl-acetal',
+	'Boc',
+	'Cbz',
+	'Fmoc',
+	'Alloc',
+	'Ts',
+	'phthalimide',
+	'methyl-ester',
+	'tBu-ester',
+	'Bn-ester',
+	'allyl-ester',
+	'TMS-alkyne',
+	'S-Tr'
+] as const;
+export type ProtectingGroupId = (typeof PROTECTING_GROUP_IDS)[number];
+
+/** Free functional groups that reactivity.json rates (rules/groups.json uses the same ids). */
+export const FREE_GROUP_IDS = [
+	'aldehyde',
+	'ketone',
+	'ester',
+	'carboxylic-acid',
+	'amide',
+	'carbamate',
+	'diol-1,2',
+	'diol-1,3',
+	'alcohol-primary',
+	'alcohol-secondary',
+	'alcohol-tertiary',
+	'phenol',
+	'amine-primary',
+	'amine-secondary',
+	'thiol',
+	'alkyne-terminal',
+	'alkene',
+	'epoxide',
+	'nitrile',
+	'acetal',
+	'silyl-ether',
+	'alkyl-halide',
+	'aryl-halide',
+	'azide',
+	'nitro',
+	'imine',
+	'sulfide',
+	'indole-nh',
+	'amine-tertiary'
+] as const;
+export type FreeGroupId = (typeof FREE_GROUP_IDS)[number];
+
+/** How a protecting group stands up to a condition class. */
+export const STABILITY_RATINGS = ['stable', 'caution', 'labile'] as const;
+export type StabilityRating = (typeof STABILITY_RATINGS)[number];
+
+/** How a free group fares under a condition class; a pair with no entry means no known problem. */
+export const REACTIVITY_RATINGS = ['reacts', 'caution'] as const;
+export type ReactivityRating = (typeof REACTIVITY_RATINGS)[number];
+
+/** What a reagents.json entry is: only `reagent` entries must bring a condition class. */
+export const REAGENT_KINDS = ['reagent', 'solvent', 'additive', 'workup'] as const;
+export type ReagentKind = (typeof REAGENT_KINDS)[number];
+
+export function isConditionId(value: unknown): value is ConditionId {
+	return typeof value === 'string' && (CONDITION_IDS as readonly string[]).includes(value);
+}

@@ -1,0 +1,72 @@
+/**
+ * A team's override layer: ratings that replace the defaults for chosen cells. It sits over the
+ * default table (see loadRuleTable) and never edits it, so a team can drop its layer at any time.
+ */
+import { z } from 'zod';
+import { formatIssue, formatZodIssues, RuleTableError } from './issues';
+import {
+	conditionIdSchema,
+	freeGroupIdSchema,
+	protectingGroupIdSchema,
+	stabilityRatingSchema
+} from './schemas';
+
+const text = z.string().trim().min(1, 'must not be empty');
+
+/**
+ * `stability` replaces a protecting group's rating under one condition class; `reactivity`
+ * replaces (or, with `none`, silences) a free group's entry. Each row says why, so the message
+ * shown beside a clash carries the team's reason and source instead of the textbook's.
+ */
+export const ruleOverridesSchema = z.strictObject({
+	name: text,
+	stability: z
+		.array(
+			z.strictObject({
+				protectingGroup: protectingGroupIdSchema,
+				condition: conditionIdSchema,
+				rating: stabilityRatingSchema,
+				reason: text,
+				source: text.optional()
+			})
+		)
+		.default([]),
+	reactivity: z
+		.array(
+			z.strictObject({
+				group: freeGroupIdSchema,
+				condition: conditionIdSchema,
+				rating: z.enum(['reacts', 'caution', 'none'], {
+					error: (issue) =>
+						`unknown reactivity rating ${JSON.stringify(issue.input)} (valid: reacts, caution, none)`
+				}),
+				reason: text,
+				source: text.optional()
+			})
+		)
+		.default([])
+});
+
+export type RuleOverridesInput = z.input<typeof ruleOverridesSchema>;
+export type RuleOverrides = z.output<typeof ruleOverridesSchema>;
+
+/** Validates a layer, e.g. `parseOverrides({ name: 'Team Kestrel', stability: [...] })`. */
+export function parseOverrides(input: unknown): RuleOverrides {
+	const label = 'overrides';
+	const result = ruleOverridesSchema.safeParse(input);
+	if (!result.success) throw new RuleTableError(formatZodIssues(label, result.error));
+	const problems: string[] = [];
+	const seen = new Set<string>();
+	result.data.stability.forEach((row, index) => {
+		const key = `stability ${row.protectingGroup} × ${row.condition}`;
+		if (seen.has(key)) problems.push(formatIssue(label, ['stability', index], `duplicate ${key}`));
+		seen.add(key);
+	});
+	result.data.reactivity.forEach((row, index) => {
+		const key = `reactivity ${row.group} × ${row.condition}`;
+		if (seen.has(key)) problems.push(formatIssue(label, ['reactivity', index], `duplicate ${key}`));
+		seen.add(key);
+	});
+	if (problems.length > 0) throw new RuleTableError(problems);
+	return result.data;
+}

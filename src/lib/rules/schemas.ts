@@ -1,0 +1,128 @@
+/**
+ * zod schemas for the rule-table files in rules/. Each enum reports the bad value and the valid
+ * ones, so a load error reads as a fix, not a puzzle. Types come from these schemas (z.output).
+ */
+import { z } from 'zod';
+import {
+	CONDITION_IDS,
+	FREE_GROUP_IDS,
+	PROTECTING_GROUP_IDS,
+	REACTIVITY_RATINGS,
+	REAGENT_KINDS,
+	STABILITY_RATINGS
+} from './ids';
+
+/** An enum whose error names the bad value and lists the valid ones. */
+function idEnum<const T extends readonly [string, ...string[]]>(what: string, values: T) {
+	return z.enum(values, {
+		error: (issue) =>
+			issue.input === undefined
+				? `missing ${what}`
+				: `unknown ${what} ${JSON.stringify(issue.input)} (valid: ${values.join(', ')})`
+	});
+}
+
+const text = z.string().trim().min(1, 'must not be empty');
+
+export const conditionIdSchema = idEnum('condition id', CONDITION_IDS);
+export const protectingGroupIdSchema = idEnum('protecting group id', PROTECTING_GROUP_IDS);
+export const freeGroupIdSchema = idEnum('free group id', FREE_GROUP_IDS);
+export const stabilityRatingSchema = z.enum(STABILITY_RATINGS, {
+	error: (issue) =>
+		issue.input === undefined
+			? 'missing rating (every condition class needs one: stable, caution or labile)'
+			: `unknown rating ${JSON.stringify(issue.input)} (valid: ${STABILITY_RATINGS.join(', ')})`
+});
+export const reactivityRatingSchema = idEnum('reactivity rating', REACTIVITY_RATINGS);
+
+/** One row of rules/conditions.json, e.g. `{ id: 'fluoride', label: 'Fluoride', … }`. */
+export const conditionSchema = z.strictObject({
+	id: conditionIdSchema,
+	label: text,
+	description: text,
+	examples: z.array(text).min(1)
+});
+export const conditionsFileSchema = z.array(conditionSchema);
+
+/**
+ * One row of rules/reagents.json. `conditions` are the classes the reagent brings in its typical
+ * use (DHP implies the acid catalyst it is always used with). Solvents, additives and work-up
+ * materials may bring none; they are listed so that the classifier recognises them and shows
+ * their hazards. `exactCase` lists synonyms that match only as written ("CAN" but not "can").
+ */
+export const reagentSchema = z
+	.strictObject({
+		name: text,
+		synonyms: z.array(text),
+		conditions: z.array(conditionIdSchema),
+		kind: z.enum(REAGENT_KINDS).default('reagent'),
+		exactCase: z.array(text).optional(),
+		hazard: text.optional()
+	})
+	.superRefine((reagent, ctx) => {
+		if (reagent.kind === 'reagent' && reagent.conditions.length === 0) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['conditions'],
+				message:
+					'a reagent must bring at least one condition class (or set kind to solvent, additive or workup)'
+			});
+		}
+		for (const [i, spelling] of (reagent.exactCase ?? []).entries()) {
+			if (spelling !== reagent.name && !reagent.synonyms.includes(spelling)) {
+				ctx.addIssue({
+					code: 'custom',
+					path: ['exactCase', i],
+					message: `"${spelling}" is neither the name nor a synonym of this reagent`
+				});
+			}
+		}
+	});
+export const reagentsFileSchema = z.array(reagentSchema);
+
+/** One row of rules/reactivity.json: a free group under a condition class. */
+export const reactivitySchema = z.strictObject({
+	group: freeGroupIdSchema,
+	condition: conditionIdSchema,
+	rating: reactivityRatingSchema,
+	reason: text,
+	source: text
+});
+export const reactivityFileSchema = z.array(reactivitySchema);
+
+/** A way to install or remove a protecting group: typical reagents and the classes they bring. */
+export const methodSchema = z.strictObject({
+	reagents: z.array(text).min(1),
+	conditions: z.array(conditionIdSchema).min(1),
+	note: text.optional()
+});
+
+/**
+ * The condition half of a protecting-group row (rules/drafts/protecting-group-conditions.json):
+ * `install` is the usual method; `remove` lists alternative methods; `stability` rates EVERY
+ * condition class (a missing cell is a load error). The perception half (protects, SMARTS, …)
+ * joins it with `protectingGroupConditionsSchema.extend({ … })` when the two files merge.
+ */
+export const protectingGroupConditionsSchema = z.strictObject({
+	id: protectingGroupIdSchema,
+	install: methodSchema,
+	remove: z.array(methodSchema).min(1),
+	stability: z.record(conditionIdSchema, stabilityRatingSchema, {
+		// zod reports extra keys of an enum-keyed record as `unrecognized_keys` (not in its types).
+		error: (issue) => {
+			const keys = (issue as { keys?: unknown }).keys;
+			return Array.isArray(keys)
+				? `unknown condition id ${keys.map((key) => JSON.stringify(key)).join(', ')} (valid: ${CONDITION_IDS.join(', ')})`
+				: 'must be an object of condition id → rating';
+		}
+	}),
+	notes: z.array(text),
+	source: text
+});
+export const protectingGroupConditionsFileSchema = z.array(protectingGroupConditionsSchema);
+
+export type Condition = z.output<typeof conditionSchema>;
+export type Reagent = z.output<typeof reagentSchema>;
+export type ReactivityEntry = z.output<typeof reactivitySchema>;
+export type Method = z.output<typeof methodSchema>;
+export type ProtectingGroupConditions = z.output<typeof protectingGroupConditionsSchema>;

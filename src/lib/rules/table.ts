@@ -1,0 +1,164 @@
+/**
+ * The rule table as the engine reads it: validated defaults plus an optional override layer.
+ *
+ * Layering: `loadRuleTable(overrides)` validates the bundled defaults once, then wraps them with
+ * one team's layer. `stabilityOf` and `reactivityOf` look in the layer first and fall back to the
+ * defaults; the answer says which layer it came from, so a clash message can credit the team's
+ * reason instead of the textbook's. The defaults are never modified, and tables are frozen.
+ */
+import { compileClassifier, type ReagentClassifier } from './classify';
+import { DEFAULT_RULE_FILES } from './default-files';
+import type {
+	ConditionId,
+	FreeGroupId,
+	ProtectingGroupId,
+	ReactivityRating,
+	StabilityRating
+} from './ids';
+import { parseOverrides, type RuleOverrides, type RuleOverridesInput } from './overrides';
+import type { Condition, ProtectingGroupConditions, ReactivityEntry, Reagent } from './schemas';
+import { parseRuleFiles, type RuleData } from './validate';
+
+export type RuleLayer = 'default' | 'override';
+
+export interface StabilityAnswer {
+	rating: StabilityRating;
+	source: string;
+	/** The override's reason; default ratings carry their reasons in the row's notes. */
+	reason?: string;
+	layer: RuleLayer;
+}
+
+export interface ReactivityAnswer {
+	rating: ReactivityRating;
+	reason: string;
+	source: string;
+	layer: RuleLayer;
+}
+
+export interface RuleTable {
+	readonly conditions: readonly Condition[];
+	readonly reagents: readonly Reagent[];
+	readonly reactivity: readonly ReactivityEntry[];
+	readonly protectingGroups: readonly ProtectingGroupConditions[];
+	readonly overrides: RuleOverrides | null;
+	condition(id: ConditionId): Condition;
+	protectingGroup(id: ProtectingGroupId): ProtectingGroupConditions;
+	stabilityOf(pg: ProtectingGroupId, condition: ConditionId): StabilityAnswer;
+	/** `undefined` means no known problem (or a team override of `none`). */
+	reactivityOf(group: FreeGroupId, condition: ConditionId): ReactivityAnswer | undefined;
+	conditionsForReagents: ReagentClassifier;
+}
+
+function deepFreeze<T>(value: T): T {
+	if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+		Object.freeze(value);
+		for (const inner of Object.values(value)) deepFreeze(inner);
+	}
+	return value;
+}
+
+interface Base {
+	data: RuleData;
+	classify: ReagentClassifier;
+	conditions: Map<ConditionId, Condition>;
+	pgs: Map<ProtectingGroupId, ProtectingGroupConditions>;
+	reactivity: Map<string, ReactivityEntry>;
+}
+
+const pairKey = (a: string, b: ConditionId) => `${a}\u0000${b}`;
+
+function prepare(data: RuleData): Base {
+	deepFreeze(data);
+	return {
+		data,
+		classify: compileClassifier(data.reagents),
+		conditions: new Map(data.conditions.map((c) => [c.id, c])),
+		pgs: new Map(data.protectingGroups.map((pg) => [pg.id, pg])),
+		reactivity: new Map(data.reactivity.map((r) => [pairKey(r.group, r.condition), r]))
+	};
+}
+
+function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
+	const stabilityOverride = new Map(
+		(overrides?.stability ?? []).map((row) => [pairKey(row.protectingGroup, row.condition), row])
+	);
+	const reactivityOverride = new Map(
+		(overrides?.reactivity ?? []).map((row) => [pairKey(row.group, row.condition), row])
+	);
+	const overrideSource = (source: string | undefined) =>
+		source ?? `${overrides?.name} (team override)`;
+
+	const table: RuleTable = {
+		conditions: base.data.conditions,
+		reagents: base.data.reagents,
+		reactivity: base.data.reactivity,
+		protectingGroups: base.data.protectingGroups,
+		overrides,
+		condition(id) {
+			const found = base.conditions.get(id);
+			if (!found) throw new Error(`unknown condition id "${id}"`);
+			return found;
+		},
+		protectingGroup(id) {
+			const found = base.pgs.get(id);
+			if (!found) throw new Error(`unknown protecting group id "${id}"`);
+			return found;
+		},
+		stabilityOf(pg, condition) {
+			const override = stabilityOverride.get(pairKey(pg, condition));
+			if (override) {
+				return {
+					rating: override.rating,
+					source: overrideSource(override.source),
+					reason: override.reason,
+					layer: 'override'
+				};
+			}
+			const row = table.protectingGroup(pg);
+			return { rating: row.stability[condition], source: row.source, layer: 'default' };
+		},
+		reactivityOf(group, condition) {
+			const override = reactivityOverride.get(pairKey(group, condition));
+			if (override) {
+				if (override.rating === 'none') return undefined;
+				return {
+					rating: override.rating,
+					reason: override.reason,
+					source: overrideSource(override.source),
+					layer: 'override'
+				};
+			}
+			const entry = base.reactivity.get(pairKey(group, condition));
+			return (
+				entry && {
+					rating: entry.rating,
+					reason: entry.reason,
+					source: entry.source,
+					layer: 'default'
+				}
+			);
+		},
+		conditionsForReagents: base.classify
+	};
+	return deepFreeze(table);
+}
+
+let defaults: Base | undefined;
+
+/** Builds a table from already-read files, e.g. `buildRuleTable({ conditions, reagents, … })` in a test. */
+export function buildRuleTable(
+	raw: Parameters<typeof parseRuleFiles>[0],
+	overrides?: RuleOverridesInput
+): RuleTable {
+	return layer(
+		prepare(parseRuleFiles(raw)),
+		overrides === undefined ? null : parseOverrides(overrides)
+	);
+}
+
+/** The bundled table, optionally under a team's layer, e.g. `loadRuleTable({ name: 'Team Kestrel', stability: [] })`. */
+export function loadRuleTable(overrides?: RuleOverridesInput): RuleTable {
+	defaults ??= prepare(parseRuleFiles(DEFAULT_RULE_FILES));
+	return layer(defaults, overrides === undefined ? null : parseOverrides(overrides));
+}

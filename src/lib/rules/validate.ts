@@ -1,0 +1,162 @@
+/**
+ * Validation of the rule files as a whole: each file against its schema, then the checks that
+ * span files (every condition class defined once, every protecting group rated once, no reagent
+ * spelling claimed twice). All problems are collected and reported together.
+ */
+import type { z } from 'zod';
+import { CONDITION_IDS, PROTECTING_GROUP_IDS } from './ids';
+import { formatIssue, formatZodIssues, RuleTableError } from './issues';
+import { foldText } from './normalize';
+import {
+	conditionsFileSchema,
+	protectingGroupConditionsFileSchema,
+	reactivityFileSchema,
+	reagentsFileSchema,
+	type Condition,
+	type ProtectingGroupConditions,
+	type ReactivityEntry,
+	type Reagent
+} from './schemas';
+
+/** Where each file lives, as error messages name it. */
+export const RULE_FILES = {
+	conditions: 'rules/conditions.json',
+	reagents: 'rules/reagents.json',
+	reactivity: 'rules/reactivity.json',
+	// TODO: point at rules/protecting-groups.json once the draft is merged with the perception rows.
+	protectingGroups: 'rules/drafts/protecting-group-conditions.json'
+} as const;
+
+export type RuleFileKey = keyof typeof RULE_FILES;
+export type RawRuleFiles = Record<RuleFileKey, unknown>;
+
+export interface RuleData {
+	conditions: Condition[];
+	reagents: Reagent[];
+	reactivity: ReactivityEntry[];
+	protectingGroups: ProtectingGroupConditions[];
+}
+
+function parseFile<S extends z.ZodType>(schema: S, file: string, raw: unknown, problems: string[]) {
+	const result = schema.safeParse(raw);
+	if (result.success) return result.data as z.output<S>;
+	problems.push(...formatZodIssues(file, result.error));
+	return undefined;
+}
+
+/** Reports ids of a fixed list that a file defines twice or not at all. */
+function checkEachOnce(
+	file: string,
+	what: string,
+	expected: readonly string[],
+	ids: readonly string[],
+	problems: string[]
+) {
+	const firstIndex = new Map<string, number>();
+	ids.forEach((id, index) => {
+		if (firstIndex.has(id)) {
+			problems.push(
+				formatIssue(
+					file,
+					[index, 'id'],
+					`duplicate ${what} "${id}" (first at [${firstIndex.get(id)}])`
+				)
+			);
+		} else firstIndex.set(id, index);
+	});
+	const missing = expected.filter((id) => !firstIndex.has(id));
+	if (missing.length > 0) {
+		problems.push(
+			formatIssue(file, [], `missing ${what}: ${missing.map((id) => `"${id}"`).join(', ')}`)
+		);
+	}
+}
+
+function checkReagentSpellings(reagents: readonly Reagent[], problems: string[]) {
+	const owner = new Map<string, string>();
+	reagents.forEach((reagent, index) => {
+		const spellings: [string, PropertyKey[]][] = [
+			[reagent.name, [index, 'name']],
+			...reagent.synonyms.map((s, i): [string, PropertyKey[]] => [s, [index, 'synonyms', i]])
+		];
+		for (const [spelling, path] of spellings) {
+			const key = foldText(spelling.trim()).replace(/\s+/g, ' ');
+			const previous = owner.get(key);
+			if (previous !== undefined && previous !== reagent.name) {
+				problems.push(
+					formatIssue(
+						RULE_FILES.reagents,
+						path,
+						`"${spelling}" is already a spelling of "${previous}"`
+					)
+				);
+			} else owner.set(key, reagent.name);
+		}
+	});
+}
+
+function checkReactivityPairs(entries: readonly ReactivityEntry[], problems: string[]) {
+	const seen = new Map<string, number>();
+	entries.forEach((entry, index) => {
+		const key = `${entry.group} × ${entry.condition}`;
+		const first = seen.get(key);
+		if (first !== undefined) {
+			problems.push(
+				formatIssue(RULE_FILES.reactivity, [index], `duplicate pair ${key} (first at [${first}])`)
+			);
+		} else seen.set(key, index);
+	});
+}
+
+/** Validates raw file contents, e.g. `parseRuleFiles({ conditions, reagents, reactivity, protectingGroups })`. */
+export function parseRuleFiles(raw: RawRuleFiles): RuleData {
+	const problems: string[] = [];
+	const conditions = parseFile(
+		conditionsFileSchema,
+		RULE_FILES.conditions,
+		raw.conditions,
+		problems
+	);
+	const reagents = parseFile(reagentsFileSchema, RULE_FILES.reagents, raw.reagents, problems);
+	const reactivity = parseFile(
+		reactivityFileSchema,
+		RULE_FILES.reactivity,
+		raw.reactivity,
+		problems
+	);
+	const protectingGroups = parseFile(
+		protectingGroupConditionsFileSchema,
+		RULE_FILES.protectingGroups,
+		raw.protectingGroups,
+		problems
+	);
+
+	// Other files name condition classes through the schema's enum; this makes sure each of those
+	// ids is also defined (label, description) in conditions.json, so every reference resolves.
+	if (conditions) {
+		checkEachOnce(
+			RULE_FILES.conditions,
+			'condition class',
+			CONDITION_IDS,
+			conditions.map((c) => c.id),
+			problems
+		);
+	}
+	if (protectingGroups) {
+		const ids = protectingGroups.map((pg) => pg.id);
+		checkEachOnce(
+			RULE_FILES.protectingGroups,
+			'protecting group',
+			PROTECTING_GROUP_IDS,
+			ids,
+			problems
+		);
+	}
+	if (reagents) checkReagentSpellings(reagents, problems);
+	if (reactivity) checkReactivityPairs(reactivity, problems);
+
+	if (problems.length > 0 || !conditions || !reagents || !reactivity || !protectingGroups) {
+		throw new RuleTableError(problems);
+	}
+	return { conditions, reagents, reactivity, protectingGroups };
+}

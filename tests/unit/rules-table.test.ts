@@ -1,0 +1,116 @@
+import { describe, expect, it } from 'vitest';
+import conditionsFile from '../../rules/conditions.json';
+import {
+	CONDITION_IDS,
+	FREE_GROUP_IDS,
+	loadRuleTable,
+	PROTECTING_GROUP_IDS,
+	STABILITY_RATINGS
+} from '../../src/lib/rules';
+
+// Consistency of the bundled rule table with itself (DEVELOPERS.md, "Adding a rule").
+const table = loadRuleTable();
+
+describe('rule table: ids and coverage', () => {
+	it('defines exactly the 22 condition classes, in the fixed order', () => {
+		expect(table.conditions.map((c) => c.id)).toEqual([...CONDITION_IDS]);
+		expect(CONDITION_IDS).toHaveLength(22);
+	});
+
+	it('rates each of the 31 protecting groups once', () => {
+		expect(PROTECTING_GROUP_IDS).toHaveLength(31);
+		expect([...table.protectingGroups.map((pg) => pg.id)].sort()).toEqual(
+			[...PROTECTING_GROUP_IDS].sort()
+		);
+	});
+
+	it('rates every protecting group under every condition class', () => {
+		for (const pg of table.protectingGroups) {
+			for (const condition of CONDITION_IDS) {
+				expect(STABILITY_RATINGS, `${pg.id} × ${condition}`).toContain(pg.stability[condition]);
+			}
+		}
+	});
+
+	it('rates only known free groups, each pair once', () => {
+		const pairs = table.reactivity.map((r) => `${r.group}|${r.condition}`);
+		expect(new Set(pairs).size).toBe(pairs.length);
+		for (const entry of table.reactivity) expect(FREE_GROUP_IDS).toContain(entry.group);
+	});
+
+	it('gives every free group at least one reactivity entry', () => {
+		const rated = new Set(table.reactivity.map((r) => r.group));
+		expect(FREE_GROUP_IDS.filter((g) => !rated.has(g))).toEqual([]);
+	});
+
+	it('names a source on every protecting-group row and reactivity entry', () => {
+		for (const row of [...table.protectingGroups, ...table.reactivity]) {
+			expect(row.source).toMatch(/from memory|common practice/);
+		}
+	});
+});
+
+describe('rule table: protecting groups come off the way their rows say', () => {
+	for (const pg of table.protectingGroups) {
+		it(`${pg.id} is labile under at least one condition of each of its removal methods`, () => {
+			for (const method of pg.remove) {
+				const labile = method.conditions.filter((c) => pg.stability[c] === 'labile');
+				expect(labile, `${pg.id}: ${method.reagents.join(' | ')}`).not.toEqual([]);
+			}
+		});
+
+		it(`${pg.id}: its install and removal reagents read as the conditions listed`, () => {
+			for (const method of [pg.install, ...pg.remove]) {
+				for (const reagents of method.reagents) {
+					const read = table.conditionsForReagents(reagents);
+					expect(read.unknown, reagents).toEqual([]);
+					for (const c of method.conditions) expect(read.conditions, reagents).toContain(c);
+				}
+			}
+		});
+	}
+});
+
+describe('rule table: reagents', () => {
+	it('lists at least 150 reagents, at least 40 of them with hazard notes', () => {
+		expect(table.reagents.length).toBeGreaterThanOrEqual(150);
+		expect(table.reagents.filter((r) => r.hazard).length).toBeGreaterThanOrEqual(40);
+	});
+
+	it('maps every reagent to known condition classes, and every true reagent to at least one', () => {
+		for (const reagent of table.reagents) {
+			for (const c of reagent.conditions) expect(CONDITION_IDS).toContain(c);
+			if (reagent.kind === 'reagent')
+				expect(reagent.conditions.length, reagent.name).toBeGreaterThan(0);
+		}
+	});
+
+	it('ends every hazard note by deferring to the SDS and institutional safety rules', () => {
+		for (const reagent of table.reagents) {
+			if (reagent.hazard)
+				expect(reagent.hazard, reagent.name).toMatch(
+					/SDS and follow your institution’s safety rules/
+				);
+		}
+	});
+
+	it('recognises each of its own spellings as that reagent', () => {
+		for (const reagent of table.reagents) {
+			for (const spelling of [reagent.name, ...reagent.synonyms]) {
+				const read = table.conditionsForReagents(spelling);
+				expect(
+					read.matched.map((m) => m.reagent),
+					spelling
+				).toEqual([reagent.name]);
+			}
+		}
+	});
+
+	it('classifies every example of a condition class as that class', () => {
+		for (const condition of conditionsFile) {
+			for (const example of condition.examples) {
+				expect(table.conditionsForReagents(example).conditions, example).toContain(condition.id);
+			}
+		}
+	});
+});
