@@ -1,0 +1,55 @@
+// Perception results kept for reuse. Two keys, two uses:
+//   - the canonical key (ID code), where it is computed anyway (the API returns it): the same
+//     molecule written another way hits, and atom indices are translated through the canonical
+//     numbering, so each caller gets indices of its own input;
+//   - the exact text, for callers that re-perceive the same intermediates again and again (the
+//     route map re-checks every structure on each edit): a hit costs a map lookup, with no parse.
+
+import type { Molecule } from 'openchemlib';
+import { LruCache } from './cache';
+import { readStructure } from './parse';
+import { perceive, type Perception } from './perceive';
+import type { CanonicalForm } from './properties';
+
+const CAPACITY = 2000;
+const byCanonicalKey = new LruCache<string, Perception>(CAPACITY);
+const byText = new LruCache<string, Perception>(CAPACITY);
+
+/** Perception via the canonical-key cache, e.g. `perceiveWithKey(mol, canonicalForm(mol))`. */
+export function perceiveWithKey(molecule: Molecule, form: CanonicalForm): Perception {
+	const stored = byCanonicalKey.get(form.key);
+	if (stored) return renumber(stored, form.fromCanonical);
+	const fresh = perceive(molecule);
+	byCanonicalKey.set(form.key, renumber(fresh, form.toCanonical));
+	return fresh;
+}
+
+/** Perception of structure text via the text cache (parsed without coordinates), e.g. `perceiveText('OCCO')`. */
+export function perceiveText(text: string): Perception {
+	const stored = byText.get(text);
+	if (stored) return stored;
+	const fresh = perceive(readStructure(text).molecule);
+	byText.set(text, fresh);
+	return fresh;
+}
+
+/** Empties both caches (tests and benchmarks measure cold runs with it), e.g. `clearPerceptionCache()`. */
+export function clearPerceptionCache(): void {
+	byCanonicalKey.clear();
+	byText.clear();
+}
+
+function renumber(perception: Perception, map: number[]): Perception {
+	const to = (atom: number) => map[atom]!;
+	const sorted = (atoms: number[]) => atoms.map(to).sort((a, b) => a - b);
+	return {
+		groups: perception.groups.map((g) => ({ id: g.id, atoms: sorted(g.atoms), key: to(g.key) })),
+		protectingGroups: perception.protectingGroups.map((pg) => ({
+			id: pg.id,
+			atoms: sorted(pg.atoms),
+			masks: pg.masks,
+			maskedAtom: to(pg.maskedAtom),
+			maskedAtoms: pg.maskedAtoms.map(to)
+		}))
+	};
+}
