@@ -7,7 +7,8 @@ import { fileURLToPath } from 'node:url';
 import path from 'node:path';
 
 const BENCHMARKS = [
-	{ name: 'perception', file: 'perception.ts', about: 'groups and PGs of a 30-intermediate route, ours vs RDKit-WASM' }
+	{ name: 'perception', file: 'perception.ts', about: 'groups and PGs of a 30-intermediate route, ours vs RDKit-WASM' },
+	{ name: 'check', file: 'check-route.ts', about: 'the clash check over a 30-step route, cold and warm' }
 ];
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));

@@ -1,0 +1,91 @@
+// The clash check for one step: which of the step's condition classes would strip a protecting
+// group that the step keeps, or attack a free group that is meant to stand by.
+
+import { isStructureError } from '../../chem/errors';
+import { readStructure } from '../../chem/parse';
+import { transformation, type Site } from './transformation';
+import { protectingGroupMessage, freeGroupMessage, type Origin } from './messages';
+import {
+	StepStructureError,
+	UnknownConditionError,
+	type CheckRules,
+	type Clash,
+	type StepCheck,
+	type StepToCheck
+} from './types';
+
+/**
+ * Checks one step, e.g. `{ substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCC(C)(C)O',
+ * reagents: 'MeMgBr, THF' }` → a `clash` that the organometallic attacks the free ketone.
+ */
+export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
+	const explicit = step.conditions ?? [];
+	const unknown = explicit.filter((id) => !rules.conditionIds.includes(id));
+	if (unknown.length) throw new UnknownConditionError(step.id, unknown, rules.conditionIds);
+	const classified = step.reagents?.trim() ? rules.classify(step.reagents) : { conditions: [], matched: [], hazards: [] };
+	const conditions = [...new Set([...explicit, ...classified.conditions])];
+
+	const origins = new Map<string, Origin>();
+	for (const id of conditions) {
+		const reagents = classified.matched.filter((m) => m.conditions.includes(id)).map((m) => m.reagent);
+		origins.set(id, { reagents: [...new Set(reagents)], explicit: explicit.includes(id) });
+	}
+
+	const substrates = Array.isArray(step.substrate) ? step.substrate : [step.substrate];
+	const change = readTransformation(step.id, substrates, step.product);
+	const clashes: Clash[] = [];
+	for (const condition of conditions) {
+		const origin = origins.get(condition)!;
+		for (const pg of change.protectingGroups.filter(standsBy)) {
+			const answer = rules.stability(pg.id, condition);
+			if (answer.rating === 'stable') continue;
+			clashes.push({
+				severity: answer.rating === 'labile' ? 'clash' : 'caution',
+				kind: 'removes-protecting-group',
+				subject: pg.id,
+				condition,
+				atoms: pg.atoms,
+				message: protectingGroupMessage(rules, pg.id, condition, { ...answer, rating: answer.rating }, origin)
+			});
+		}
+		for (const group of change.freeGroups.filter(standsBy)) {
+			const rule = rules.reactivity(group.id, condition);
+			if (!rule) continue;
+			clashes.push({
+				severity: rule.rating === 'reacts' ? 'clash' : 'caution',
+				kind: 'attacks-free-group',
+				subject: group.id,
+				condition,
+				atoms: group.atoms,
+				message: freeGroupMessage(rules, group.id, condition, rule, origin)
+			});
+		}
+	}
+	clashes.sort((a, b) => (a.severity === b.severity ? 0 : a.severity === 'clash' ? -1 : 1));
+	return { id: step.id, conditions, hazards: classified.hazards, clashes };
+}
+
+const standsBy = (site: Site) => site.survives;
+
+function readTransformation(stepId: string, substrates: string[], product: string) {
+	for (const [role, texts] of [['substrate', substrates], ['product', [product]]] as const) {
+		if (texts.length === 0 || texts.some((t) => !t.trim())) throw new StepStructureError(stepId, role, 'it is empty.');
+	}
+	try {
+		return transformation(substrates, product);
+	} catch (caught) {
+		if (!isStructureError(caught)) throw caught;
+		// Tell which side failed: the substrate texts are read first.
+		const role = substrates.some((text) => failsToRead(text)) ? 'substrate' : 'product';
+		throw new StepStructureError(stepId, role, caught.message);
+	}
+}
+
+function failsToRead(text: string): boolean {
+	try {
+		readStructure(text);
+		return false;
+	} catch {
+		return true;
+	}
+}

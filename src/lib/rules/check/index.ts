@@ -1,0 +1,3 @@
+export { checkStep } from './check-step';
+export { clearTransformationCache, transformation, type Transformation } from './transformation';
+export * from './types';

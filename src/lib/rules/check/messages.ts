@@ -1,0 +1,46 @@
+// Plain-language clash messages: the group, the condition class, the reagent that brought it
+// in, the reason and the source, in one or two sentences a reviewer can act on.
+
+import type { CheckRules } from './types';
+
+export type Origin = { reagents: string[]; explicit: boolean };
+
+function broughtBy(origin: Origin, conditionLabel: string): string {
+	if (origin.reagents.length) return `${list(origin.reagents)} (${conditionLabel})`;
+	return `The step's ${conditionLabel} conditions`;
+}
+
+function list(items: string[]): string {
+	return items.length <= 1 ? (items[0] ?? '') : `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`;
+}
+
+/** E.g. "TBAF (fluoride) would remove the TBS group (tert-butyldimethylsilyl ether), which this step keeps. …" */
+export function protectingGroupMessage(
+	rules: CheckRules,
+	pgId: string,
+	condition: string,
+	answer: { rating: 'caution' | 'labile'; source: string; reason?: string },
+	origin: Origin
+): string {
+	const label = rules.conditionLabel(condition);
+	const verb = answer.rating === 'labile' ? 'would remove' : 'may partly remove';
+	const why = answer.reason ? stripStop(answer.reason) : `${pgId} is rated ${answer.rating} under ${label.toLowerCase()} conditions`;
+	return `${broughtBy(origin, label)} ${verb} the ${pgId} group (${rules.protectingGroupLabel(pgId)}), which this step keeps: ${why}. Source: ${answer.source}.`;
+}
+
+/** E.g. "MeMgBr (organometallic) attacks the free ketone, which this step leaves alone: …" */
+export function freeGroupMessage(
+	rules: CheckRules,
+	groupId: string,
+	condition: string,
+	rule: { rating: 'reacts' | 'caution'; reason: string; source: string },
+	origin: Origin
+): string {
+	const label = rules.conditionLabel(condition);
+	const verb = rule.rating === 'reacts' ? 'attacks' : 'may attack';
+	return `${broughtBy(origin, label)} ${verb} the free ${rules.groupLabel(groupId)}, which this step leaves alone: ${stripStop(rule.reason)}. Source: ${rule.source}.`;
+}
+
+function stripStop(text: string): string {
+	return text.trim().replace(/\.$/, '');
+}

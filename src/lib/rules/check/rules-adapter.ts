@@ -1,0 +1,31 @@
+// The rule table (src/lib/rules) and the perception table (src/lib/chem) seen through the
+// narrow `CheckRules` view the check reads.
+
+import { perceptionRules } from '../../chem/patterns';
+import type { ConditionId, FreeGroupId, ProtectingGroupId } from '../ids';
+import { loadRuleTable, type RuleTable } from '../table';
+import type { CheckRules } from './types';
+
+/** The check's view of a rule table (the defaults, or a team's layered table). */
+export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
+	const perception = perceptionRules();
+	const groupLabels = new Map(perception.groups.map((g) => [g.id, g.label]));
+	const pgLabels = new Map(perception.protectingGroups.map((pg) => [pg.id, pg.label]));
+	const conditionIds = table.conditions.map((c) => c.id);
+	return {
+		conditionIds,
+		conditionLabel: (id) => table.condition(id as ConditionId).label,
+		stability: (pg, condition) => table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId),
+		protectingGroupLabel: (pg) => pgLabels.get(pg) ?? pg,
+		reactivity: (group, condition) => {
+			// Perception may know groups the reactivity table has no row for: no row, no problem known.
+			const answer = table.reactivityOf(group as FreeGroupId, condition as ConditionId);
+			return answer ? { rating: answer.rating, reason: answer.reason, source: answer.source } : null;
+		},
+		groupLabel: (group) => (groupLabels.get(group) ?? group).toLowerCase(),
+		classify: (text) => {
+			const result = table.conditionsForReagents(text);
+			return { conditions: result.conditions, matched: result.matched, hazards: result.hazards };
+		}
+	};
+}

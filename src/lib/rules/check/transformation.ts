@@ -1,0 +1,85 @@
+// What a step does to its substrate, independent of its conditions: which protecting groups
+// and free groups survive unchanged into the product (bystanders) and which change (the
+// intended reaction sites). Cached by structure text, since a route is re-checked on every edit.
+
+import type { Molecule } from 'openchemlib';
+import { mapAtoms, type AtomMap } from '../../chem/atom-map';
+import { LruCache } from '../../chem/cache';
+import { readStructure } from '../../chem/parse';
+import { perceive, type Perception } from '../../chem/perceive';
+import { perceiveText } from '../../chem/perception-cache';
+
+export type Site = { id: string; atoms: number[]; survives: boolean };
+export type Transformation = { protectingGroups: Site[]; freeGroups: Site[]; mapped: boolean };
+
+const cache = new LruCache<string, Transformation>(1000);
+
+/** Joins several substrate texts into one molecule; atom indices follow the order given. */
+export function combinedMolecule(texts: string[]): Molecule {
+	const [first, ...rest] = texts.map((text) => readStructure(text).molecule);
+	for (const other of rest) first!.addMolecule(other);
+	return first!;
+}
+
+/** Survival of every PG and free group of the substrate, e.g. a ketone left by a Grignard on an ester survives. */
+export function transformation(substrates: string[], product: string): Transformation {
+	const key = `${substrates.join('\u0000')}\u0001${product}`;
+	const stored = cache.get(key);
+	if (stored) return stored;
+	const from = combinedMolecule(substrates);
+	const to = readStructure(product).molecule;
+	// The intermediates of a route recur as substrate and product, so perceive through the text cache.
+	const before = substrates.length === 1 ? perceiveText(substrates[0]!) : perceive(from);
+	const after = perceiveText(product);
+	// Counting decides most steps: a group id that keeps its count survives, one that vanishes
+	// changed. Only when some but not all instances of an id vanish must the atoms be mapped
+	// (the maximum common substructure is the slow part) to tell which one reacted.
+	const map = ambiguous(before, after) ? mapAtoms(from, to) : null;
+	const result = compare(before, after, map);
+	cache.set(key, result);
+	return result;
+}
+
+function ambiguous(before: Perception, after: Perception): boolean {
+	const counts = (sites: { id: string }[]) => {
+		const tally = new Map<string, number>();
+		for (const site of sites) tally.set(site.id, (tally.get(site.id) ?? 0) + 1);
+		return tally;
+	};
+	const pairs: [Map<string, number>, Map<string, number>][] = [
+		[counts(before.protectingGroups), counts(after.protectingGroups)],
+		[counts(before.groups), counts(after.groups)]
+	];
+	return pairs.some(([was, now]) => [...was].some(([id, n]) => (now.get(id) ?? 0) > 0 && (now.get(id) ?? 0) < n));
+}
+
+function compare(before: Perception, after: Perception, map: AtomMap | null): Transformation {
+	// A group whose key atom sits inside a protecting group is masked, not free.
+	const covered = new Set(before.protectingGroups.flatMap((pg) => [...pg.atoms, ...pg.maskedAtoms]));
+	const free = before.groups.filter((g) => !covered.has(g.key));
+	const survives = (id: string, atoms: number[], productSites: { id: string; atoms: number[] }[], countBefore: number) => {
+		if (!map) return productSites.filter((s) => s.id === id).length >= countBefore;
+		const mapped = atoms.map((a) => map.get(a));
+		if (mapped.some((a) => a === undefined)) return false;
+		const wanted = [...(mapped as number[])].sort((a, b) => a - b).join(',');
+		return productSites.some((s) => s.id === id && [...s.atoms].sort((a, b) => a - b).join(',') === wanted);
+	};
+	const count = (sites: { id: string }[], id: string) => sites.filter((s) => s.id === id).length;
+	return {
+		mapped: map !== null,
+		protectingGroups: before.protectingGroups.map((pg) => ({
+			id: pg.id,
+			atoms: pg.atoms,
+			survives: survives(pg.id, pg.atoms, after.protectingGroups, count(before.protectingGroups, pg.id))
+		})),
+		freeGroups: free.map((g) => ({
+			id: g.id,
+			atoms: g.atoms,
+			survives: survives(g.id, g.atoms, after.groups, count(free, g.id))
+		}))
+	};
+}
+
+export function clearTransformationCache(): void {
+	cache.clear();
+}

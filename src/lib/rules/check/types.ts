@@ -1,0 +1,62 @@
+// The clash check's vocabulary. Kept free of the rule table's file formats: `CheckRules` is
+// the narrow view of the table the check needs, so a team's override layer can sit behind it.
+
+export type Severity = 'clash' | 'caution';
+export type ClashKind = 'removes-protecting-group' | 'attacks-free-group';
+
+export type Clash = {
+	severity: Severity;
+	kind: ClashKind;
+	/** The protecting group id (e.g. `TBS`) or free group id (e.g. `ketone`). */
+	subject: string;
+	condition: string;
+	/** Atom indices in the step's substrate (convergent steps: the substrates in `from` order). */
+	atoms: number[];
+	message: string;
+};
+
+export type Hazard = { reagent: string; note: string };
+
+export type StepToCheck = {
+	id: string;
+	/** One structure text, or several for a convergent step (SMILES may also be `.`-joined). */
+	substrate: string | string[];
+	product: string;
+	conditions?: string[];
+	reagents?: string;
+};
+
+export type StepCheck = { id: string; conditions: string[]; hazards: Hazard[]; clashes: Clash[] };
+
+export type ReagentMatch = { reagent: string; conditions: string[] };
+
+/** What the check reads from the rule table. */
+export type CheckRules = {
+	conditionIds: readonly string[];
+	conditionLabel(conditionId: string): string;
+	stability(pgId: string, conditionId: string): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string };
+	protectingGroupLabel(pgId: string): string;
+	reactivity(groupId: string, conditionId: string): { rating: 'reacts' | 'caution'; reason: string; source: string } | null;
+	groupLabel(groupId: string): string;
+	classify(reagents: string): { conditions: string[]; matched: ReagentMatch[]; hazards: Hazard[] };
+};
+
+export class UnknownConditionError extends Error {
+	constructor(
+		readonly stepId: string,
+		readonly unknown: string[],
+		valid: readonly string[]
+	) {
+		super(`Step "${stepId}" names unknown condition ${unknown.map((u) => `"${u}"`).join(', ')}; valid ids are: ${valid.join(', ')}.`);
+	}
+}
+
+export class StepStructureError extends Error {
+	constructor(
+		readonly stepId: string,
+		readonly role: 'substrate' | 'product',
+		detail: string
+	) {
+		super(`Step "${stepId}": the ${role} cannot be read — ${detail}`);
+	}
+}

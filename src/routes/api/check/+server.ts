@@ -1,0 +1,36 @@
+import { error, json } from '@sveltejs/kit';
+import { z } from 'zod';
+import type { RequestHandler } from './$types';
+import { apiHandler, readJson } from '$lib/server/api';
+import { requireUser } from '$lib/server/auth/guards';
+import { checkSteps } from '$lib/server/services/check';
+import { StepStructureError, UnknownConditionError } from '$lib/rules/check';
+
+const MAX_STRUCTURE = 1024 * 1024;
+const checkBody = z.object({
+	steps: z
+		.array(
+			z.object({
+				id: z.string().min(1).max(64),
+				substrate: z.string().max(MAX_STRUCTURE),
+				product: z.string().max(MAX_STRUCTURE),
+				conditions: z.array(z.string().max(64)).max(30).optional(),
+				reagents: z.string().max(2000).optional()
+			})
+		)
+		.min(1, 'Send at least one step.')
+		.max(200, 'Send at most 200 steps at a time.')
+});
+
+/** `POST /api/check` `{ steps: [{ id, substrate, product, conditions?, reagents? }] }` → `{ steps: [...] }`. */
+export const POST: RequestHandler = apiHandler(async (event) => {
+	requireUser(event);
+	const { steps } = await readJson(event, checkBody);
+	try {
+		return json({ steps: checkSteps(steps) });
+	} catch (caught) {
+		if (caught instanceof UnknownConditionError) error(422, { code: 'unknown_condition', message: caught.message });
+		if (caught instanceof StepStructureError) error(422, { code: 'invalid_structure', message: caught.message });
+		throw caught;
+	}
+});
