@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import conditions from '../../rules/conditions.json';
-import protectingGroups from '../../rules/drafts/protecting-group-conditions.json';
+import protectingGroups from '../../rules/protecting-groups.json';
 import reactivity from '../../rules/reactivity.json';
 import reagents from '../../rules/reagents.json';
 import {
@@ -53,7 +53,7 @@ describe('rule-table loader: error messages name file, path and reason', () => {
 		const rows = raw.protectingGroups as { stability: Record<string, string> }[];
 		delete rows[2]!.stability.fluoride;
 		expect(problemsOf(raw)).toEqual([
-			'rules/drafts/protecting-group-conditions.json: [2].stability.fluoride: missing rating (every condition class needs one: stable, caution or labile)'
+			'rules/protecting-groups.json: [2].stability.fluoride: missing rating (every condition class needs one: stable, caution or labile)'
 		]);
 	});
 
@@ -63,7 +63,7 @@ describe('rule-table loader: error messages name file, path and reason', () => {
 		rows[0]!.stability['acid-weird'] = 'stable';
 		const [problem] = problemsOf(raw);
 		expect(problem).toMatch(
-			/^rules\/drafts\/protecting-group-conditions\.json: \[0\]\.stability: unknown condition id "acid-weird"/
+			/^rules\/protecting-groups\.json: \[0\]\.stability: unknown condition id "acid-weird"/
 		);
 	});
 
@@ -73,7 +73,7 @@ describe('rule-table loader: error messages name file, path and reason', () => {
 		rows[4]!.id = 'TBDMS';
 		const problems = problemsOf(raw);
 		expect(problems[0]).toMatch(
-			/^rules\/drafts\/protecting-group-conditions\.json: \[4\]\.id: unknown protecting group id "TBDMS" \(valid: TMS, TES, TBS/
+			/^rules\/protecting-groups\.json: \[4\]\.id: unknown protecting group id "TBDMS" \(valid: TMS, TES, TBS/
 		);
 	});
 
@@ -82,8 +82,8 @@ describe('rule-table loader: error messages name file, path and reason', () => {
 		const rows = raw.protectingGroups as { id: string }[];
 		rows[1]!.id = 'TMS';
 		expect(problemsOf(raw)).toEqual([
-			'rules/drafts/protecting-group-conditions.json: [1].id: duplicate protecting group "TMS" (first at [0])',
-			'rules/drafts/protecting-group-conditions.json: (top level): missing protecting group: "TES"'
+			'rules/protecting-groups.json: [1].id: duplicate protecting group "TMS" (first at [0])',
+			'rules/protecting-groups.json: (top level): missing protecting group: "TES"'
 		]);
 	});
 

@@ -60,7 +60,8 @@ export const protectingGroupPatternSchema = z
 		needs: z.array(z.string()).default([]),
 		/** Higher wins when two PG matches claim the same atoms: the more specific PG gets the higher number. */
 		priority: z.number().int(),
-		source: z.string().min(1)
+		/** Where the recognition patterns come from (the row's `source` credits its ratings). */
+		patternSource: z.string().min(1)
 	})
 	.loose();
 

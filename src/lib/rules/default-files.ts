@@ -3,7 +3,7 @@
  * tests and scripts read the same data; nothing touches the file system at runtime.
  */
 import conditions from '../../../rules/conditions.json';
-import protectingGroups from '../../../rules/drafts/protecting-group-conditions.json';
+import protectingGroups from '../../../rules/protecting-groups.json';
 import reactivity from '../../../rules/reactivity.json';
 import reagents from '../../../rules/reagents.json';
 import type { RawRuleFiles } from './validate';

@@ -98,12 +98,12 @@ export const methodSchema = z.strictObject({
 });
 
 /**
- * The condition half of a protecting-group row (rules/drafts/protecting-group-conditions.json):
- * `install` is the usual method; `remove` lists alternative methods; `stability` rates EVERY
- * condition class (a missing cell is a load error). The perception half (protects, SMARTS, …)
- * joins it with `protectingGroupConditionsSchema.extend({ … })` when the two files merge.
+ * The condition half of a protecting-group row (rules/protecting-groups.json): `install` is the
+ * usual method; `remove` lists alternative methods; `stability` rates EVERY condition class (a
+ * missing cell is a load error); `source` credits the ratings. The perception half of the same
+ * row (label, protects, patterns, …) is validated by src/lib/chem/patterns.ts, hence `loose`.
  */
-export const protectingGroupConditionsSchema = z.strictObject({
+export const protectingGroupConditionsSchema = z.object({
 	id: protectingGroupIdSchema,
 	install: methodSchema,
 	remove: z.array(methodSchema).min(1),
@@ -118,7 +118,7 @@ export const protectingGroupConditionsSchema = z.strictObject({
 	}),
 	notes: z.array(text),
 	source: text
-});
+}).loose();
 export const protectingGroupConditionsFileSchema = z.array(protectingGroupConditionsSchema);
 
 export type Condition = z.output<typeof conditionSchema>;

@@ -23,8 +23,7 @@ export const RULE_FILES = {
 	conditions: 'rules/conditions.json',
 	reagents: 'rules/reagents.json',
 	reactivity: 'rules/reactivity.json',
-	// TODO: point at rules/protecting-groups.json once the draft is merged with the perception rows.
-	protectingGroups: 'rules/drafts/protecting-group-conditions.json'
+	protectingGroups: 'rules/protecting-groups.json'
 } as const;
 
 export type RuleFileKey = keyof typeof RULE_FILES;

@@ -1,0 +1,15 @@
+import { json } from '@sveltejs/kit';
+import type { RequestHandler } from './$types';
+import { apiHandler } from '$lib/server/api';
+import { requireUser } from '$lib/server/auth/guards';
+import { perceptionRules } from '$lib/chem/patterns';
+import { loadRuleTable } from '$lib/rules';
+
+/** `GET /api/rules` → `{ conditions, protectingGroups, groups }`: the rule table as loaded. */
+export const GET: RequestHandler = apiHandler(async (event) => {
+	requireUser(event);
+	const table = loadRuleTable();
+	// Compiled search patterns are openchemlib objects; the rows are what the files say.
+	const groups = perceptionRules().groups.map(({ compiled: _compiled, ...row }) => row);
+	return json({ conditions: table.conditions, protectingGroups: table.protectingGroups, groups });
+});
