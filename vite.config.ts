@@ -20,6 +20,9 @@ export default defineConfig({
 		include: ['tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts', 'src/**/*.test.ts'],
 		environment: 'node',
 		// The database tests each open their own in-memory SQLite; run files in separate workers.
-		pool: 'forks'
+		pool: 'forks',
+		// The first perception in a worker pays openchemlib's JIT warm-up (seconds on 2 busy cores);
+		// speed is measured by `npm run bench`, not by test timeouts.
+		testTimeout: 30_000
 	}
 });
