@@ -34,6 +34,14 @@ describe('steps that must not clash (orthogonal pairs)', () => {
 	it('piperidine removes Fmoc and spares Boc — the same pair the other way round (Kocienski, from memory)', () => {
 		expect(summary({ substrate: `CC(C)(C)OC(=O)NCCCCN${FMOC}`, product: 'CC(C)(C)OC(=O)NCCCCN', reagents: '20% piperidine in DMF' })).toEqual([]);
 	});
+	it('an amide coupling with HATU and DIPEA leaves Fmoc in place — the coupling step of Fmoc peptide synthesis (Kocienski, from memory)', () => {
+		const severities = check({
+			substrate: ['OC(=O)CCN' + FMOC, 'NCc1ccccc1'],
+			product: 'O=C(CCN' + FMOC + ')NCc1ccccc1',
+			reagents: 'HATU, DIPEA, DMF'
+		}).clashes.filter((c) => c.subject === 'Fmoc').map((c) => c.severity);
+		expect(severities).not.toContain('clash');
+	});
 	it('Pd(0) removes Alloc and spares Boc — Greene\'s, Alloc is cleaved by Pd(PPh3)4 with a scavenger (from memory)', () => {
 		expect(summary({ substrate: 'CC(C)(C)OC(=O)NCCCCNC(=O)OCC=C', product: 'CC(C)(C)OC(=O)NCCCCN', reagents: 'Pd(PPh3)4, morpholine, THF' })).toEqual([]);
 	});
@@ -112,6 +120,11 @@ describe('steps that must clash', () => {
 	it('aqueous acid meant for a dioxolane also removes a TMS ether (Greene\'s, TMS ethers are the most acid-labile silyl ethers, from memory)', () => {
 		expect(summary({ substrate: 'C[Si](C)(C)OCCCC1(C)OCCO1', product: 'C[Si](C)(C)OCCCC(C)=O', reagents: 'aq. HCl, acetone' })).toContain(
 			'clash removes-protecting-group TMS acid-mild'
+		);
+	});
+	it('piperidine meant for one Fmoc carbamate also removes a second one that should stay (Kocienski, from memory)', () => {
+		expect(summary({ substrate: `O=C(NCCCCN${FMOC})OCC1c2ccccc2-c2ccccc12`, product: `NCCCCN${FMOC}`, reagents: '20% piperidine in DMF' })).toContain(
+			'clash removes-protecting-group Fmoc base-amine'
 		);
 	});
 	it('Pd(0) meant for an Alloc carbamate also removes an allyl ester (Greene\'s, both are π-allyl substrates, from memory)', () => {

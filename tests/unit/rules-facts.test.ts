@@ -72,7 +72,6 @@ const STABILITY_FACTS: StabilityFact[] = [
 	['Boc', 'acid-strong', 'labile', 'Boc comes off with TFA or HCl in dioxane', CLAYDEN],
 	['Boc', 'base-amine', 'stable', 'Boc survives piperidine: the Boc/Fmoc orthogonal pair', COMMON],
 	['Boc', 'hydrogenation', 'stable', 'Boc survives hydrogenolysis that removes Cbz', WUTS],
-	['Fmoc', 'base-amine', 'labile', 'Fmoc is removed by 20% piperidine in DMF', COMMON],
 	['Fmoc', 'acid-strong', 'stable', 'Fmoc survives TFA (Fmoc/tBu peptide strategy)', COMMON],
 	['Cbz', 'hydrogenation', 'labile', 'Cbz is removed by H2 over Pd/C', CLAYDEN],
 	['Cbz', 'base-amine', 'stable', 'Cbz survives the amine bases that remove Fmoc', WUTS],
@@ -156,6 +155,14 @@ describe('textbook facts: protecting-group stability', () => {
 			expect(table.stabilityOf(pg, condition).rating).toBe(rating);
 		});
 	}
+
+	it('Fmoc is removed by piperidine, morpholine, Et2NH and DBU but sits out tertiary amines such as DIPEA (common practice of Fmoc peptide synthesis)', () => {
+		for (const reagent of ['piperidine', 'morpholine', 'Et2NH', 'DBU']) {
+			expect(table.stabilityOf('Fmoc', 'base-amine', [reagent]).rating, reagent).toBe('labile');
+		}
+		expect(table.stabilityOf('Fmoc', 'base-amine', ['DIPEA']).rating).toBe('caution');
+		expect(table.stabilityOf('Fmoc', 'base-amine', ['DIPEA', 'piperidine']).rating).toBe('labile');
+	});
 
 	it('TBDPS is rated more acid-stable than TBS under mild acid (Kocienski, 3rd ed., from memory)', () => {
 		const order: StabilityRating[] = ['labile', 'caution', 'stable'];

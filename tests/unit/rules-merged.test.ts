@@ -1,7 +1,8 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { describe, expect, it } from 'vitest';
 import { perceptionRules } from '../../src/lib/chem/patterns';
-import { CONDITION_IDS, FREE_GROUP_IDS, loadRuleTable, PROTECTING_GROUP_IDS } from '../../src/lib/rules';
+import { buildRuleTable, CONDITION_IDS, FREE_GROUP_IDS, loadRuleTable, PROTECTING_GROUP_IDS } from '../../src/lib/rules';
+import { DEFAULT_RULE_FILES } from '../../src/lib/rules/default-files';
 import { GET } from '../../src/routes/api/rules/+server';
 import { fakeEvent } from '../factories';
 
@@ -26,6 +27,21 @@ describe('one rule table for perception and the check', () => {
 			expect(row.source, pg.id).toMatch(/\w/);
 			expect(row.patternSource, pg.id).toMatch(/\w/);
 		}
+	});
+});
+
+describe('reagent-level ratings', () => {
+	const withRating = (entry: Record<string, string>) => {
+		const rows = structuredClone(DEFAULT_RULE_FILES.protectingGroups) as { id: string; reagentRatings?: unknown[] }[];
+		rows.find((r) => r.id === 'Ac')!.reagentRatings = [entry];
+		return () => buildRuleTable({ ...DEFAULT_RULE_FILES, protectingGroups: rows });
+	};
+	it('must name a reagent of rules/reagents.json that brings the condition', () => {
+		expect(withRating({ reagent: 'unobtainium', condition: 'base-amine', rating: 'labile', reason: 'x' })).toThrow(
+			/rules\/protecting-groups\.json: \[\d+\]\.reagentRatings\[0\]\.reagent: unknown reagent "unobtainium"/
+		);
+		expect(withRating({ reagent: 'piperidine', condition: 'fluoride', rating: 'labile', reason: 'x' })).toThrow(/"piperidine" does not bring fluoride/);
+		expect(withRating({ reagent: 'NH3', condition: 'base-amine', rating: 'labile', reason: 'ammonia removes acetates' })).not.toThrow();
 	});
 });
 

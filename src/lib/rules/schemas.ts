@@ -116,6 +116,13 @@ export const protectingGroupConditionsSchema = z.object({
 				: 'must be an object of condition id → rating';
 		}
 	}),
+	/**
+	 * Exceptions to a class rating for named reagents (names as in rules/reagents.json), e.g.
+	 * Fmoc is `caution` under base-amine (tertiary amines) but `labile` to piperidine.
+	 */
+	reagentRatings: z
+		.array(z.strictObject({ reagent: text, condition: conditionIdSchema, rating: stabilityRatingSchema, reason: text }))
+		.default([]),
 	notes: z.array(text),
 	source: text
 }).loose();

@@ -44,7 +44,11 @@ export interface RuleTable {
 	readonly overrides: RuleOverrides | null;
 	condition(id: ConditionId): Condition;
 	protectingGroup(id: ProtectingGroupId): ProtectingGroupConditions;
-	stabilityOf(pg: ProtectingGroupId, condition: ConditionId): StabilityAnswer;
+	/**
+	 * `reagents` are the canonical names of the reagents that brought the condition; a PG row's
+	 * `reagentRatings` refine the class rating for them (the worst one applies).
+	 */
+	stabilityOf(pg: ProtectingGroupId, condition: ConditionId, reagents?: readonly string[]): StabilityAnswer;
 	/** `undefined` means no known problem (or a team override of `none`). */
 	reactivityOf(group: FreeGroupId, condition: ConditionId): ReactivityAnswer | undefined;
 	conditionsForReagents: ReagentClassifier;
@@ -67,6 +71,7 @@ interface Base {
 }
 
 const pairKey = (a: string, b: ConditionId) => `${a}\u0000${b}`;
+const SEVERITY: Record<StabilityRating, number> = { stable: 0, caution: 1, labile: 2 };
 
 function prepare(data: RuleData): Base {
 	deepFreeze(data);
@@ -105,7 +110,7 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 			if (!found) throw new Error(`unknown protecting group id "${id}"`);
 			return found;
 		},
-		stabilityOf(pg, condition) {
+		stabilityOf(pg, condition, reagents = []) {
 			const override = stabilityOverride.get(pairKey(pg, condition));
 			if (override) {
 				return {
@@ -116,7 +121,14 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 				};
 			}
 			const row = table.protectingGroup(pg);
-			return { rating: row.stability[condition], source: row.source, layer: 'default' };
+			const classAnswer: StabilityAnswer = { rating: row.stability[condition], source: row.source, layer: 'default' };
+			if (reagents.length === 0) return classAnswer;
+			// Each reagent gets its own rating where the row names it, else the class rating.
+			const answers = reagents.map((name): StabilityAnswer => {
+				const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
+				return entry ? { rating: entry.rating, reason: entry.reason, source: row.source, layer: 'default' } : classAnswer;
+			});
+			return answers.reduce((worst, next) => (SEVERITY[next.rating] > SEVERITY[worst.rating] ? next : worst));
 		},
 		reactivityOf(group, condition) {
 			const override = reactivityOverride.get(pairKey(group, condition));

@@ -152,10 +152,26 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 		);
 	}
 	if (reagents) checkReagentSpellings(reagents, problems);
+	if (reagents && protectingGroups) checkReagentRatings(protectingGroups, reagents, problems);
 	if (reactivity) checkReactivityPairs(reactivity, problems);
 
 	if (problems.length > 0 || !conditions || !reagents || !reactivity || !protectingGroups) {
 		throw new RuleTableError(problems);
 	}
 	return { conditions, reagents, reactivity, protectingGroups };
+}
+
+/** A reagent-level rating must name a known reagent that brings the condition it refines. */
+function checkReagentRatings(pgs: ProtectingGroupConditions[], reagents: Reagent[], problems: string[]) {
+	const byName = new Map(reagents.map((r) => [r.name, r]));
+	pgs.forEach((pg, index) => {
+		pg.reagentRatings.forEach((entry, i) => {
+			const reagent = byName.get(entry.reagent);
+			const where = [index, 'reagentRatings', i, 'reagent'];
+			if (!reagent) problems.push(formatIssue(RULE_FILES.protectingGroups, where, `unknown reagent "${entry.reagent}" (not a name in ${RULE_FILES.reagents})`));
+			else if (!reagent.conditions.includes(entry.condition)) {
+				problems.push(formatIssue(RULE_FILES.protectingGroups, where, `"${entry.reagent}" does not bring ${entry.condition} in ${RULE_FILES.reagents}`));
+			}
+		});
+	});
 }

@@ -37,7 +37,8 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	for (const condition of conditions) {
 		const origin = origins.get(condition)!;
 		for (const pg of change.protectingGroups.filter(standsBy)) {
-			const answer = rules.stability(pg.id, condition);
+			// Explicit condition ids carry no reagent, so the class rating applies to them as well.
+			const answer = rules.stability(pg.id, condition, origin.explicit ? [] : origin.reagents);
 			if (answer.rating === 'stable') continue;
 			clashes.push({
 				severity: answer.rating === 'labile' ? 'clash' : 'caution',

@@ -15,7 +15,7 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 	return {
 		conditionIds,
 		conditionLabel: (id) => table.condition(id as ConditionId).label,
-		stability: (pg, condition) => table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId),
+		stability: (pg, condition, reagents) => table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId, reagents),
 		protectingGroupLabel: (pg) => pgLabels.get(pg) ?? pg,
 		reactivity: (group, condition) => {
 			// Perception may know groups the reactivity table has no row for: no row, no problem known.

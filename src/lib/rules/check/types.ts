@@ -34,7 +34,8 @@ export type ReagentMatch = { reagent: string; conditions: string[] };
 export type CheckRules = {
 	conditionIds: readonly string[];
 	conditionLabel(conditionId: string): string;
-	stability(pgId: string, conditionId: string): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string };
+	/** `reagents`: canonical names of the reagents that brought the condition (may refine the rating). */
+	stability(pgId: string, conditionId: string, reagents: readonly string[]): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string };
 	protectingGroupLabel(pgId: string): string;
 	reactivity(groupId: string, conditionId: string): { rating: 'reacts' | 'caution'; reason: string; source: string } | null;
 	groupLabel(groupId: string): string;
