@@ -95,6 +95,17 @@ export async function addMember(
 	});
 }
 
+/** A membership of this team (never another team's, whatever id is posted). */
+async function membershipIn(teamId: string, membershipId: string) {
+	await dbReady();
+	const membership = await Membership.findOne({
+		where: { id: membershipId, teamId },
+		include: [{ model: User, as: 'user' }]
+	});
+	if (!membership) throw new TeamRuleError('That person is not a member of this team.');
+	return membership;
+}
+
 async function leadCount(teamId: string) {
 	return Membership.count({ where: { teamId, role: 'lead' } });
 }
@@ -105,12 +116,7 @@ export async function changeRole(
 	membershipId: string,
 	role: Role
 ): Promise<void> {
-	await dbReady();
-	const membership = await Membership.findOne({
-		where: { id: membershipId, teamId },
-		include: [{ model: User, as: 'user' }]
-	});
-	if (!membership) throw new TeamRuleError('That person is not a member of this team.');
+	const membership = await membershipIn(teamId, membershipId);
 	if (membership.role === role) return;
 	if (membership.role === 'lead' && (await leadCount(teamId)) <= 1) {
 		throw new TeamRuleError('A team needs at least one lead. Make someone else lead first.');
@@ -130,12 +136,7 @@ export async function removeMember(
 	teamId: string,
 	membershipId: string
 ): Promise<void> {
-	await dbReady();
-	const membership = await Membership.findOne({
-		where: { id: membershipId, teamId },
-		include: [{ model: User, as: 'user' }]
-	});
-	if (!membership) throw new TeamRuleError('That person is not a member of this team.');
+	const membership = await membershipIn(teamId, membershipId);
 	if (membership.role === 'lead' && (await leadCount(teamId)) <= 1) {
 		throw new TeamRuleError('This is the team’s only lead and cannot be removed.');
 	}
