@@ -22,8 +22,8 @@ export function resolveEnvironment(env = process.env) {
 		PORT: port,
 		ORIGIN: env.ORIGIN || `http://localhost:${port}`,
 		DATABASE_URL: env.DATABASE_URL || `sqlite:${path.join(dir, 'orthogon.db')}`,
-		// The API reads JSON bodies up to 2 MB and answers 413 above that (src/lib/server/api.ts).
-		BODY_SIZE_LIMIT: env.BODY_SIZE_LIMIT || '3M'
+		// JSON bodies over 2 MB get 413 from the API (src/lib/server/api.ts); route imports take files up to 5 MB.
+		BODY_SIZE_LIMIT: env.BODY_SIZE_LIMIT || '6M'
 	};
 	if (!resolved.AUTH_SECRET) resolved.AUTH_SECRET = persistentSecret(dir);
 	return resolved;

@@ -6,6 +6,8 @@ export const paths = {
 	signOut: () => '/signout',
 	projects: () => '/projects',
 	project: (projectId: string) => `/projects/${projectId}`,
+	route: (routeId: string) => `/routes/${routeId}`,
+	routeExport: (routeId: string, format: 'sdf' | 'json') => `/api/routes/${routeId}/export?format=${format}`,
 	team: (teamId: string) => `/teams/${teamId}`,
 	account: () => '/account',
 	setPassword: (token: string) => `/set-password/${token}`

@@ -152,3 +152,29 @@ export async function saveRoute(
 		return expectedVersion + 1;
 	});
 }
+
+/** Archives or restores a route; archived routes leave the project's list but stay readable. */
+export async function setRouteArchived(actor: SessionUser, route: Route, archived: boolean, teamId: string): Promise<void> {
+	await dbReady();
+	await Route.sequelize!.transaction(async (transaction) => {
+		await route.update({ archivedAt: archived ? new Date() : null }, { transaction });
+		await recordActivity(
+			{
+				teamId,
+				projectId: route.projectId,
+				actorId: actor.id,
+				kind: archived ? 'route.archived' : 'route.restored',
+				summary: `${actor.name} ${archived ? 'archived' : 'restored'} the route “${route.name}”.`,
+				details: { routeId: route.id }
+			},
+			transaction
+		);
+	});
+}
+
+/** A new draft route in the same project with a copy of the route's document. */
+export async function duplicateRoute(actor: SessionUser, project: Project, route: Route): Promise<Route> {
+	const doc = await routeDocument(route);
+	// Names are capped at 120 characters; the suffix must still fit.
+	return createRoute(actor, project, { ...doc, name: `${doc.name.slice(0, 112)} (copy)` });
+}

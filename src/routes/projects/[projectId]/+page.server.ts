@@ -1,24 +1,38 @@
-import { fail } from '@sveltejs/kit';
+import { fail, redirect, type RequestEvent } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import type { Actions, PageServerLoad } from './$types';
 import { can } from '$lib/policy';
-import { requireProjectAction } from '$lib/server/auth/guards';
+import { paths } from '$lib/paths';
+import { notFound, requireProjectAction, requireRouteAction } from '$lib/server/auth/guards';
+import { createRoute, duplicateRoute, listRoutes, setRouteArchived } from '$lib/server/services/routes';
 import { recentActivity } from '$lib/server/services/activity';
 import { getProjectSummary, setProjectArchived, updateProject } from '$lib/server/services/projects';
-import { editProjectSchema } from './schema';
+import { editProjectSchema, newRouteSchema } from './schema';
 
 export const load: PageServerLoad = async (event) => {
 	const { project, role } = await requireProjectAction(event, event.params.projectId, 'project.read');
-	const [summary, activity] = await Promise.all([
+	const showArchived = event.url.searchParams.has('archived');
+	const [summary, activity, routes] = await Promise.all([
 		getProjectSummary(project.id),
-		recentActivity({ teamId: project.teamId, projectId: project.id }, 15)
+		recentActivity({ teamId: project.teamId, projectId: project.id }, 15),
+		listRoutes(project.id, { includeArchived: showArchived })
 	]);
-	const form = await superValidate(
-		{ name: project.name, description: project.description },
-		zod4(editProjectSchema)
-	);
-	return { project: summary!, role, canEdit: can(role, 'project.edit'), activity, form };
+	const [form, routeForm] = await Promise.all([
+		superValidate({ name: project.name, description: project.description }, zod4(editProjectSchema)),
+		superValidate(zod4(newRouteSchema))
+	]);
+	return {
+		project: summary!,
+		role,
+		canEdit: can(role, 'project.edit'),
+		canEditRoutes: can(role, 'route.edit'),
+		activity,
+		form,
+		routeForm,
+		routes,
+		showArchived
+	};
 };
 
 export const actions: Actions = {
@@ -36,5 +50,32 @@ export const actions: Actions = {
 	restore: async (event) => {
 		const { project, user } = await requireProjectAction(event, event.params.projectId, 'project.edit');
 		await setProjectArchived(user, project, false);
+	},
+	createRoute: async (event) => {
+		const { project, user } = await requireProjectAction(event, event.params.projectId, 'route.edit');
+		const routeForm = await superValidate(event.request, zod4(newRouteSchema));
+		if (!routeForm.valid) return fail(400, { routeForm });
+		const route = await createRoute(user, project, { name: routeForm.data.name, intermediates: [], steps: [] });
+		redirect(303, paths.route(route.id));
+	},
+	duplicateRoute: async (event) => {
+		const { user, route, project } = await routeOfThisProject(event);
+		await duplicateRoute(user, project, route);
+	},
+	archiveRoute: async (event) => {
+		const { user, route, project } = await routeOfThisProject(event);
+		await setRouteArchived(user, route, true, project.teamId);
+	},
+	restoreRoute: async (event) => {
+		const { user, route, project } = await routeOfThisProject(event);
+		await setRouteArchived(user, route, false, project.teamId);
 	}
 };
+
+/** The route a row action names, refused unless it belongs to this page's project. */
+async function routeOfThisProject(event: RequestEvent<{ projectId: string }>) {
+	const routeId = String((await event.request.formData()).get('routeId') ?? '');
+	const found = await requireRouteAction(event, routeId, 'route.edit');
+	if (found.route.projectId !== event.params.projectId) notFound('That route');
+	return found;
+}

@@ -5,3 +5,7 @@ export const editProjectSchema = z.object({
 	name: projectName,
 	description: projectDescription.default('')
 });
+
+export const newRouteSchema = z.object({
+	name: z.string().trim().min(1, 'Give the route a name.').max(120, 'Keep the name under 120 characters.')
+});

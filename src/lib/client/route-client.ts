@@ -1,0 +1,133 @@
+// Browser calls for the route map and the project's route list. Each method owns the user-facing
+// message for its failures (a toast) except where the page shows the failure in place: a save
+// conflict (the conflict notice) and an unreadable structure (the field's error).
+
+import type { RouteDocument } from '$lib/route/document';
+import { callApi, jsonBody, type ApiResult } from './api';
+import type { Toasts } from './toasts.svelte';
+
+export type Analysis = {
+	formula: string;
+	mass: number;
+	canonical: string;
+	groups: { id: string; atoms: number[] }[];
+	protectingGroups: { id: string; atoms: number[]; masks: string }[];
+	svg?: string;
+};
+
+export type Clash = {
+	severity: 'clash' | 'caution';
+	kind: 'removes-protecting-group' | 'attacks-free-group';
+	subject: string;
+	condition: string;
+	atoms: number[];
+	message: string;
+};
+export type StepCheck = {
+	id: string;
+	conditions: string[];
+	hazards: { reagent: string; note: string }[];
+	clashes: Clash[];
+};
+export type RouteAnswer = {
+	id: string;
+	projectId: string;
+	name: string;
+	status: string;
+	version: number;
+	document: RouteDocument;
+};
+export type ConditionLabel = { id: string; label: string };
+
+export class RouteClient {
+	constructor(
+		private readonly toasts: Toasts,
+		private readonly fetcher: typeof fetch = fetch
+	) {}
+
+	load(routeId: string): Promise<ApiResult<RouteAnswer>> {
+		return this.#call<RouteAnswer>(`/api/routes/${routeId}`, {}, 'The route could not be loaded');
+	}
+
+	/** A 409 is left to the caller (the conflict notice); other failures are toasted. */
+	async save(
+		routeId: string,
+		version: number,
+		document: RouteDocument
+	): Promise<ApiResult<{ version: number }>> {
+		const result = await callApi<{ version: number }>(
+			`/api/routes/${routeId}`,
+			jsonBody('PUT', { version, document }),
+			this.fetcher
+		);
+		if (!result.ok && result.status !== 409)
+			this.toasts.show(`Not saved: ${result.message}`, 'problem');
+		return result;
+	}
+
+	async create(projectId: string, document: RouteDocument): Promise<string | null> {
+		const result = await this.#call<{ id: string }>(
+			`/api/projects/${projectId}/routes`,
+			jsonBody('POST', document),
+			'The route could not be created'
+		);
+		return result.ok ? result.data.id : null;
+	}
+
+	/** The clash check of the stored route; `'unavailable'` while the server has no check endpoint. */
+	async check(routeId: string): Promise<Map<string, StepCheck> | 'unavailable' | null> {
+		const result = await callApi<{ steps: StepCheck[] }>(
+			`/api/routes/${routeId}/check`,
+			{},
+			this.fetcher
+		);
+		if (!result.ok) {
+			if (result.status === 404) return 'unavailable';
+			this.toasts.show(`The clash check failed: ${result.message}`, 'problem');
+			return null;
+		}
+		return new Map(result.data.steps.map((step) => [step.id, step]));
+	}
+
+	/** Unreadable structures come back as failures for the caller to show beside the field. */
+	analyze(structure: string, highlight?: string): Promise<ApiResult<Analysis>> {
+		return callApi<Analysis>(
+			'/api/analyze',
+			jsonBody('POST', { structure, depict: true, ...(highlight ? { highlight } : {}) }),
+			this.fetcher
+		);
+	}
+
+	/** Condition classes with their labels, or null until `GET /api/rules` exists (raw ids are shown then). */
+	async conditionLabels(): Promise<ConditionLabel[] | null> {
+		const result = await callApi<unknown>('/api/rules', {}, this.fetcher);
+		if (!result.ok) return null;
+		const body = result.data;
+		const inner =
+			body && typeof body === 'object' && 'conditions' in body
+				? (body as { conditions: unknown }).conditions
+				: body;
+		const list: unknown[] = Array.isArray(inner) ? inner : [];
+		return list.filter((item): item is ConditionLabel => {
+			const candidate = item as Partial<ConditionLabel> | null;
+			return typeof candidate?.id === 'string' && typeof candidate.label === 'string';
+		});
+	}
+
+	async importFile(projectId: string, file: File): Promise<string | null> {
+		const form = new FormData();
+		form.set('file', file);
+		const result = await this.#call<{ id: string }>(
+			`/api/projects/${projectId}/routes/import`,
+			{ method: 'POST', body: form },
+			`“${file.name}” was not imported`
+		);
+		return result.ok ? result.data.id : null;
+	}
+
+	async #call<T>(url: string, init: RequestInit, failure: string): Promise<ApiResult<T>> {
+		const result = await callApi<T>(url, init, this.fetcher);
+		if (!result.ok) this.toasts.show(`${failure}: ${result.message}`, 'problem');
+		return result;
+	}
+}

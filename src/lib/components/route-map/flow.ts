@@ -1,0 +1,70 @@
+// The canvas view of a route document: one node per intermediate, one edge per step input (a
+// convergent step draws several edges; the first carries the step's label and marker).
+
+import type { Edge, Node } from '@xyflow/svelte';
+import type { RouteDocument } from '$lib/route/document';
+
+export type IntermediateNodeData = { intermediateId: string };
+export type IntermediateFlowNode = Node<IntermediateNodeData, 'intermediate'>;
+export type StepEdgeData = { stepId: string; from: string; primary: boolean };
+export type StepFlowEdge = Edge<StepEdgeData, 'step'>;
+
+export const edgeId = (stepId: string, from: string) => `${stepId}::${from}`;
+
+/** Nodes for the document, keeping what the canvas knows of the old ones (size, selection). */
+export function toNodes(
+	doc: RouteDocument,
+	previous: IntermediateFlowNode[],
+	draggable: boolean
+): IntermediateFlowNode[] {
+	const before = new Map(previous.map((node) => [node.id, node]));
+	return doc.intermediates.map((node, index) => {
+		const old = before.get(node.id);
+		const position = node.position ?? old?.position ?? { x: index * 320, y: 0 };
+		if (
+			old &&
+			old.position.x === position.x &&
+			old.position.y === position.y &&
+			old.draggable === draggable
+		)
+			return old;
+		return {
+			...(old ?? {}),
+			id: node.id,
+			type: 'intermediate',
+			position,
+			draggable,
+			data: old?.data ?? { intermediateId: node.id }
+		};
+	});
+}
+
+export function toEdges(
+	doc: RouteDocument,
+	previous: StepFlowEdge[],
+	selectedStep: string | null
+): StepFlowEdge[] {
+	const before = new Map(previous.map((edge) => [edge.id, edge]));
+	return doc.steps.flatMap((step) =>
+		step.from.map((from, index) => {
+			const id = edgeId(step.id, from);
+			const selected = step.id === selectedStep;
+			const old = before.get(id);
+			if (
+				old &&
+				old.selected === selected &&
+				old.target === step.to &&
+				old.data?.primary === (index === 0)
+			)
+				return old;
+			return {
+				id,
+				type: 'step' as const,
+				source: from,
+				target: step.to,
+				selected,
+				data: { stepId: step.id, from, primary: index === 0 }
+			};
+		})
+	);
+}

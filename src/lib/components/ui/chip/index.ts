@@ -1,0 +1,1 @@
+export { default as Chip } from './Chip.svelte';

@@ -1,0 +1,1 @@
+export { default as ToastRegion } from './ToastRegion.svelte';

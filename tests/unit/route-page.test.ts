@@ -1,0 +1,68 @@
+import { isHttpError, isRedirect, type RequestEvent } from '@sveltejs/kit';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { load } from '../../src/routes/routes/[routeId]/+page.server';
+import { createRoute } from '../../src/lib/server/services/routes';
+import type { Project } from '../../src/lib/server/db';
+import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+
+let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
+let project: Project;
+let routeId = '';
+type Who = keyof typeof f.people;
+
+async function open(who: Who | null, id = routeId) {
+	const event = fakeEvent({
+		user: who ? f.people[who] : null,
+		path: `/routes/${id}`
+	}) as RequestEvent & { params: Record<string, string> };
+	event.params = { routeId: id };
+	return (load as unknown as (e: RequestEvent) => Promise<Record<string, unknown>>)(event);
+}
+
+beforeAll(async () => {
+	await freshDatabase();
+	f = await makeTeamWithEveryRole();
+	project = await makeProject(f.team.id, 'Cormorant page test');
+	const route = await createRoute(f.people.chemist, project, {
+		name: 'OG-2031 page',
+		intermediates: [
+			{ id: 'a', structure: 'CC(=O)CCC(=O)OC' },
+			{ id: 'x', structure: 'C1CC' }
+		],
+		steps: [{ id: 's1', from: ['a'], to: 'x' }]
+	});
+	routeId = route.id;
+});
+
+describe('the route map page load', () => {
+	it('gives every role of the team the document and server depictions, and editing only to chemists and leads', async () => {
+		for (const [who, canEdit] of [
+			['lead', true],
+			['chemist', true],
+			['reviewer', false],
+			['viewer', false]
+		] as const) {
+			const data = await open(who);
+			expect(data.canEdit, who).toBe(canEdit);
+			expect((data.document as { name: string }).name).toBe('OG-2031 page');
+			const analyses = data.analyses as Record<string, { svg?: string; groups: { id: string }[] }>;
+			expect(analyses['CC(=O)CCC(=O)OC']!.svg).toContain('<svg');
+			expect(analyses['CC(=O)CCC(=O)OC']!.groups.map((g) => g.id)).toContain('ketone');
+			// An unreadable stored structure is left to its node to explain, not a failed page.
+			expect(analyses['C1CC']).toBeUndefined();
+		}
+	});
+
+	it('answers 404 to another team and to an unknown id, and sends visitors to sign in', async () => {
+		for (const attempt of [
+			() => open('outsider'),
+			() => open('lead', '00000000-0000-4000-8000-000000000000'),
+			() => open('lead', 'not-a-uuid')
+		]) {
+			const caught = await attempt().catch((e: unknown) => e);
+			expect(isHttpError(caught) && caught.status).toBe(404);
+		}
+		const visitor = await open(null).catch((e: unknown) => e);
+		expect(isRedirect(visitor) && visitor.location).toMatch(/^\/signin\?redirectTo=/);
+	});
+});
