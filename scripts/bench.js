@@ -5,10 +5,12 @@
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import path from 'node:path';
+import { buildIfStale } from './build-if-stale.js';
 
 const BENCHMARKS = [
 	{ name: 'perception', file: 'perception.ts', about: 'groups and PGs of a 30-intermediate route, ours vs RDKit-WASM' },
-	{ name: 'check', file: 'check-route.ts', about: 'the clash check over a 30-step route, cold and warm' }
+	{ name: 'check', file: 'check-route.ts', about: 'the clash check over a 30-step route, cold and warm' },
+	{ name: 'bundle', file: 'bundle-size.js', about: "the route page's initial JavaScript, gzip (budget 300 KB)", needsBuild: true }
 ];
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
@@ -22,6 +24,7 @@ if (unknown.length > 0) {
 let failed = 0;
 for (const bench of BENCHMARKS.filter((b) => wanted.length === 0 || wanted.includes(b.name))) {
 	console.log(`\n▶ ${bench.name}: ${bench.about}`);
+	if (bench.needsBuild) buildIfStale();
 	const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
 	const result = spawnSync(tsx, [path.join(root, 'scripts', 'bench', bench.file)], { cwd: root, stdio: 'inherit' });
 	if (result.status !== 0) {
