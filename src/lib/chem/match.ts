@@ -2,11 +2,13 @@
 //
 // A search costs tens of microseconds even when it fails, so before searching we check cheap
 // molecule features: the elements a pattern names, and the `needs` a rule row declares (a free
-// O–H, a C=O, a found group such as "silyl-ether", …). tests/unit/chem-perceive.test.ts runs every
-// pattern with and without these checks over the reference set to prove they never hide a match.
+// O–H, a C=O, a found group such as "silyl-ether", …), then the loose TypeScript walk of
+// prefilter.ts. tests/unit/chem-perceive.test.ts runs every pattern with and without these checks
+// over the reference set to prove they never hide a match.
 
 import { Molecule, SSSearcher } from 'openchemlib';
 import type { CompiledPattern } from './patterns';
+import { atomTable, mayMatch, type AtomTable } from './prefilter';
 
 /** Features a rule row may list under `needs` (group ids may be listed too). */
 export const MOLECULE_FEATURES = ['O-H', 'N-H', 'S-H', 'C=O', 'C=C', 'C=N', 'triple', 'ring-3'] as const;
@@ -14,7 +16,10 @@ export const MOLECULE_FEATURES = ['O-H', 'N-H', 'S-H', 'C=O', 'C=C', 'C=N', 'tri
 /** One molecule prepared for many searches: its searcher and the features it has. */
 export type SearchTarget = {
 	molecule: Molecule;
-	searcher: SSSearcher;
+	/** Made on first use: when the pre-checks rule out every pattern, no searcher is built. */
+	readonly searcher: SSSearcher;
+	/** The molecule as prefilter.ts reads it. */
+	table: AtomTable;
 	/** Element numbers, feature names and (once perceived) the ids of groups present. */
 	features: Set<string | number>;
 	/** Skip the pre-checks (tests prove they change nothing). */
@@ -44,9 +49,20 @@ export function searchTarget(molecule: Molecule, options: { exhaustive?: boolean
 		else if (pair[0] === 6 && pair[1] === 6) features.add('C=C');
 		else if (pair[0] === 6 && pair[1] === 7) features.add('C=N');
 	}
-	const searcher = new SSSearcher();
-	searcher.setMolecule(molecule);
-	return { molecule, searcher, features, exhaustive: options.exhaustive ?? false };
+	let searcher: SSSearcher | null = null;
+	return {
+		molecule,
+		get searcher() {
+			if (!searcher) {
+				searcher = new SSSearcher();
+				searcher.setMolecule(molecule);
+			}
+			return searcher;
+		},
+		table: atomTable(molecule),
+		features,
+		exhaustive: options.exhaustive ?? false
+	};
 }
 
 /** Whether the target has everything a row needs, e.g. `hasFeatures(target, ['C=O'])`. */
@@ -61,6 +77,7 @@ export function hasFeatures(target: SearchTarget, needs: readonly (string | numb
  */
 export function findMatches(target: SearchTarget, pattern: CompiledPattern): number[][] {
 	if (!hasFeatures(target, pattern.requiredElements)) return [];
+	if (!target.exhaustive && pattern.loose && !mayMatch(target.table, pattern.loose)) return [];
 	target.searcher.setFragment(pattern.fragment);
 	const count = target.searcher.findFragmentInMolecule({ countMode: 'overlapping' });
 	return count === 0 ? [] : target.searcher.getMatchList();

@@ -11,6 +11,12 @@ import { validateMolecule } from './validate';
 export type ReadOptions = {
 	/** Invent 2D coordinates and read stereo for a SMILES (needed to draw it or for a stereo-aware key). */
 	coordinates?: boolean;
+	/**
+	 * Collect openchemlib's validate() warnings (default true). Perception drops them, and
+	 * validate() perceives stereo (~2 ms a molecule, most of a cold perception); errors are the same
+	 * either way because its only fatal check (valence) repeats one validateMolecule makes first.
+	 */
+	warnings?: boolean;
 };
 
 export type ParsedStructure = {
@@ -29,17 +35,17 @@ export function readStructure(text: string, options: ReadOptions = {}): ParsedSt
 	const format = detectFormat(text);
 	if (format === 'sdf') {
 		const first = splitSdf(text)[0]!;
-		return { ...readMolfile(first.molfile, 'sdf', 1), fields: first.fields };
+		return { ...readMolfile(first.molfile, 'sdf', 1, options), fields: first.fields };
 	}
 	if (format === 'smiles') return readSmiles(text, options);
-	return readMolfile(text, format);
+	return readMolfile(text, format, undefined, options);
 }
 
 /** Reads every record of an SDF (or the single structure of any other text), e.g. `readStructures(sdfText).length` → 3. */
 export function readStructures(text: string, options: ReadOptions = {}): ParsedStructure[] {
 	if (detectFormat(text) !== 'sdf') return [readStructure(text, options)];
 	return splitSdf(text).map((record, index) => ({
-		...readMolfile(record.molfile, 'sdf', index + 1),
+		...readMolfile(record.molfile, 'sdf', index + 1, options),
 		fields: record.fields
 	}));
 }
@@ -65,7 +71,8 @@ function readSmiles(text: string, options: ReadOptions): ParsedStructure {
 			return token ? `atom ${atom + 1} (${token.symbol}, at character ${offset + token.position + 1})` : `atom ${atom + 1}`;
 		},
 		positionOf: (atom) => (tokens[atom] ? offset + tokens[atom]!.position : undefined),
-		wasWrittenAromatic: (atom) => tokens[atom]?.aromatic ?? false
+		wasWrittenAromatic: (atom) => tokens[atom]?.aromatic ?? false,
+		warnings: options.warnings
 	});
 	return { molecule, format: 'smiles', warnings, fields: {}, smiles };
 }
@@ -100,7 +107,7 @@ function smilesError(caught: unknown, offset: number): StructureError {
 	return new StructureError('smiles_syntax', `The SMILES cannot be read: ${what}${where}.`, { position });
 }
 
-function readMolfile(text: string, format: StructureFormat, record?: number): ParsedStructure {
+function readMolfile(text: string, format: StructureFormat, record?: number, options: ReadOptions = {}): ParsedStructure {
 	const inRecord = record === undefined ? '' : ` (SDF record ${record})`;
 	const declared = declaredAtomCount(text);
 	if (declared === null) {
@@ -124,7 +131,8 @@ function readMolfile(text: string, format: StructureFormat, record?: number): Pa
 		describeAtom: (atom) => `atom ${atom + 1} (${molecule.getAtomLabel(atom)})${inRecord}`,
 		positionOf: () => undefined,
 		wasWrittenAromatic: () => false,
-		record
+		record,
+		warnings: options.warnings
 	});
 	return { molecule, format, warnings, fields: {} };
 }

@@ -14,6 +14,7 @@
 import { z } from 'zod';
 import { Molecule, SmilesParser } from 'openchemlib';
 import { MOLECULE_FEATURES } from './match';
+import { looseQuery, type LooseQuery } from './prefilter';
 import groupsJson from '../../../rules/groups.json';
 import protectingGroupsJson from '../../../rules/protecting-groups.json';
 
@@ -78,6 +79,8 @@ export type CompiledPattern = {
 	context: number[];
 	/** Atomic numbers the pattern cannot match without: a cheap pre-check before searching. */
 	requiredElements: number[];
+	/** The same SMARTS as a loose TypeScript test (prefilter.ts), null when it cannot be read there. */
+	loose: LooseQuery | null;
 };
 
 export type CompiledGroup = GroupPattern & { compiled: CompiledPattern };
@@ -113,7 +116,7 @@ export function compilePattern(smarts: string, file: string, path: (string | num
 		if (map === 1) masked.push(atom);
 		else if (map === 2) context.push(atom);
 	}
-	return { smarts, fragment, key: masked[0] ?? 0, masked, context, requiredElements: requiredElements(smarts, file, path) };
+	return { smarts, fragment, key: masked[0] ?? 0, masked, context, requiredElements: requiredElements(smarts, file, path), loose: looseQuery(smarts) };
 }
 
 /** Elements named by plain (non-list, non-negated) atoms outside recursive `$()` parts. */

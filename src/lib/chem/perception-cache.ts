@@ -28,7 +28,8 @@ export function perceiveWithKey(molecule: Molecule, form: CanonicalForm): Percep
 export function perceiveText(text: string): Perception {
 	const stored = byText.get(text);
 	if (stored) return stored;
-	const fresh = perceive(readStructure(text).molecule);
+	// Warnings are not part of a perception, and collecting them costs more than perceiving.
+	const fresh = perceive(readStructure(text, { warnings: false }).molecule);
 	byText.set(text, fresh);
 	return fresh;
 }

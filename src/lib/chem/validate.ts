@@ -11,6 +11,8 @@ export type AtomDescriber = {
 	positionOf: (atom: number) => number | undefined;
 	wasWrittenAromatic: (atom: number) => boolean;
 	record?: number;
+	/** false skips openchemlib's validate() (stereo perception, warnings only: see ReadOptions). */
+	warnings?: boolean;
 };
 
 /** Throws StructureError for impossible valences or aromaticity and returns the warnings, e.g. `validateMolecule(mol, describer)` → `[]`. */
@@ -35,6 +37,9 @@ export function validateMolecule(molecule: Molecule, where: AtomDescriber): stri
 		}
 	}
 	const warnings: string[] = [];
+	// Its valence check is the getFreeValence() test above (free = max − occupied), so what is left
+	// can only warn.
+	if (where.warnings === false) return warnings;
 	try {
 		molecule.validate();
 	} catch (caught) {
