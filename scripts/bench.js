@@ -10,6 +10,7 @@ import { buildIfStale } from './build-if-stale.js';
 const BENCHMARKS = [
 	{ name: 'perception', file: 'perception.ts', about: 'groups and PGs of a 30-intermediate route, ours vs RDKit-WASM' },
 	{ name: 'check', file: 'check-route.ts', about: 'the clash check over a 30-step route, cold and warm' },
+	{ name: 'plan', file: 'plan.ts', about: 'the strategy planner on a route with 10 sensitive group instances (aim ≤ 250 ms)' },
 	{ name: 'bundle', file: 'bundle-size.js', about: "the route page's initial JavaScript, gzip (budget 300 KB)", needsBuild: true }
 ];
 

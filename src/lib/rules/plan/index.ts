@@ -1,0 +1,92 @@
+// The strategy planner: which free groups a route must mask, with which PG, on and off where,
+// ranked, drawn and re-checked. Pure: the caller passes the re-check (the clash check of a route).
+
+import type { RouteDocument } from '../../route/document';
+import { checkRulesFrom } from '../check/rules-adapter';
+import type { CheckRules } from '../check/types';
+import { loadRuleTable, type RuleTable } from '../table';
+import { linearChain, type Chain } from './chain';
+import { canDraw, clearDrawCache } from './draw';
+import { judgeCandidates, type Judged } from './options';
+import { drawRoute } from './route';
+import { scoreOf, searchChoices } from './search';
+import { clearFollowCache, findNeeds } from './track';
+import type { Need, Option, Plan, PlanAnswer, Unsolved } from './types';
+
+export type * from './types';
+export { canDraw } from './draw';
+
+/** Forgets the planner's caches (mappings and drawings), e.g. before a cold benchmark run. */
+export function clearPlanCaches(): void {
+	clearFollowCache();
+	clearDrawCache();
+}
+
+/** The first `clash` the re-check finds in a route, as a message, or null when it is clean. */
+export type Verify = (route: RouteDocument) => string | null;
+export type PlanOptions = { verify: Verify; table?: RuleTable; rules?: CheckRules; plans?: number };
+
+const MAX_PLANS = 5;
+// More joint choices than plans are drawn, because the re-check may still drop some.
+const SEARCH_WIDTH = 20;
+
+/** Ranked plans for a route, e.g. a ketone standing by a Grignard step → dioxolane on before it, off at the end. */
+export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer {
+	const table = options.table ?? loadRuleTable();
+	const rules = options.rules ?? checkRulesFrom(table);
+	const chain = linearChain(doc, rules);
+	if (typeof chain === 'string') return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: chain }] };
+	const needs = findNeeds(chain, rules);
+	if (needs.length === 0) {
+		const problem = options.verify(doc);
+		if (problem) return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: `No free group needs masking, but the route still clashes: ${problem}` }] };
+		return { plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale: ['No step attacks a free group that stands by: nothing needs masking.'] }] };
+	}
+	const judged = needs.map((_, i) => judgeCandidates(table, rules, chain, needs, i).map((j) => drawable(j)));
+	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, chain, need, judged[i]!)]));
+	if (unsolved.length) return { plans: [], unsolved };
+	const optionLists = judged.map((list) => list.flatMap((j) => j.options).sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness));
+	const plans: Plan[] = [];
+	let firstProblem: string | null = null;
+	for (const choice of searchChoices(rules, needs, optionLists, SEARCH_WIDTH)) {
+		if (plans.length >= (options.plans ?? MAX_PLANS)) break;
+		const drawn = drawRoute(doc, chain, needs, choice.options);
+		const problem = options.verify(drawn.route);
+		if (problem) {
+			firstProblem ??= problem;
+			continue;
+		}
+		const rationale = [
+			...needs.map((need, i) => because(rules, chain, need, choice.options[i]!)),
+			...drawn.shared.map(({ pg, count }) => `One protection step puts ${pg} on ${count} groups of the same kind at once.`),
+			...drawn.merged.map((pgs) => `One deprotection step removes ${pgs.join(' and ')} together: they come off under the same conditions.`),
+			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`))
+		];
+		plans.push({ rank: plans.length + 1, score: scoreOf(choice.addedSteps, choice.cautions, choice.harshness), protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
+	}
+	if (plans.length) return { plans };
+	const reason = firstProblem ? `Every combination of admissible protecting groups still clashes when re-checked: ${firstProblem}` : 'No combination of protecting groups is orthogonal: each choice for one group would strip another.';
+	return { plans: [], unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason })) };
+}
+
+function drawable(judged: Judged): Judged {
+	if (judged.options.length === 0 || canDraw(judged.pg)) return judged;
+	return { ...judged, options: [], rejected: `${judged.pg} rejected: the planner cannot draw it yet` };
+}
+
+function because(rules: CheckRules, chain: Chain, need: Need, option: Option): string {
+	const threats = need.attackedAt.map((s) => `step "${chain.steps[s]!.id}"`).join(', ');
+	const off = need.freeGap === chain.steps.length ? 'at the end' : `before step "${chain.steps[need.freeGap]!.id}" (where it reacts)`;
+	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : ''}.`;
+}
+
+function whyUnsolved(rules: CheckRules, chain: Chain, need: Need, judged: Judged[]): Unsolved {
+	const label = rules.groupLabel(need.group);
+	const first = chain.steps[need.attackedAt[0]!]!.id;
+	if (judged.length === 0) return { group: need.group, atoms: need.atoms, reason: `Step "${first}" attacks the free ${label}, and no protecting group in the rule table masks a ${label}.` };
+	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt) ? judged[0]!.killedAt : undefined;
+	if (killer !== undefined) {
+		return { group: need.group, atoms: need.atoms, reason: `Step "${chain.steps[killer]!.id}" makes it impossible: the free ${label} must be masked from step "${first}" on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).` };
+	}
+	return { group: need.group, atoms: need.atoms, reason: `Step "${first}" attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.` };
+}

@@ -1,0 +1,113 @@
+// Which protecting groups could mask one need, judged one by one: survives every step it must
+// sit through, goes on without attacking what else is free, comes off without harming what stays.
+
+import { perceptionRules } from '../../chem/patterns';
+import { perceiveText } from '../../chem/perception-cache';
+import type { CheckRules } from '../check/types';
+import type { RuleTable } from '../table';
+import type { Chain } from './chain';
+import { stepConditions } from './chain';
+import { freeUnits } from './track';
+import type { Need, Option } from './types';
+
+// How hard a condition class is on a molecule, for ranking only (why: a chemist prefers the
+// milder of two otherwise equal plans). Unlisted classes count 1.
+const HARSHNESS: Record<string, number> = {
+	'acid-strong': 3, 'base-strong': 3, 'hydride-strong': 3, organometallic: 3, 'dissolving-metal': 3, 'oxidant-strong': 3,
+	'lewis-acid': 2, 'base-aqueous': 2, heat: 2, 'oxidant-electron-transfer': 2
+};
+/** Summed harshness of condition classes, e.g. `harshnessOf(['acid-strong', 'fluoride'])` → 4. */
+export const harshnessOf = (conditions: string[]) => conditions.reduce((sum, id) => sum + (HARSHNESS[id] ?? 1), 0);
+
+export type Judged = { pg: string; options: Option[]; rejected: string | null; killedAt?: number };
+
+/**
+ * Whether need `other` is masked at gap `gap` while need `index` is worked on. At a gap the
+ * installs run first (in need order) and the removals after, so a group that must come off here
+ * can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc amine freed before
+ * step 3 is still masked while Fmoc goes on the other amine at that gap.
+ */
+export function maskedAt(needs: Need[], other: number, gap: number, index: number, phase: 'install' | 'removal'): boolean {
+	const y = needs[other]!;
+	if (phase === 'removal') return y.installGap <= gap && gap <= y.freeGap;
+	return (y.installGap < gap || (y.installGap === gap && other < index)) && gap <= y.freeGap;
+}
+
+/** Every candidate PG for `needs[index]` with its admissible options or why it fails, e.g. Bn for an alcohol → "Bn rejected: … hydrogenation …". */
+export function judgeCandidates(table: RuleTable, rules: CheckRules, chain: Chain, needs: Need[], index: number): Judged[] {
+	const need = needs[index]!;
+	const protects = new Map(perceptionRules().protectingGroups.map((pg) => [pg.id, pg.protects]));
+	const rows = table.protectingGroups.filter((row) => protects.get(row.id)?.includes(need.group));
+	return rows.map((row): Judged => {
+		let cautions = 0;
+		for (let step = need.installGap; step < need.freeGap; step++) {
+			for (const c of chain.conditions[step]!) {
+				const answer = rules.stability(row.id, c.id, c.explicit ? [] : c.reagents);
+				if (answer.rating === 'labile') {
+					const rejected = `${row.id} rejected: the ${rules.conditionLabel(c.id).toLowerCase()} conditions of step "${chain.steps[step]!.id}" would remove it`;
+					return { pg: row.id, options: [], rejected, killedAt: step };
+				}
+				if (answer.rating === 'caution') cautions++;
+			}
+		}
+		const installConditions = [...row.install.conditions];
+		const install = { reagents: row.install.reagents[0] ?? '', conditions: installConditions };
+		const installHarm = harm(rules, chain, needs, index, need.installGap, 'install', install.reagents, installConditions);
+		if (installHarm.blocked) return { pg: row.id, options: [], rejected: `${row.id} rejected: installing it (${install.reagents}) ${installHarm.blocked}` };
+		const options: Option[] = [];
+		let firstRemovalProblem = '';
+		for (const method of row.remove) {
+			const reagents = method.reagents[0] ?? '';
+			const removalHarm = harm(rules, chain, needs, index, need.freeGap, 'removal', reagents, [...method.conditions]);
+			if (removalHarm.blocked) {
+				firstRemovalProblem ||= `removing it (${reagents}) ${removalHarm.blocked}`;
+				continue;
+			}
+			options.push({
+				pg: row.id,
+				install,
+				removal: { reagents, conditions: [...method.conditions] },
+				cautions: cautions + installHarm.cautions + removalHarm.cautions,
+				harshness: harshnessOf(installConditions) + harshnessOf([...method.conditions]),
+				why: ''
+			});
+		}
+		if (options.length === 0) return { pg: row.id, options, rejected: `${row.id} rejected: ${firstRemovalProblem}` };
+		return { pg: row.id, options, rejected: null };
+	});
+}
+
+/** What an install or removal at `gap` would attack among the free groups and the route's own PGs then present. */
+function harm(rules: CheckRules, chain: Chain, needs: Need[], index: number, gap: number, phase: 'install' | 'removal', reagents: string, conditions: string[]) {
+	const structure = chain.nodes[gap]!.structure;
+	const conds = stepConditions(rules, reagents, conditions);
+	const need = needs[index]!;
+	const own = new Set(need.atomsAt.get(gap) ?? []);
+	// Free units masked by another need at that moment are not exposed (their PG is judged jointly).
+	const masked = new Set<number>();
+	needs.forEach((other, j) => {
+		// A same-type neighbour that goes on at the same gap may share this install step; the
+		// search only lets it stay free if it does not (see `compatible` in search.ts).
+		const coInstall = phase === 'install' && other.installGap === gap && other.group === need.group;
+		if (j !== index && (coInstall || maskedAt(needs, j, gap, index, phase))) for (const a of other.atomsAt.get(gap) ?? []) masked.add(a);
+	});
+	let cautions = 0;
+	for (const unit of freeUnits(structure)) {
+		if (unit.atoms.some((a) => own.has(a) || masked.has(a))) continue;
+		for (const c of conds) {
+			for (const member of unit.members) {
+				const rule = rules.reactivity(member, c.id);
+				if (rule?.rating === 'reacts') return { blocked: `would also attack the free ${rules.groupLabel(member)} (${rule.reason.replace(/\.$/, '')})`, cautions };
+				if (rule) cautions++;
+			}
+		}
+	}
+	for (const pg of perceiveText(structure).protectingGroups) {
+		for (const c of conds) {
+			const answer = rules.stability(pg.id, c.id, c.explicit ? [] : c.reagents);
+			if (answer.rating === 'labile') return { blocked: `would also strip the route's own ${pg.id} group`, cautions };
+			if (answer.rating === 'caution') cautions++;
+		}
+	}
+	return { blocked: '', cautions };
+}

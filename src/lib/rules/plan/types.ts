@@ -1,0 +1,54 @@
+// The planner's vocabulary: what needs masking (a need), what could mask it (an option), and
+// the ranked answer in the shape of `POST /api/plan`.
+
+import type { RouteDocument } from '../../route/document';
+
+/** One free-group instance followed along the linear route. */
+export type Need = {
+	/** Group id; a diol masked as one unit is `diol-1,2` or `diol-1,3`. */
+	group: string;
+	/** Atoms of the instance in the intermediate where it is first seen. */
+	atoms: number[];
+	/** Intermediate index where it is first seen. */
+	born: number;
+	/** Its atoms in every intermediate index it lives in (born … last). */
+	atomsAt: Map<number, number[]>;
+	/** Gap index (before step i) where the mask goes on: the first step that attacks it. */
+	installGap: number;
+	/** Gap where it must be free again: the step where it reacts on purpose, or `steps.length` (the end). */
+	freeGap: number;
+	/** Step indices that attack it while it stands by. */
+	attackedAt: number[];
+};
+
+/** A way to mask one need: the PG and one install and one removal option. */
+export type Option = {
+	pg: string;
+	install: { reagents: string; conditions: string[] };
+	removal: { reagents: string; conditions: string[] };
+	cautions: number;
+	harshness: number;
+	why: string;
+};
+
+export type Protection = {
+	group: string;
+	atoms: number[];
+	intermediate: string;
+	protectingGroup: string;
+	install: { before: string; reagents: string; conditions: string[] };
+	removal: { after: string; reagents: string; conditions: string[] };
+};
+
+export type Plan = {
+	rank: number;
+	score: number;
+	protections: Protection[];
+	route: RouteDocument;
+	addedSteps: number;
+	rationale: string[];
+};
+
+export type Unsolved = { group: string; atoms: number[]; reason: string };
+
+export type PlanAnswer = { plans: Plan[]; unsolved?: Unsolved[] };

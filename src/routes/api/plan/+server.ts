@@ -1,0 +1,14 @@
+import { json } from '@sveltejs/kit';
+import { z } from 'zod';
+import type { RequestHandler } from './$types';
+import { apiHandler, readJson } from '$lib/server/api';
+import { requireUser } from '$lib/server/auth/guards';
+import { planRouteDocument } from '$lib/server/services/plan';
+import { routeDocumentOr422 } from '$lib/server/route-api';
+
+/** `POST /api/plan` with a route document → `{ plans: [...], unsolved? }`. */
+export const POST: RequestHandler = apiHandler(async (event) => {
+	requireUser(event);
+	const document = routeDocumentOr422(await readJson(event, z.unknown()));
+	return json(planRouteDocument(document));
+});

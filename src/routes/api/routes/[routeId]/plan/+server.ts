@@ -1,0 +1,14 @@
+import { json } from '@sveltejs/kit';
+import type { RequestHandler } from './$types';
+import { apiHandler } from '$lib/server/api';
+import { requireRouteAction } from '$lib/server/auth/guards';
+import { planRouteDocument } from '$lib/server/services/plan';
+import { routeDocumentOr422 } from '$lib/server/route-api';
+import { routeDocument } from '$lib/server/services/routes';
+
+/** `POST /api/routes/{id}/plan` → the `/api/plan` answer for the stored route (reading it is enough). */
+export const POST: RequestHandler = apiHandler(async (event) => {
+	const { route } = await requireRouteAction(event, event.params.routeId, 'project.read');
+	// A stored route may be half drawn; it is validated like a posted one.
+	return json(planRouteDocument(routeDocumentOr422(await routeDocument(route))));
+});

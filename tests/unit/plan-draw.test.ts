@@ -1,0 +1,41 @@
+import { describe, expect, it } from 'vitest';
+import { perceiveText } from '../../src/lib/chem';
+import { canDraw, protectedStructure } from '../../src/lib/rules/plan/draw';
+import { freeUnits } from '../../src/lib/rules/plan/track';
+import rows from '../../rules/protecting-groups.json';
+
+// Every PG the rule table knows is drawn onto a small invented substrate of each group type it
+// protects, and perception must find that PG again (the drawing and the perception rules agree).
+// Structures of the protected forms: common practice (Greene's, 5th ed. — from memory).
+const MODELS: Record<string, string> = {
+	'alcohol-primary': 'OCCCC',
+	'alcohol-secondary': 'CC(O)CC',
+	phenol: 'Oc1ccccc1',
+	'diol-1,2': 'OCC(O)CCC',
+	'diol-1,3': 'OCCC(O)CC',
+	ketone: 'CC(=O)CCC',
+	aldehyde: 'O=CCCCC',
+	'amine-primary': 'NCCCC',
+	'amine-secondary': 'CNCCC',
+	'indole-nh': 'c1ccc2[nH]ccc2c1',
+	'carboxylic-acid': 'OC(=O)CCCC',
+	'alkyne-terminal': 'C#CCCC',
+	thiol: 'SCCCC'
+};
+
+describe('drawing protected intermediates', () => {
+	for (const row of rows as { id: string; protects: string[] }[]) {
+		it(`draws ${row.id} so that perception finds it again`, () => {
+			expect(canDraw(row.id)).toBe(true);
+			for (const group of row.protects.filter((g) => MODELS[g])) {
+				const unit = freeUnits(MODELS[group]!).find((u) => u.id === group)!;
+				const drawn = protectedStructure(MODELS[group]!, [{ pg: row.id, atoms: unit.atoms }]);
+				expect(perceiveText(drawn).protectingGroups.map((pg) => pg.id), `${row.id} on ${group}: ${drawn}`).toContain(row.id);
+			}
+		});
+	}
+
+	it('draws a dioxolane in place of a ketone oxygen — Greene\'s (from memory)', () => {
+		expect(protectedStructure('CC(=O)CCC', [{ pg: 'dioxolane', atoms: [0, 1, 2, 3] }])).toBe('CCCC1(C)OCCO1');
+	});
+});

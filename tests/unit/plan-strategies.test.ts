@@ -1,0 +1,130 @@
+import { describe, expect, it } from 'vitest';
+import { perceiveText } from '../../src/lib/chem';
+import type { RouteDocument } from '../../src/lib/route/document';
+import { planRouteDocument } from '../../src/lib/server/services/plan';
+import { line } from '../factories/plan-routes';
+
+// The strategy planner against textbook protecting-group practice. Each case names its source;
+// "Greene's" is Wuts, Greene's Protective Groups in Organic Synthesis, 5th ed.; "Clayden" is
+// Clayden, Greeves & Warren, Organic Chemistry; "Kocienski" is Kocienski, Protecting Groups,
+// 3rd ed. — all from memory. Molecules are invented intermediates of the OG-2031 scenario.
+
+const pgsOf = (answer: ReturnType<typeof planRouteDocument>) => answer.plans.map((p) => p.protections.map((x) => x.protectingGroup).join('+'));
+
+describe('strategy cases from textbook practice', () => {
+	it('masks a ketone as a cyclic acetal through a Grignard addition to the ester — Clayden; Greene\'s (from memory)', () => {
+		const answer = planRouteDocument(line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, THF']));
+		expect(answer.unsolved).toBeUndefined();
+		expect(pgsOf(answer)).toContain('dioxolane');
+		expect(answer.plans.every((p) => ['dioxolane', 'dioxane', 'dimethyl-acetal', 'dithiane'].includes(p.protections[0]!.protectingGroup))).toBe(true);
+		const dioxolane = answer.plans.find((p) => p.protections[0]!.protectingGroup === 'dioxolane')!;
+		expect(dioxolane.protections[0]).toMatchObject({ group: 'ketone', install: { before: 's1' }, removal: { after: 'end' } });
+		expect(dioxolane.addedSteps).toBe(2);
+		const masked = dioxolane.route.intermediates.find((n) => n.id === dioxolane.protections[0]!.intermediate)!;
+		expect(perceiveText(masked.structure).protectingGroups.map((pg) => pg.id)).toContain('dioxolane');
+		// The free ketone comes back at the end: the last intermediate is the original product.
+		expect(dioxolane.route.intermediates.at(-1)!.structure).toBe('CC(=O)CCC(C)(C)O');
+	});
+
+	it('keeps a 1,2-diol as an acetonide through a hydrogenation, not as a benzylidene acetal — Greene\'s, benzylidene acetals fall to hydrogenolysis (from memory)', () => {
+		const answer = planRouteDocument(line(['OCC(O)CC=CCCO', 'OCC(O)CC=CCC=O', 'OCC(O)CCCCC=O'], ['(COCl)2, DMSO, Et3N', 'H2, Pd/C, EtOH']));
+		expect(new Set(pgsOf(answer))).toEqual(new Set(['acetonide']));
+		expect(answer.plans[0]!.protections[0]!.group).toBe('diol-1,2');
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/benzylidene rejected: .*hydrogenation.*"s2"/);
+	});
+
+	it('gives two amines orthogonal PGs that come off at different points — Kocienski, orthogonal amine protection (from memory)', () => {
+		const answer = planRouteDocument(
+			line(
+				['NCCC(CC(=O)O)CCN=[N+]=[N-]', 'NCCC(CC(=O)OC)CCN=[N+]=[N-]', 'NCCC(CC(=O)OC)CCN', 'CC(=O)NCCC(CC(=O)OC)CCN', 'CC(=O)NCCC(CC(=O)OC)CCNC(=O)c1ccccc1'],
+				['MeI, K2CO3, DMF', 'PPh3, THF, H2O', 'Ac2O, pyridine', 'BzCl, Et3N, CH2Cl2']
+			)
+		);
+		expect(answer.plans.length).toBeGreaterThan(0);
+		for (const plan of answer.plans) {
+			const [first, second] = plan.protections;
+			expect(first!.protectingGroup).not.toBe(second!.protectingGroup);
+			expect([first!.removal.after, second!.removal.after]).toEqual(['s2', 's3']);
+			expect(plan.addedSteps).toBe(4);
+		}
+	});
+
+	it('finds no plan for a terminal alkyne that a Grignard step attacks and a later fluoride step would unmask — Greene\'s, TMS alkynes are cleaved by fluoride (from memory)', () => {
+		const answer = planRouteDocument(
+			line(['C#CCCC(C=O)CCO[Si](C)(C)C(C)(C)C', 'C#CCCC(C(C)O)CCO[Si](C)(C)C(C)(C)C', 'C#CCCC(C(C)O)CCO'], ['MeMgBr, THF', 'TBAF, THF'])
+		);
+		expect(answer.plans).toEqual([]);
+		expect(answer.unsolved).toEqual([{ group: 'alkyne-terminal', atoms: [0, 1], reason: expect.stringContaining('Step "s2" makes it impossible') }]);
+	});
+
+	it('finds no plan when a Grignard reagent meets a methyl ester the step keeps — Clayden, esters react with Grignard reagents (from memory)', () => {
+		const answer = planRouteDocument(line(['CC(=O)CCC(=O)OC', 'CC(O)(C)CCC(=O)OC'], ['MeMgBr, THF']));
+		expect(answer.plans).toEqual([]);
+		expect(answer.unsolved![0]!.reason).toMatch(/methyl-ester.*step "s1"|step "s1".*methyl-ester/);
+	});
+
+	it('masks an alcohol from a Grignard reagent as an ether, never as an acetate — Clayden, esters are attacked by organometallics (from memory)', () => {
+		const answer = planRouteDocument(line(['OCCCCC(C)=O', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']));
+		const used = pgsOf(answer);
+		expect(used.some((pg) => ['TES', 'TBS', 'THP', 'TIPS', 'TBDPS'].includes(pg))).toBe(true);
+		expect(used).not.toContain('Ac');
+		expect(answer.plans[0]!.rationale.join(' ')).toContain('Ac rejected: the organometallic conditions of step "s1"');
+	});
+
+	it('rejects Cbz for an amine that must survive a hydrogenation, and offers Boc — Greene\'s, Cbz is cleaved by H2/Pd-C, Boc is not (from memory)', () => {
+		const answer = planRouteDocument(line(['NCCC=CCC(=O)O', 'NCCC=CCC(=O)OC', 'NCCCCCC(=O)OC'], ['MeI, K2CO3, DMF', 'H2, Pd/C, EtOH']));
+		expect(pgsOf(answer)).toContain('Boc');
+		expect(pgsOf(answer)).not.toContain('Cbz');
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/Cbz rejected: the catalytic hydrogenation conditions of step "s2"/);
+	});
+
+	it('masks a thiol as a trityl thioether through a Swern oxidation — Greene\'s, S-trityl protection of thiols (from memory)', () => {
+		const answer = planRouteDocument(line(['SCCCCO', 'SCCCC=O'], ['(COCl)2, DMSO, Et3N']));
+		expect(new Set(pgsOf(answer))).toEqual(new Set(['S-Tr']));
+	});
+
+	it('does not benzylate a phenol with NaH while a ketone is free — common practice, NaH enolises ketones', () => {
+		const answer = planRouteDocument(line(['Oc1ccc(CC(C)=O)cc1', 'Oc1ccc(CC(C)(O)C)cc1'], ['MeMgBr, THF']));
+		expect(pgsOf(answer)).not.toContain('Bn');
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/Bn rejected: installing it \(NaH, BnBr, DMF\) would also attack the free ketone/);
+	});
+
+	it('finds no ester that carries a carboxylic acid through a Grignard step — Clayden, esters are attacked by organometallics (from memory)', () => {
+		const answer = planRouteDocument(line(['OC(=O)CCCC(C)=O', 'OC(=O)CCCC(C)(C)O'], ['MeMgBr, THF']));
+		expect(answer.plans).toEqual([]);
+		expect(answer.unsolved![0]).toMatchObject({ group: 'carboxylic-acid', reason: expect.stringContaining('methyl-ester rejected') });
+	});
+
+	it('adds nothing when no step attacks a bystander — common practice (a Swern oxidation of a lone alcohol)', () => {
+		const answer = planRouteDocument(line(['CCCCO', 'CCCC=O'], ['(COCl)2, DMSO, Et3N']));
+		expect(answer.plans).toHaveLength(1);
+		expect(answer.plans[0]).toMatchObject({ rank: 1, addedSteps: 0, protections: [] });
+	});
+
+	it('ranks plans by added steps, then cautions, then harshness, and returns at most five — common practice', () => {
+		const answer = planRouteDocument(line(['OCCCCC(C)=O', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']));
+		expect(answer.plans.length).toBeLessThanOrEqual(5);
+		expect(answer.plans.map((p) => p.rank)).toEqual(answer.plans.map((_, i) => i + 1));
+		const scores = answer.plans.map((p) => p.score);
+		expect([...scores].sort((a, b) => a - b)).toEqual(scores);
+	});
+
+	it('masks two ketones in one ketalisation and frees them in one hydrolysis — Greene\'s, acetals form and hydrolyse under the same acid catalysis (from memory)', () => {
+		const answer = planRouteDocument(line(['CC(=O)CCC(CC=O)CCC(C)=O', 'CC(=O)CCC(CC(C)O)CCC(C)=O'], ['MeMgBr, THF']));
+		const best = answer.plans[0]!;
+		expect(best.protections).toHaveLength(2);
+		expect(best.protections[0]!.protectingGroup).toBe(best.protections[1]!.protectingGroup);
+		expect(best.protections[0]!.intermediate).toBe(best.protections[1]!.intermediate);
+		expect(best.addedSteps).toBe(2);
+		expect(best.rationale.join(' ')).toContain('on 2 groups of the same kind at once');
+	});
+
+	it('says plainly that a convergent route is not planned yet — common practice', () => {
+		const doc: RouteDocument = {
+			name: 'OG-2031 coupling',
+			intermediates: [{ id: 'a', structure: 'CC(=O)O' }, { id: 'b', structure: 'NCC' }, { id: 'c', structure: 'CC(=O)NCC' }],
+			steps: [{ id: 'join', from: ['a', 'b'], to: 'c', reagents: 'HATU, DIPEA, DMF' }]
+		};
+		expect(planRouteDocument(doc).unsolved![0]!.reason).toContain('step "join" joins 2 intermediates');
+	});
+});
