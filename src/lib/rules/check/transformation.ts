@@ -26,15 +26,17 @@ export function transformation(substrates: string[], product: string): Transform
 	const key = `${substrates.join('\u0000')}\u0001${product}`;
 	const stored = cache.get(key);
 	if (stored) return stored;
-	const from = combinedMolecule(substrates);
-	const to = readStructure(product).molecule;
-	// The intermediates of a route recur as substrate and product, so perceive through the text cache.
-	const before = substrates.length === 1 ? perceiveText(substrates[0]!) : perceive(from);
+	// The intermediates of a route recur as substrate and product, so perceive through the text
+	// cache; molecules are read again only when the atoms must be mapped.
+	const combined = substrates.length === 1 ? null : combinedMolecule(substrates);
+	const before = combined ? perceive(combined) : perceiveText(substrates[0]!);
 	const after = perceiveText(product);
 	// Counting decides most steps: a group id that keeps its count survives, one that vanishes
 	// changed. Only when some but not all instances of an id vanish must the atoms be mapped
 	// (the maximum common substructure is the slow part) to tell which one reacted.
-	const map = ambiguous(before, after) ? mapAtoms(from, to) : null;
+	const map = ambiguous(before, after)
+		? mapAtoms(combined ?? readStructure(substrates[0]!).molecule, readStructure(product).molecule)
+		: null;
 	const result = compare(before, after, map);
 	cache.set(key, result);
 	return result;
