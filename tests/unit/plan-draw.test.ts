@@ -1,15 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { perceiveText } from '../../src/lib/chem';
-import { canDraw, protectedStructure } from '../../src/lib/rules/plan/draw';
+import { protectedStructure } from '../../src/lib/rules/plan/draw';
 import { freeUnits } from '../../src/lib/rules/plan/track';
 import rows from '../../rules/protecting-groups.json';
 
-// Every PG the rule table knows is drawn onto a small invented substrate of each group type it
-// protects, and perception must find that PG again (the drawing and the perception rules agree).
+// Every PG the rule table knows is drawn, with its install transform, onto a small invented
+// substrate of each group type it protects, and perception must find that PG again, masking that
+// group (the transforms and the perception rules agree).
 // Structures of the protected forms: common practice (Greene's, 5th ed. — from memory).
 const MODELS: Record<string, string> = {
 	'alcohol-primary': 'OCCCC',
 	'alcohol-secondary': 'CC(O)CC',
+	'alcohol-tertiary': 'CC(C)(O)CC',
 	phenol: 'Oc1ccccc1',
 	'diol-1,2': 'OCC(O)CCC',
 	'diol-1,3': 'OCCC(O)CC',
@@ -24,18 +26,20 @@ const MODELS: Record<string, string> = {
 };
 
 describe('drawing protected intermediates', () => {
-	for (const row of rows as { id: string; protects: string[] }[]) {
+	for (const row of rows) {
 		it(`draws ${row.id} so that perception finds it again`, () => {
-			expect(canDraw(row.id)).toBe(true);
-			for (const group of row.protects.filter((g) => MODELS[g])) {
+			for (const group of row.protects) {
+				expect(MODELS[group], `a model substrate for ${group}`).toBeDefined();
+				const transform = row.install.transforms.find((t) => t.groups.includes(group))!.smarts;
 				const unit = freeUnits(MODELS[group]!).find((u) => u.id === group)!;
-				const drawn = protectedStructure(MODELS[group]!, [{ pg: row.id, atoms: unit.atoms }]);
-				expect(perceiveText(drawn).protectingGroups.map((pg) => pg.id), `${row.id} on ${group}: ${drawn}`).toContain(row.id);
+				const drawn = protectedStructure(MODELS[group]!, [{ pg: row.id, transform, atoms: unit.atoms }]);
+				const found = perceiveText(drawn).protectingGroups.filter((pg) => pg.id === row.id);
+				expect(found.map((pg) => pg.masks), `${row.id} on ${group}: ${drawn}`).toContain(group);
 			}
 		});
 	}
 
 	it('draws a dioxolane in place of a ketone oxygen — Greene\'s (from memory)', () => {
-		expect(protectedStructure('CC(=O)CCC', [{ pg: 'dioxolane', atoms: [0, 1, 2, 3] }])).toBe('CCCC1(C)OCCO1');
+		expect(protectedStructure('CC(=O)CCC', [{ pg: 'dioxolane', transform: '[C:1]=O>>[C:1]1OCCO1', atoms: [0, 1, 2, 3] }])).toBe('CCCC1(C)OCCO1');
 	});
 });

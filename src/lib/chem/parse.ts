@@ -11,6 +11,8 @@ import { validateMolecule } from './validate';
 export type ReadOptions = {
 	/** Invent 2D coordinates and read stereo for a SMILES (needed to draw it or for a stereo-aware key). */
 	coordinates?: boolean;
+	/** Keep a SMILES's stereo without inventing coordinates (to transform it and write it out again). */
+	stereo?: boolean;
 	/**
 	 * Collect openchemlib's validate() warnings (default true). Perception drops them, and
 	 * validate() perceives stereo (~2 ms a molecule, most of a cold perception); errors are the same
@@ -59,7 +61,7 @@ function readSmiles(text: string, options: ReadOptions): ParsedStructure {
 	try {
 		molecule = options.coordinates
 			? Molecule.fromSmiles(smiles)
-			: Molecule.fromSmiles(smiles, { noCoordinates: true, noStereo: true });
+			: Molecule.fromSmiles(smiles, { noCoordinates: true, noStereo: !options.stereo });
 	} catch (caught) {
 		throw smilesError(caught, offset);
 	}

@@ -98,6 +98,19 @@ export const methodSchema = z.strictObject({
 });
 
 /**
+ * How the planner draws the PG onto a free group: a reaction SMARTS run with openchemlib's Reactor
+ * on the chosen atoms, e.g. `[O;H1:1]>>[O:1][Si](C)(C)C(C)(C)C` for TBS on any alcohol. Mapped
+ * atoms stay, unmapped reactant atoms leave (a carbonyl's O), unmapped product atoms are the PG.
+ */
+export const transformSchema = z.strictObject({
+	groups: z.array(freeGroupIdSchema).min(1),
+	smarts: text.regex(/^[^>]+>>[^>]+$/, 'must be one reaction SMARTS, "reactant>>product"')
+});
+
+/** The usual install method, with the transforms that draw its result. */
+export const installSchema = methodSchema.extend({ transforms: z.array(transformSchema).min(1) });
+
+/**
  * The condition half of a protecting-group row (rules/protecting-groups.json): `install` is the
  * usual method; `remove` lists alternative methods; `stability` rates EVERY condition class (a
  * missing cell is a load error); `source` credits the ratings. The perception half of the same
@@ -105,7 +118,7 @@ export const methodSchema = z.strictObject({
  */
 export const protectingGroupConditionsSchema = z.object({
 	id: protectingGroupIdSchema,
-	install: methodSchema,
+	install: installSchema,
 	remove: z.array(methodSchema).min(1),
 	stability: z.record(conditionIdSchema, stabilityRatingSchema, {
 		// zod reports extra keys of an enum-keyed record as `unrecognized_keys` (not in its types).
@@ -132,4 +145,5 @@ export type Condition = z.output<typeof conditionSchema>;
 export type Reagent = z.output<typeof reagentSchema>;
 export type ReactivityEntry = z.output<typeof reactivitySchema>;
 export type Method = z.output<typeof methodSchema>;
+export type Transform = z.output<typeof transformSchema>;
 export type ProtectingGroupConditions = z.output<typeof protectingGroupConditionsSchema>;

@@ -153,6 +153,7 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 	}
 	if (reagents) checkReagentSpellings(reagents, problems);
 	if (reagents && protectingGroups) checkReagentRatings(protectingGroups, reagents, problems);
+	if (protectingGroups) checkTransformCoverage(protectingGroups, problems);
 	if (reactivity) checkReactivityPairs(reactivity, problems);
 
 	if (problems.length > 0 || !conditions || !reagents || !reactivity || !protectingGroups) {
@@ -173,5 +174,23 @@ function checkReagentRatings(pgs: ProtectingGroupConditions[], reagents: Reagent
 				problems.push(formatIssue(RULE_FILES.protectingGroups, where, `"${entry.reagent}" does not bring ${entry.condition} in ${RULE_FILES.reagents}`));
 			}
 		});
+	});
+}
+
+/** Every group a PG protects is drawn by exactly one of its install transforms, and no other group is. */
+function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: string[]) {
+	pgs.forEach((pg, index) => {
+		// `protects` belongs to the row's perception half (loose here; chem/patterns.ts validates it).
+		const protects = (pg as { protects?: unknown }).protects;
+		if (!Array.isArray(protects)) return;
+		const drawn = pg.install.transforms.flatMap((t) => t.groups);
+		const where = [index, 'install', 'transforms'];
+		for (const group of protects) {
+			const count = drawn.filter((g) => g === group).length;
+			if (count !== 1) problems.push(formatIssue(RULE_FILES.protectingGroups, where, `${count === 0 ? 'no' : count} transforms for "${group}" (each protected group needs exactly one)`));
+		}
+		for (const group of new Set(drawn)) {
+			if (!protects.includes(group)) problems.push(formatIssue(RULE_FILES.protectingGroups, where, `a transform for "${group}", which the row does not protect`));
+		}
 	});
 }

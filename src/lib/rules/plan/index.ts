@@ -6,7 +6,7 @@ import { checkRulesFrom } from '../check/rules-adapter';
 import type { CheckRules } from '../check/types';
 import { loadRuleTable, type RuleTable } from '../table';
 import { linearChain, type Chain } from './chain';
-import { canDraw, clearDrawCache } from './draw';
+import { clearDrawCache } from './draw';
 import { judgeCandidates, type Judged } from './options';
 import { drawRoute } from './route';
 import { scoreOf, searchChoices } from './search';
@@ -14,7 +14,6 @@ import { clearFollowCache, findNeeds } from './track';
 import type { Need, Option, Plan, PlanAnswer, Unsolved } from './types';
 
 export type * from './types';
-export { canDraw } from './draw';
 
 /** Forgets the planner's caches (mappings and drawings), e.g. before a cold benchmark run. */
 export function clearPlanCaches(): void {
@@ -42,7 +41,7 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 		if (problem) return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: `No free group needs masking, but the route still clashes: ${problem}` }] };
 		return { plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale: ['No step attacks a free group that stands by: nothing needs masking.'] }] };
 	}
-	const judged = needs.map((_, i) => judgeCandidates(table, rules, chain, needs, i).map((j) => drawable(j)));
+	const judged = needs.map((_, i) => judgeCandidates(table, rules, chain, needs, i));
 	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, chain, need, judged[i]!)]));
 	if (unsolved.length) return { plans: [], unsolved };
 	const optionLists = judged.map((list) => list.flatMap((j) => j.options).sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness));
@@ -67,11 +66,6 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 	if (plans.length) return { plans };
 	const reason = firstProblem ? `Every combination of admissible protecting groups still clashes when re-checked: ${firstProblem}` : 'No combination of protecting groups is orthogonal: each choice for one group would strip another.';
 	return { plans: [], unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason })) };
-}
-
-function drawable(judged: Judged): Judged {
-	if (judged.options.length === 0 || canDraw(judged.pg)) return judged;
-	return { ...judged, options: [], rejected: `${judged.pg} rejected: the planner cannot draw it yet` };
 }
 
 function because(rules: CheckRules, chain: Chain, need: Need, option: Option): string {

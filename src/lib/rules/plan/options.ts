@@ -39,6 +39,8 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, chain: Chai
 	const protects = new Map(perceptionRules().protectingGroups.map((pg) => [pg.id, pg.protects]));
 	const rows = table.protectingGroups.filter((row) => protects.get(row.id)?.includes(need.group));
 	return rows.map((row): Judged => {
+		const transform = row.install.transforms.find((t) => (t.groups as readonly string[]).includes(need.group))?.smarts;
+		if (!transform) return { pg: row.id, options: [], rejected: `${row.id} rejected: the rule table has no install transform to draw it on a ${rules.groupLabel(need.group)}` };
 		let cautions = 0;
 		for (let step = need.installGap; step < need.freeGap; step++) {
 			for (const c of chain.conditions[step]!) {
@@ -65,6 +67,7 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, chain: Chai
 			}
 			options.push({
 				pg: row.id,
+				transform,
 				install,
 				removal: { reagents, conditions: [...method.conditions] },
 				cautions: cautions + installHarm.cautions + removalHarm.cautions,

@@ -21,7 +21,7 @@ export function drawRoute(doc: RouteDocument, chain: Chain, needs: Need[], optio
 	};
 	const n = chain.steps.length;
 	const structureAt = (k: number, active: number[]) =>
-		protectedStructure(chain.nodes[k]!.structure, active.map((x) => ({ pg: options[x]!.pg, atoms: needs[x]!.atomsAt.get(k)! })));
+		protectedStructure(chain.nodes[k]!.structure, active.map((x) => ({ pg: options[x]!.pg, transform: options[x]!.transform, atoms: needs[x]!.atomsAt.get(k)! })));
 	const intermediates: RouteIntermediate[] = [];
 	const steps: RouteStep[] = [];
 	const protections: Protection[] = [];

@@ -24,6 +24,8 @@ export type Need = {
 /** A way to mask one need: the PG and one install and one removal option. */
 export type Option = {
 	pg: string;
+	/** The install transform (reaction SMARTS) that draws this PG on this need's group. */
+	transform: string;
 	install: { reagents: string; conditions: string[] };
 	removal: { reagents: string; conditions: string[] };
 	cautions: number;
