@@ -46,10 +46,30 @@ describe('migrations', () => {
 		expect(await migrate(sequelize)).toEqual([]);
 		const tables = async () =>
 			(await sequelize.getQueryInterface().showAllTables()).filter((t) => t !== 'schema_migrations').sort();
-		expect(await tables()).toEqual(['activity_events', 'api_tokens', 'intermediates', 'memberships', 'projects', 'routes', 'set_password_links', 'steps', 'teams', 'users']);
+		expect(await tables()).toEqual(['activity_events', 'api_tokens', 'intermediates', 'memberships', 'planned_routes', 'projects', 'routes', 'set_password_links', 'steps', 'teams', 'users']);
 		await migrateDownAll(sequelize);
 		expect(await tables()).toEqual([]);
 		expect(await migrate(sequelize)).toHaveLength(migrations.length);
+		await sequelize.close();
+	});
+
+	it('roll back the planned-route links without touching the routes, their intermediates or steps', async () => {
+		const sequelize = createSequelize(`sqlite:${path.join(dir, 'links.db')}`);
+		await migrate(sequelize);
+		const qi = sequelize.getQueryInterface();
+		const at = new Date();
+		const ids = { team: crypto.randomUUID(), project: crypto.randomUUID(), route: crypto.randomUUID() };
+		await qi.bulkInsert('teams', [{ id: ids.team, name: 'Cormorant team', createdAt: at, updatedAt: at }]);
+		await qi.bulkInsert('projects', [{ id: ids.project, teamId: ids.team, name: 'Cormorant', description: '', createdAt: at, updatedAt: at }]);
+		await qi.bulkInsert('routes', [{ id: ids.route, projectId: ids.project, name: 'OG-2031', status: 'draft', version: 1, createdAt: at, updatedAt: at }]);
+		await qi.bulkInsert('intermediates', [{ id: crypto.randomUUID(), routeId: ids.route, key: 'a', structure: 'CC(=O)CCC(=O)OC', ordinal: 0, createdAt: at, updatedAt: at }]);
+		await qi.bulkInsert('planned_routes', [{ id: crypto.randomUUID(), routeId: ids.route, plannedFromId: null, rank: 1, createdAt: at, updatedAt: at }]);
+		await migrations.find((m) => m.name === '0003-planned-routes')!.down(qi);
+		const count = async (table: string) =>
+			(await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM ${table}`, { type: QueryTypes.SELECT }))[0]!.n;
+		expect(await count('routes')).toBe(1);
+		expect(await count('intermediates')).toBe(1);
+		expect((await qi.showAllTables()).includes('planned_routes')).toBe(false);
 		await sequelize.close();
 	});
 });

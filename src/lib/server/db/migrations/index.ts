@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import * as foundation from './0001-foundation';
 import * as routes from './0002-routes';
+import * as plannedRoutes from './0003-planned-routes';
 
 export type Migration = {
 	name: string;
@@ -14,5 +15,6 @@ export type Migration = {
  */
 export const migrations: Migration[] = [
 	{ name: '0001-foundation', ...foundation },
-	{ name: '0002-routes', ...routes }
+	{ name: '0002-routes', ...routes },
+	{ name: '0003-planned-routes', ...plannedRoutes }
 ];

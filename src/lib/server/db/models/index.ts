@@ -3,6 +3,7 @@ import { ActivityEvent } from './activity-event';
 import { ApiToken } from './api-token';
 import { Intermediate } from './intermediate';
 import { Membership } from './membership';
+import { PlannedRoute } from './planned-route';
 import { Project } from './project';
 import { Route } from './route';
 import { SetPasswordLink } from './set-password-link';
@@ -10,12 +11,12 @@ import { Step } from './step';
 import { Team } from './team';
 import { User } from './user';
 
-export { ActivityEvent, ApiToken, Intermediate, Membership, Project, Route, SetPasswordLink, Step, Team, User };
+export { ActivityEvent, ApiToken, Intermediate, Membership, PlannedRoute, Project, Route, SetPasswordLink, Step, Team, User };
 export { ROUTE_STATUSES, type RouteStatus } from './route';
 
 /** Binds every model to one Sequelize instance and wires the associations. */
 export function initModels(sequelize: Sequelize) {
-	for (const model of [User, Team, Membership, ApiToken, SetPasswordLink, Project, ActivityEvent, Route, Intermediate, Step]) {
+	for (const model of [User, Team, Membership, ApiToken, SetPasswordLink, Project, ActivityEvent, Route, Intermediate, Step, PlannedRoute]) {
 		model.initModel(sequelize);
 	}
 	Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' });
@@ -27,4 +28,6 @@ export function initModels(sequelize: Sequelize) {
 	Route.belongsTo(Project, { as: 'project', foreignKey: 'projectId' });
 	Route.hasMany(Intermediate, { as: 'intermediates', foreignKey: 'routeId' });
 	Route.hasMany(Step, { as: 'steps', foreignKey: 'routeId' });
+	PlannedRoute.belongsTo(Route, { as: 'route', foreignKey: 'routeId' });
+	PlannedRoute.belongsTo(Route, { as: 'plannedFrom', foreignKey: 'plannedFromId' });
 }
