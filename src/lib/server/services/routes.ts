@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { RouteDocument } from '../../route/document';
 import type { SessionUser } from '../../types';
-import { dbReady, Intermediate, Project, Route, Step } from '../db';
+import { dbReady, Intermediate, PlannedRoute, Project, Route, Step } from '../db';
 import { recordActivity } from './activity';
 
 export type RouteSummary = { id: string; name: string; status: string; version: number; updatedAt: Date; archived: boolean };
@@ -65,8 +65,11 @@ async function writeChildren(routeId: string, doc: RouteDocument, transaction: T
 	);
 }
 
-/** Creates a route from a validated route document. */
-export async function createRoute(actor: SessionUser, project: Project, doc: RouteDocument): Promise<Route> {
+/** Where a route saved from a plan came from: the planned route and the plan's rank. */
+export type PlanOrigin = { from: Route; rank: number };
+
+/** Creates a route from a validated route document; `origin` links a saved plan to its route. */
+export async function createRoute(actor: SessionUser, project: Project, doc: RouteDocument, origin?: PlanOrigin): Promise<Route> {
 	await dbReady();
 	return Route.sequelize!.transaction(async (transaction) => {
 		const route = await Route.create(
@@ -74,19 +77,51 @@ export async function createRoute(actor: SessionUser, project: Project, doc: Rou
 			{ transaction }
 		);
 		await writeChildren(route.id, doc, transaction);
+		if (origin) {
+			await PlannedRoute.create({ routeId: route.id, plannedFromId: origin.from.id, rank: origin.rank }, { transaction });
+		}
 		await recordActivity(
 			{
 				teamId: project.teamId,
 				projectId: project.id,
 				actorId: actor.id,
-				kind: 'route.created',
-				summary: `${actor.name} created the route “${route.name}”.`,
-				details: { routeId: route.id }
+				kind: origin ? 'route.planned' : 'route.created',
+				summary: origin
+					? `${actor.name} saved plan ${origin.rank} for “${origin.from.name}” as the route “${route.name}”.`
+					: `${actor.name} created the route “${route.name}”.`,
+				details: { routeId: route.id, ...(origin ? { plannedFromId: origin.from.id, rank: origin.rank } : {}) }
 			},
 			transaction
 		);
 		return route;
 	});
+}
+
+/** The name of a route saved from plan `rank`, cut so the suffix fits in 120 characters. */
+export function plannedRouteName(name: string, rank: number): string {
+	const suffix = ` (protected, plan ${rank})`;
+	return `${name.slice(0, 120 - suffix.length).trimEnd()}${suffix}`;
+}
+
+export type RouteLink = { id: string; name: string; rank: number };
+export type RouteLinks = { plannedFrom: RouteLink | null; plannedVersions: RouteLink[] };
+
+/** The route a planned route was saved from, and the routes saved from this one's plans. */
+export async function routeLinks(route: Route): Promise<RouteLinks> {
+	await dbReady();
+	const [origin, versions] = await Promise.all([
+		PlannedRoute.findOne({ where: { routeId: route.id }, include: [{ model: Route, as: 'plannedFrom' }] }),
+		PlannedRoute.findAll({
+			where: { plannedFromId: route.id },
+			include: [{ model: Route, as: 'route' }],
+			order: [['createdAt', 'ASC']]
+		})
+	]);
+	const from = origin?.plannedFrom;
+	return {
+		plannedFrom: from && origin ? { id: from.id, name: from.name, rank: origin.rank } : null,
+		plannedVersions: versions.flatMap((v) => (v.route ? [{ id: v.route.id, name: v.route.name, rank: v.rank }] : []))
+	};
 }
 
 /** The stored route as a route document, children in the order they were saved. */

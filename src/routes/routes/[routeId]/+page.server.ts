@@ -2,7 +2,7 @@ import type { PageServerLoad } from './$types';
 import { can } from '$lib/policy';
 import { analyzeStructure, type Analysis } from '$lib/chem';
 import { requireRouteAction } from '$lib/server/auth/guards';
-import { routeDocument } from '$lib/server/services/routes';
+import { routeDocument, routeLinks } from '$lib/server/services/routes';
 
 export const load: PageServerLoad = async (event) => {
 	const { route, project, role } = await requireRouteAction(
@@ -10,7 +10,7 @@ export const load: PageServerLoad = async (event) => {
 		event.params.routeId,
 		'project.read'
 	);
-	const document = await routeDocument(route);
+	const [document, links] = await Promise.all([routeDocument(route), routeLinks(route)]);
 	// Depictions come with the page, so a reload shows the drawings without a request per node;
 	// a structure that cannot be read is left out and its node shows the reason instead.
 	const analyses: Record<string, Analysis> = {};
@@ -33,6 +33,7 @@ export const load: PageServerLoad = async (event) => {
 		project: { id: project.id, name: project.name },
 		document,
 		analyses,
+		links,
 		role,
 		canEdit: can(role, 'route.edit')
 	};
