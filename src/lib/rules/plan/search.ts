@@ -15,49 +15,118 @@ export const scoreOf = (added: number, cautions: number, harshness: number) => a
 
 /** Whether two chosen options can share a route: neither one's install or removal strips the other's PG. */
 function compatible(rules: CheckRules, needs: Need[], x: number, ox: Option, y: number, oy: Option): boolean {
-	const strips = (a: number, oa: Option, b: number, ob: Option) => {
-		const na = needs[a]!;
-		const sameRemoval = removalKey(na, oa) === removalKey(needs[b]!, ob);
-		const sameInstall = installKey(na, oa) === installKey(needs[b]!, ob);
-		// A same-type neighbour left free at this install would be attacked by it, unless it shares the step.
-		if (!sameInstall && needs[b]!.installGap === na.installGap && needs[b]!.group === na.group) {
-			if (oa.install.conditions.some((c) => rules.reactivity(na.group, c)?.rating === 'reacts')) return true;
-		}
-		const exposed = [
-			...(maskedAt(needs, b, na.installGap, a, 'install') && !sameInstall ? oa.install.conditions : []),
-			...(maskedAt(needs, b, na.freeGap, a, 'removal') && !sameRemoval ? oa.removal.conditions : [])
-		];
-		return exposed.some((c) => rules.stability(ob.pg, c, []).rating === 'labile');
-	};
-	return !strips(x, ox, y, oy) && !strips(y, oy, x, ox);
+	return !strips(rules, needs, x, ox, y, oy) && !strips(rules, needs, y, oy, x, ox);
 }
 
-/** Up to `keep` cheapest joint choices, cheapest first, ties in candidate order (stable), e.g. dioxolane for a ketone before dimethyl acetal only if it is milder. */
+/** Whether need a's install or removal, done with option oa, would strip need b's PG ob. */
+function strips(rules: CheckRules, needs: Need[], a: number, oa: Option, b: number, ob: Option): boolean {
+	const na = needs[a]!;
+	const sameRemoval = removalKey(na, oa) === removalKey(needs[b]!, ob);
+	const sameInstall = installKey(na, oa) === installKey(needs[b]!, ob);
+	// A same-type neighbour left free at this install would be attacked by it, unless it shares the step.
+	if (!sameInstall && needs[b]!.installGap === na.installGap && needs[b]!.group === na.group) {
+		if (oa.install.conditions.some((c) => rules.reactivity(na.group, c)?.rating === 'reacts')) return true;
+	}
+	const exposed = [
+		...(maskedAt(needs, b, na.installGap, a, 'install') && !sameInstall ? oa.install.conditions : []),
+		...(maskedAt(needs, b, na.freeGap, a, 'removal') && !sameRemoval ? oa.removal.conditions : [])
+	];
+	return exposed.some((c) => rules.stability(ob.pg, c, []).rating === 'labile');
+}
+
+/** Counts of keys in use, so a step shared by several needs is counted once. */
+class KeyCounts {
+	readonly #counts = new Map<string, number>();
+	get size(): number {
+		return this.#counts.size;
+	}
+	has(key: string): boolean {
+		return this.#counts.has(key);
+	}
+	add(key: string): void {
+		this.#counts.set(key, (this.#counts.get(key) ?? 0) + 1);
+	}
+	remove(key: string): void {
+		const left = this.#counts.get(key)! - 1;
+		if (left === 0) this.#counts.delete(key);
+		else this.#counts.set(key, left);
+	}
+}
+
+/**
+ * Up to `keep` cheapest joint choices with distinct PG assignments, cheapest first, ties in
+ * candidate order (stable), e.g. dioxolane for a ketone before dimethyl acetal only if it is milder.
+ */
 export function searchChoices(rules: CheckRules, needs: Need[], options: Option[][], keep: number): Choice[] {
 	const best: Choice[] = [];
-	const chosen: Option[] = [];
-	const worst = () => (best.length < keep ? Infinity : best[best.length - 1]!.score);
-	// The cheapest option of each need from `depth` on: cautions and harshness still to come.
+	const chosen: number[] = [];
+	const installKeys = options.map((list, x) => list.map((o) => installKey(needs[x]!, o)));
+	const removalKeys = options.map((list, x) => list.map((o) => removalKey(needs[x]!, o)));
+	// Pairwise compatibility is asked again and again on the way down: work each pair out once.
+	const pairs = new Map<number, Uint8Array>();
+	const fits = (x: number, i: number, y: number, j: number) => {
+		const key = x * needs.length + y;
+		let table = pairs.get(key);
+		if (!table) pairs.set(key, (table = new Uint8Array(options[x]!.length * options[y]!.length)));
+		const cell = i * options[y]!.length + j;
+		if (table[cell] === 0) table[cell] = compatible(rules, needs, x, options[x]![i]!, y, options[y]![j]!) ? 1 : 2;
+		return table[cell] === 1;
+	};
+	// Lower bounds for the needs from `depth` on: their cheapest ratings, and one install per
+	// (gap, group type) and one removal per gap that no choice so far already brings.
 	const floor = options.map((list) => Math.min(...list.map((o) => scoreOf(0, o.cautions, o.harshness))));
 	const rest = floor.map((_, i) => floor.slice(i).reduce((sum, v) => sum + v, 0));
-	const visit = (depth: number, installs: Set<string>, removals: Set<string>, cautions: number, harshness: number) => {
+	const installClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => `${n.installGap}|${n.group}|`))]);
+	const removalClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => `${n.freeGap}|`))]);
+	const installs = new KeyCounts();
+	const removals = new KeyCounts();
+	const installClassesUsed = new KeyCounts();
+	const removalClassesUsed = new KeyCounts();
+	const worst = () => (best.length < keep ? Infinity : best[best.length - 1]!.score);
+	const stepsStillToCome = (depth: number) =>
+		depth === needs.length
+			? 0
+			: installClasses[depth]!.filter((c) => !installClassesUsed.has(c)).length + removalClasses[depth]!.filter((c) => !removalClassesUsed.has(c)).length;
+	const visit = (depth: number, cautions: number, harshness: number) => {
 		const added = installs.size + removals.size;
-		// Later needs may share steps already counted, so only their cheapest ratings bound them.
-		if (best.length >= keep && scoreOf(added, cautions, harshness) + (rest[depth] ?? 0) >= worst()) return;
+		if (best.length >= keep && scoreOf(added + stepsStillToCome(depth), cautions, harshness) + (rest[depth] ?? 0) >= worst()) return;
 		if (depth === needs.length) {
-			best.push({ options: [...chosen], score: scoreOf(added, cautions, harshness), addedSteps: added, cautions, harshness });
-			best.sort((a, b) => a.score - b.score);
-			if (best.length > keep) best.pop();
+			record({ options: chosen.map((i, x) => options[x]![i]!), score: scoreOf(added, cautions, harshness), addedSteps: added, cautions, harshness });
 			return;
 		}
-		for (const option of options[depth]!) {
-			if (!chosen.every((other, j) => compatible(rules, needs, depth, option, j, other))) continue;
-			const add = (set: Set<string>, key: string) => (set.has(key) ? set : new Set([...set, key]));
-			chosen.push(option);
-			visit(depth + 1, add(installs, installKey(needs[depth]!, option)), add(removals, removalKey(needs[depth]!, option)), cautions + option.cautions, harshness + option.harshness);
+		options[depth]!.forEach((option, i) => {
+			for (let j = 0; j < depth; j++) if (!fits(depth, i, j, chosen[j]!)) return;
+			const install = installKeys[depth]![i]!;
+			const removal = removalKeys[depth]![i]!;
+			const installClass = `${needs[depth]!.installGap}|${needs[depth]!.group}|`;
+			const removalClass = `${needs[depth]!.freeGap}|`;
+			chosen.push(i);
+			installs.add(install);
+			removals.add(removal);
+			installClassesUsed.add(installClass);
+			removalClassesUsed.add(removalClass);
+			visit(depth + 1, cautions + option.cautions, harshness + option.harshness);
+			removalClassesUsed.remove(removalClass);
+			installClassesUsed.remove(installClass);
+			removals.remove(removal);
+			installs.remove(install);
 			chosen.pop();
-		}
+		});
 	};
-	visit(0, new Set(), new Set(), 0, 0);
+	// Plans that differ only in which recipe takes the same PGs off read as one plan to a chemist:
+	// keep the cheapest of each assignment, so the list offers real alternatives.
+	const record = (choice: Choice) => {
+		const same = best.findIndex((other) => signature(other.options) === signature(choice.options));
+		if (same >= 0) {
+			if (best[same]!.score <= choice.score) return;
+			best.splice(same, 1);
+		}
+		best.push(choice);
+		best.sort((a, b) => a.score - b.score);
+		if (best.length > keep) best.pop();
+	};
+	visit(0, 0, 0);
 	return best;
 }
+
+const signature = (options: Option[]) => options.map((o) => o.pg).join('|');
