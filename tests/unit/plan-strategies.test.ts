@@ -107,6 +107,8 @@ describe('strategy cases from textbook practice', () => {
 		expect(answer.plans.map((p) => p.rank)).toEqual(answer.plans.map((_, i) => i + 1));
 		const scores = answer.plans.map((p) => p.score);
 		expect([...scores].sort((a, b) => a - b)).toEqual(scores);
+		// Each plan is a different choice of protecting group, not the same PG taken off another way.
+		expect(new Set(pgsOf(answer)).size).toBe(answer.plans.length);
 	});
 
 	it('masks two ketones in one ketalisation and frees them in one hydrolysis — Greene\'s, acetals form and hydrolyse under the same acid catalysis (from memory)', () => {
