@@ -136,6 +136,43 @@ describe('route editor autosave', () => {
 	});
 });
 
+describe('route editor flush (before the planner reads the stored route)', () => {
+	it('waits for a save on its way and sends edits made meanwhile, then reports the route stored', async () => {
+		const editor = make();
+		answers = [ok(2), ok(3)];
+		release = () => undefined;
+		editor.rename('First');
+		await vi.advanceTimersByTimeAsync(1000);
+		editor.rename('Second');
+		let stored: boolean | null = null;
+		void editor.flush().then((done) => (stored = done));
+		await vi.advanceTimersByTimeAsync(0);
+		expect(stored).toBeNull();
+		const finish = release as () => void;
+		release = null;
+		finish();
+		await vi.advanceTimersByTimeAsync(0);
+		expect(stored).toBe(true);
+		expect(client.save).toHaveBeenCalledTimes(2);
+		expect(client.save.mock.calls[1]).toEqual(['r', 2, { ...doc, name: 'Second' }]);
+		expect(editor.version).toBe(3);
+	});
+
+	it('reports false on a conflict or a failed save, and true at once with nothing to send', async () => {
+		const conflicted = make();
+		answers = [{ ok: false, status: 409, code: 'version-conflict', message: 'changed' }];
+		conflicted.rename('Mine');
+		expect(await conflicted.flush()).toBe(false);
+		const offline = make();
+		answers = [{ ok: false, status: 0, code: 'network', message: 'offline' }];
+		offline.rename('Offline');
+		expect(await offline.flush()).toBe(false);
+		expect(await make().flush()).toBe(true);
+		expect(await make(false).flush()).toBe(true);
+		expect(client.save).toHaveBeenCalledTimes(2);
+	});
+});
+
 describe('route editor undo and roles', () => {
 	it('undoes a burst of typing in one field as one edit', () => {
 		const editor = make();

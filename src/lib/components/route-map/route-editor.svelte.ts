@@ -47,7 +47,7 @@ export class RouteEditor {
 	#savedDoc: RouteDocument;
 	#coalesce: { key: string; at: number } | null = null;
 	#timer: ReturnType<typeof setTimeout> | undefined;
-	#inFlight = false;
+	#inFlight: Promise<unknown> | null = null;
 
 	constructor(
 		init: Init,
@@ -199,10 +199,11 @@ export class RouteEditor {
 		if (this.#inFlight || this.#saveState === 'conflict' || !this.canEdit) return;
 		const sent = this.#doc;
 		if (sent === this.#savedDoc) return void (this.#saveState = 'saved');
-		this.#inFlight = true;
 		this.#saveState = 'saving';
-		const result = await this.client.save(this.routeId, this.#version, sent);
-		this.#inFlight = false;
+		const request = this.client.save(this.routeId, this.#version, sent);
+		this.#inFlight = request;
+		const result = await request;
+		this.#inFlight = null;
 		if (result.ok) {
 			this.#version = result.data.version;
 			this.#savedDoc = sent;
@@ -215,6 +216,22 @@ export class RouteEditor {
 			this.#saveState = 'failed';
 			this.#failure = result.message;
 		}
+	}
+
+	/**
+	 * Saves what is on the page and waits until the server holds it, for actions that read the
+	 * stored route (the planner). False when it could not be saved (a conflict or a failure).
+	 */
+	async flush(): Promise<boolean> {
+		while (this.canEdit && this.#saveState !== 'saved') {
+			if (this.#saveState === 'conflict') return false;
+			if (this.#inFlight) await this.#inFlight;
+			else {
+				await this.saveNow();
+				if (this.#saveState === 'failed') return false;
+			}
+		}
+		return true;
 	}
 
 	/** After a conflict: drop local edits and show the stored route. */
