@@ -3,6 +3,7 @@
 // conflict (the conflict notice) and an unreadable structure (the field's error).
 
 import type { RouteDocument } from '$lib/route/document';
+import type { PlanAnswer } from '$lib/rules/plan';
 import { callApi, jsonBody, type ApiResult } from './api';
 import type { Toasts } from './toasts.svelte';
 
@@ -38,6 +39,9 @@ export type RouteAnswer = {
 	document: RouteDocument;
 };
 export type ConditionLabel = { id: string; label: string };
+/** Readable names for the rule table's ids: free groups and protecting groups. */
+export type RuleLabels = { groups: Map<string, string>; protectingGroups: Map<string, string> };
+export type { PlanAnswer };
 
 export class RouteClient {
 	constructor(
@@ -114,6 +118,44 @@ export class RouteClient {
 		});
 	}
 
+	/** The ranked plans for the stored route; failures are shown in the plans dialog, not toasted. */
+	plan(routeId: string): Promise<ApiResult<PlanAnswer>> {
+		return callApi<PlanAnswer>(`/api/routes/${routeId}/plan`, { method: 'POST' }, this.fetcher);
+	}
+
+	/**
+	 * Saves plan `rank` of the route at `version` as a new route; a 409 (the route changed since
+	 * the plans were made) is left to the caller, which plans again; other failures are toasted.
+	 */
+	async savePlan(
+		routeId: string,
+		rank: number,
+		version: number
+	): Promise<ApiResult<{ id: string; name: string }>> {
+		const result = await callApi<{ id: string; name: string }>(
+			`/api/routes/${routeId}/plan/${rank}/save`,
+			jsonBody('POST', { version }),
+			this.fetcher
+		);
+		if (!result.ok && result.status !== 409)
+			this.toasts.show(`Plan ${rank} was not saved: ${result.message}`, 'problem');
+		return result;
+	}
+
+	/** Labels of free groups and protecting groups; null when the rules cannot be read (ids are shown). */
+	async ruleLabels(): Promise<RuleLabels | null> {
+		const result = await callApi<{ groups?: unknown; protectingGroups?: unknown }>(
+			'/api/rules',
+			{},
+			this.fetcher
+		);
+		if (!result.ok) return null;
+		return {
+			groups: labelMap(result.data.groups),
+			protectingGroups: labelMap(result.data.protectingGroups)
+		};
+	}
+
 	async importFile(projectId: string, file: File): Promise<string | null> {
 		const form = new FormData();
 		form.set('file', file);
@@ -130,4 +172,16 @@ export class RouteClient {
 		if (!result.ok) this.toasts.show(`${failure}: ${result.message}`, 'problem');
 		return result;
 	}
+}
+
+function labelMap(list: unknown): Map<string, string> {
+	const rows: unknown[] = Array.isArray(list) ? list : [];
+	return new Map(
+		rows.flatMap((row) => {
+			const item = row as Partial<ConditionLabel> | null;
+			return typeof item?.id === 'string' && typeof item.label === 'string'
+				? [[item.id, item.label] as const]
+				: [];
+		})
+	);
 }

@@ -2,7 +2,7 @@
 // convergent step draws several edges; the first carries the step's label and marker).
 
 import type { Edge, Node } from '@xyflow/svelte';
-import type { RouteDocument } from '$lib/route/document';
+import type { RouteDocument, RouteStep } from '$lib/route/document';
 
 export type IntermediateNodeData = { intermediateId: string };
 export type IntermediateFlowNode = Node<IntermediateNodeData, 'intermediate'>;
@@ -10,6 +10,13 @@ export type StepEdgeData = { stepId: string; from: string; primary: boolean };
 export type StepFlowEdge = Edge<StepEdgeData, 'step'>;
 
 export const edgeId = (stepId: string, from: string) => `${stepId}::${from}`;
+
+/** The spoken name of a step that puts a protecting group on or takes one off; null for others. */
+export function intentLabel(step: RouteStep): string | null {
+	if (step.intent !== 'protect' && step.intent !== 'deprotect') return null;
+	const kind = step.intent === 'protect' ? 'Protection step' : 'Deprotection step';
+	return step.reagents ? `${kind}: ${step.reagents}` : kind;
+}
 
 /** Nodes for the document, keeping what the canvas knows of the old ones (size, selection). */
 export function toNodes(
@@ -50,11 +57,14 @@ export function toEdges(
 			const id = edgeId(step.id, from);
 			const selected = step.id === selectedStep;
 			const old = before.get(id);
+			// Screen readers otherwise hear "Edge from <uuid> to <uuid>" for the planner's steps too.
+			const ariaLabel = intentLabel(step) ?? undefined;
 			if (
 				old &&
 				old.selected === selected &&
 				old.target === step.to &&
-				old.data?.primary === (index === 0)
+				old.data?.primary === (index === 0) &&
+				old.ariaLabel === ariaLabel
 			)
 				return old;
 			return {
@@ -63,6 +73,7 @@ export function toEdges(
 				source: from,
 				target: step.to,
 				selected,
+				...(ariaLabel ? { ariaLabel } : {}),
 				data: { stepId: step.id, from, primary: index === 0 }
 			};
 		})
