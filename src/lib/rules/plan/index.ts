@@ -5,12 +5,12 @@ import type { RouteDocument } from '../../route/document';
 import { checkRulesFrom } from '../check/rules-adapter';
 import type { CheckRules } from '../check/types';
 import { loadRuleTable, type RuleTable } from '../table';
-import { linearChain, type Chain } from './chain';
 import { clearDrawCache } from './draw';
 import { judgeCandidates, type Judged } from './options';
 import { drawRoute } from './route';
 import { scoreOf, searchChoices } from './search';
 import { clearFollowCache, findNeeds } from './track';
+import { routeTree, type RouteTree } from './tree';
 import type { Need, Option, Plan, PlanAnswer, Unsolved } from './types';
 
 export type * from './types';
@@ -33,30 +33,30 @@ const SEARCH_WIDTH = 20;
 export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer {
 	const table = options.table ?? loadRuleTable();
 	const rules = options.rules ?? checkRulesFrom(table);
-	const chain = linearChain(doc, rules);
-	if (typeof chain === 'string') return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: chain }] };
-	const needs = findNeeds(chain, rules);
+	const tree = routeTree(doc, rules);
+	if (typeof tree === 'string') return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: tree }] };
+	const needs = findNeeds(tree, rules);
 	if (needs.length === 0) {
 		const problem = options.verify(doc);
 		if (problem) return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: `No free group needs masking, but the route still clashes: ${problem}` }] };
 		return { plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale: ['No step attacks a free group that stands by: nothing needs masking.'] }] };
 	}
-	const judged = needs.map((_, i) => judgeCandidates(table, rules, chain, needs, i));
-	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, chain, need, judged[i]!)]));
+	const judged = needs.map((_, i) => judgeCandidates(table, rules, tree, needs, i));
+	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, need, judged[i]!)]));
 	if (unsolved.length) return { plans: [], unsolved };
 	const optionLists = judged.map((list) => list.flatMap((j) => j.options).sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness));
 	const plans: Plan[] = [];
 	let firstProblem: string | null = null;
 	for (const choice of searchChoices(rules, needs, optionLists, SEARCH_WIDTH)) {
 		if (plans.length >= (options.plans ?? MAX_PLANS)) break;
-		const drawn = drawRoute(doc, chain, needs, choice.options);
+		const drawn = drawRoute(doc, tree, needs, choice.options);
 		const problem = options.verify(drawn.route);
 		if (problem) {
 			firstProblem ??= problem;
 			continue;
 		}
 		const rationale = [
-			...needs.map((need, i) => because(rules, chain, need, choice.options[i]!)),
+			...needs.map((need, i) => because(rules, tree, need, choice.options[i]!)),
 			...drawn.shared.map(({ pg, count }) => `One protection step puts ${pg} on ${count} groups of the same kind at once.`),
 			...drawn.merged.map((pgs) => `One deprotection step removes ${pgs.join(' and ')} together: they come off under the same conditions.`),
 			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`))
@@ -68,19 +68,19 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 	return { plans: [], unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason })) };
 }
 
-function because(rules: CheckRules, chain: Chain, need: Need, option: Option): string {
-	const threats = need.attackedAt.map((s) => `step "${chain.steps[s]!.id}"`).join(', ');
-	const off = need.freeGap === chain.steps.length ? 'at the end' : `before step "${chain.steps[need.freeGap]!.id}" (where it reacts)`;
+function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option): string {
+	const threats = need.attackedAt.map((id) => `step "${id}"`).join(', ');
+	const off = need.freeAt === tree.target ? 'at the end' : `before step "${tree.next.get(need.freeAt)!.id}" (where it reacts)`;
 	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : ''}.`;
 }
 
-function whyUnsolved(rules: CheckRules, chain: Chain, need: Need, judged: Judged[]): Unsolved {
+function whyUnsolved(rules: CheckRules, need: Need, judged: Judged[]): Unsolved {
 	const label = rules.groupLabel(need.group);
-	const first = chain.steps[need.attackedAt[0]!]!.id;
+	const first = need.attackedAt[0]!;
 	if (judged.length === 0) return { group: need.group, atoms: need.atoms, reason: `Step "${first}" attacks the free ${label}, and no protecting group in the rule table masks a ${label}.` };
 	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt) ? judged[0]!.killedAt : undefined;
 	if (killer !== undefined) {
-		return { group: need.group, atoms: need.atoms, reason: `Step "${chain.steps[killer]!.id}" makes it impossible: the free ${label} must be masked from step "${first}" on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).` };
+		return { group: need.group, atoms: need.atoms, reason: `Step "${killer}" makes it impossible: the free ${label} must be masked from step "${first}" on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).` };
 	}
 	return { group: need.group, atoms: need.atoms, reason: `Step "${first}" attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.` };
 }

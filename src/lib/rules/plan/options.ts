@@ -5,8 +5,7 @@ import { perceptionRules } from '../../chem/patterns';
 import { perceiveText } from '../../chem/perception-cache';
 import type { CheckRules } from '../check/types';
 import type { RuleTable } from '../table';
-import type { Chain } from './chain';
-import { stepConditions } from './chain';
+import { stepConditions, type RouteTree } from './tree';
 import { freeUnits } from './track';
 import type { Need, Option } from './types';
 
@@ -19,22 +18,31 @@ const HARSHNESS: Record<string, number> = {
 /** Summed harshness of condition classes, e.g. `harshnessOf(['acid-strong', 'fluoride'])` → 4. */
 export const harshnessOf = (conditions: string[]) => conditions.reduce((sum, id) => sum + (HARSHNESS[id] ?? 1), 0);
 
-export type Judged = { pg: string; options: Option[]; rejected: string | null; killedAt?: number };
+export type Judged = { pg: string; options: Option[]; rejected: string | null; killedAt?: string };
 
 /**
- * Whether need `other` is masked at gap `gap` while need `index` is worked on. At a gap the
- * installs run first (in need order) and the removals after, so a group that must come off here
- * can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc amine freed before
- * step 3 is still masked while Fmoc goes on the other amine at that gap.
+ * Whether need `other` is masked at intermediate `node` while need `index` is worked on there. At
+ * an intermediate the installs run first (in need order) and the removals after, so a group that
+ * must come off here can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc
+ * amine freed before step 3 is still masked while Fmoc goes on the other amine there. A need on
+ * another branch of a convergent route is not in that intermediate at all.
  */
-export function maskedAt(needs: Need[], other: number, gap: number, index: number, phase: 'install' | 'removal'): boolean {
+export function maskedAt(needs: Need[], other: number, node: string, index: number, phase: 'install' | 'removal'): boolean {
 	const y = needs[other]!;
-	if (phase === 'removal') return y.installGap <= gap && gap <= y.freeGap;
-	return (y.installGap < gap || (y.installGap === gap && other < index)) && gap <= y.freeGap;
+	const here = y.path.indexOf(node);
+	if (here < 0) return false;
+	const on = y.path.indexOf(y.installAt);
+	const off = y.path.indexOf(y.freeAt);
+	if (phase === 'removal') return on <= here && here <= off;
+	return (on < here || (on === here && other < index)) && here <= off;
 }
 
+/** The steps a mask on `need` must sit through: those that use its path from where it goes on to where it comes off. */
+export const stepsMasked = (tree: RouteTree, need: Need) =>
+	need.path.slice(need.path.indexOf(need.installAt), need.path.indexOf(need.freeAt)).map((node) => tree.next.get(node)!);
+
 /** Every candidate PG for `needs[index]` with its admissible options or why it fails, e.g. Bn for an alcohol → "Bn rejected: … hydrogenation …". */
-export function judgeCandidates(table: RuleTable, rules: CheckRules, chain: Chain, needs: Need[], index: number): Judged[] {
+export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: RouteTree, needs: Need[], index: number): Judged[] {
 	const need = needs[index]!;
 	const protects = new Map(perceptionRules().protectingGroups.map((pg) => [pg.id, pg.protects]));
 	const rows = table.protectingGroups.filter((row) => protects.get(row.id)?.includes(need.group));
@@ -42,25 +50,25 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, chain: Chai
 		const transform = row.install.transforms.find((t) => (t.groups as readonly string[]).includes(need.group))?.smarts;
 		if (!transform) return { pg: row.id, options: [], rejected: `${row.id} rejected: the rule table has no install transform to draw it on a ${rules.groupLabel(need.group)}` };
 		let cautions = 0;
-		for (let step = need.installGap; step < need.freeGap; step++) {
-			for (const c of chain.conditions[step]!) {
+		for (const step of stepsMasked(tree, need)) {
+			for (const c of tree.conditions.get(step.id)!) {
 				const answer = rules.stability(row.id, c.id, c.explicit ? [] : c.reagents);
 				if (answer.rating === 'labile') {
-					const rejected = `${row.id} rejected: the ${rules.conditionLabel(c.id).toLowerCase()} conditions of step "${chain.steps[step]!.id}" would remove it`;
-					return { pg: row.id, options: [], rejected, killedAt: step };
+					const rejected = `${row.id} rejected: the ${rules.conditionLabel(c.id).toLowerCase()} conditions of step "${step.id}" would remove it`;
+					return { pg: row.id, options: [], rejected, killedAt: step.id };
 				}
 				if (answer.rating === 'caution') cautions++;
 			}
 		}
 		const installConditions = [...row.install.conditions];
 		const install = { reagents: row.install.reagents[0] ?? '', conditions: installConditions };
-		const installHarm = harm(rules, chain, needs, index, need.installGap, 'install', install.reagents, installConditions);
+		const installHarm = harm(rules, tree, needs, index, need.installAt, 'install', install.reagents, installConditions);
 		if (installHarm.blocked) return { pg: row.id, options: [], rejected: `${row.id} rejected: installing it (${install.reagents}) ${installHarm.blocked}` };
 		const options: Option[] = [];
 		let firstRemovalProblem = '';
 		for (const method of row.remove) {
 			const reagents = method.reagents[0] ?? '';
-			const removalHarm = harm(rules, chain, needs, index, need.freeGap, 'removal', reagents, [...method.conditions]);
+			const removalHarm = harm(rules, tree, needs, index, need.freeAt, 'removal', reagents, [...method.conditions]);
 			if (removalHarm.blocked) {
 				firstRemovalProblem ||= `removing it (${reagents}) ${removalHarm.blocked}`;
 				continue;
@@ -80,19 +88,19 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, chain: Chai
 	});
 }
 
-/** What an install or removal at `gap` would attack among the free groups and the route's own PGs then present. */
-function harm(rules: CheckRules, chain: Chain, needs: Need[], index: number, gap: number, phase: 'install' | 'removal', reagents: string, conditions: string[]) {
-	const structure = chain.nodes[gap]!.structure;
+/** What an install or removal at intermediate `node` would attack among the free groups and the route's own PGs then present. */
+function harm(rules: CheckRules, tree: RouteTree, needs: Need[], index: number, node: string, phase: 'install' | 'removal', reagents: string, conditions: string[]) {
+	const structure = tree.byId.get(node)!.structure;
 	const conds = stepConditions(rules, reagents, conditions);
 	const need = needs[index]!;
-	const own = new Set(need.atomsAt.get(gap) ?? []);
+	const own = new Set(need.atomsAt.get(node) ?? []);
 	// Free units masked by another need at that moment are not exposed (their PG is judged jointly).
 	const masked = new Set<number>();
 	needs.forEach((other, j) => {
 		// A same-type neighbour that goes on at the same gap may share this install step; the
 		// search only lets it stay free if it does not (see `compatible` in search.ts).
-		const coInstall = phase === 'install' && other.installGap === gap && other.group === need.group;
-		if (j !== index && (coInstall || maskedAt(needs, j, gap, index, phase))) for (const a of other.atomsAt.get(gap) ?? []) masked.add(a);
+		const coInstall = phase === 'install' && other.installAt === node && other.group === need.group;
+		if (j !== index && (coInstall || maskedAt(needs, j, node, index, phase))) for (const a of other.atomsAt.get(node) ?? []) masked.add(a);
 	});
 	let cautions = 0;
 	for (const unit of freeUnits(structure)) {

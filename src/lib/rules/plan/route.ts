@@ -1,17 +1,18 @@
 // Writes a joint choice out as a route document: the original steps run on protected
-// intermediates, with an install step before the first step that would attack each group and a
-// removal step (shared when conditions match) where it must be free again.
+// intermediates, with an install step on the intermediate that the first attacking step uses and
+// a removal step (shared when conditions match) where each group must be free again. Branches of
+// a convergent route get their own protection steps before the step that joins them.
 
 import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/document';
-import type { Chain } from './chain';
 import { protectedStructure } from './draw';
 import { installKey } from './search';
+import type { RouteTree } from './tree';
 import type { Need, Option, Protection } from './types';
 
 export type Drawn = { route: RouteDocument; protections: Protection[]; merged: string[][]; shared: { pg: string; count: number }[] };
 
 /** The protected route for one option per need, e.g. TBS on before step "s2" and off after "s3". */
-export function drawRoute(doc: RouteDocument, chain: Chain, needs: Need[], options: Option[]): Drawn {
+export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], options: Option[]): Drawn {
 	const taken = new Set([...doc.intermediates.map((n) => n.id), ...doc.steps.map((s) => s.id)]);
 	const fresh = (base: string) => {
 		let id = base.slice(0, 56);
@@ -19,21 +20,29 @@ export function drawRoute(doc: RouteDocument, chain: Chain, needs: Need[], optio
 		taken.add(id);
 		return id;
 	};
-	const n = chain.steps.length;
-	const structureAt = (k: number, active: number[]) =>
-		protectedStructure(chain.nodes[k]!.structure, active.map((x) => ({ pg: options[x]!.pg, transform: options[x]!.transform, atoms: needs[x]!.atomsAt.get(k)! })));
+	const place = (x: number, node: string) => needs[x]!.path.indexOf(node);
+	const structureAt = (node: string, active: number[]) =>
+		protectedStructure(
+			tree.byId.get(node)!.structure,
+			active.map((x) => ({ pg: options[x]!.pg, transform: options[x]!.transform, atoms: needs[x]!.atomsAt.get(node)! }))
+		);
 	const intermediates: RouteIntermediate[] = [];
 	const steps: RouteStep[] = [];
 	const protections: Protection[] = [];
 	const merged: string[][] = [];
 	const shared: { pg: string; count: number }[] = [];
-	let active: number[] = [];
-	let current = chain.nodes[0]!.id;
-	intermediates.push({ ...chain.nodes[0]! });
-	for (let gap = 0; gap <= n; gap++) {
-		const node = chain.nodes[gap]!;
+	// The id each intermediate goes on as, once its protection steps have run.
+	const latest = new Map<string, string>();
+	const all = needs.map((_, x) => x);
+	for (const node of tree.nodes) {
+		const made = tree.made.get(node.id);
+		if (made) steps.push({ ...made, from: made.from.map((id) => latest.get(id)!) });
+		// Masks that arrive with the intermediate: on before it, not yet off.
+		let active = all.filter((x) => place(x, needs[x]!.installAt) < place(x, node.id) && place(x, node.id) <= place(x, needs[x]!.freeAt));
+		intermediates.push({ ...node, structure: structureAt(node.id, active) });
+		let current = node.id;
 		const installs = new Map<string, number[]>();
-		for (const x of needs.map((_, i) => i).filter((i) => needs[i]!.installGap === gap)) {
+		for (const x of all.filter((i) => needs[i]!.installAt === node.id)) {
 			const key = installKey(needs[x]!, options[x]!);
 			installs.set(key, [...(installs.get(key) ?? []), x]);
 		}
@@ -41,25 +50,25 @@ export function drawRoute(doc: RouteDocument, chain: Chain, needs: Need[], optio
 			active = [...active, ...batch];
 			const option = options[batch[0]!]!;
 			const id = fresh(`${node.id}-${option.pg}`);
-			intermediates.push({ id, label: `${node.label ?? node.id}, ${option.pg}-protected`, structure: structureAt(gap, active) });
+			intermediates.push({ id, label: `${node.label ?? node.id}, ${option.pg}-protected`, structure: structureAt(node.id, active) });
 			steps.push({ id: fresh(`protect-${option.pg}`), from: [current], to: id, reagents: option.install.reagents, conditions: [...option.install.conditions], intent: 'protect', notes: 'Added by the planner.' });
 			current = id;
 			if (batch.length > 1) shared.push({ pg: option.pg, count: batch.length });
 			for (const x of batch) {
+				const need = needs[x]!;
 				const chosen = options[x]!;
 				protections.push({
-					group: needs[x]!.group,
-					atoms: needs[x]!.atomsAt.get(gap)!,
+					group: need.group,
+					atoms: need.atomsAt.get(node.id)!,
 					intermediate: id,
 					protectingGroup: chosen.pg,
-					install: { before: chain.steps[gap]!.id, ...chosen.install, conditions: [...chosen.install.conditions] },
-					removal: { after: needs[x]!.freeGap === n ? 'end' : chain.steps[needs[x]!.freeGap - 1]!.id, ...chosen.removal, conditions: [...chosen.removal.conditions] }
+					install: { before: tree.next.get(node.id)!.id, ...chosen.install, conditions: [...chosen.install.conditions] },
+					removal: { after: need.freeAt === tree.target ? 'end' : tree.made.get(need.freeAt)!.id, ...chosen.removal, conditions: [...chosen.removal.conditions] }
 				});
 			}
 		}
-		const leaving = needs.map((_, x) => x).filter((x) => needs[x]!.freeGap === gap && active.includes(x));
 		const batches = new Map<string, number[]>();
-		for (const x of leaving) {
+		for (const x of active.filter((i) => needs[i]!.freeAt === node.id)) {
 			const key = [...options[x]!.removal.conditions].sort().join('+');
 			batches.set(key, [...(batches.get(key) ?? []), x]);
 		}
@@ -67,17 +76,14 @@ export function drawRoute(doc: RouteDocument, chain: Chain, needs: Need[], optio
 			active = active.filter((x) => !batch.includes(x));
 			const removal = options[batch[0]!]!.removal;
 			const id = fresh(`${node.id}-free`);
-			intermediates.push({ id, label: `${node.label ?? node.id} without ${batch.map((x) => options[x]!.pg).join(', ')}`, structure: structureAt(gap, active) });
+			intermediates.push({ id, label: `${node.label ?? node.id} without ${batch.map((x) => options[x]!.pg).join(', ')}`, structure: structureAt(node.id, active) });
 			steps.push({ id: fresh(`remove-${batch.map((x) => options[x]!.pg).join('-')}`), from: [current], to: id, reagents: removal.reagents, conditions: [...removal.conditions], intent: 'deprotect', notes: 'Added by the planner.' });
 			if (batch.length > 1) merged.push(batch.map((x) => options[x]!.pg));
 			current = id;
 		}
-		if (gap === n) break;
-		const step = chain.steps[gap]!;
-		const next = chain.nodes[gap + 1]!;
-		intermediates.push({ ...next, structure: structureAt(gap + 1, active) });
-		steps.push({ ...step, from: [current] });
-		current = next.id;
+		latest.set(node.id, current);
 	}
-	return { route: { name: `${doc.name} (protected)`.slice(0, 120), intermediates, steps }, protections, merged, shared };
+	// Intermediates on no step are the chemist's notes: they stay as they were.
+	const loose = doc.intermediates.filter((n) => !tree.next.has(n.id) && !tree.made.has(n.id));
+	return { route: { name: `${doc.name} (protected)`.slice(0, 120), intermediates: [...intermediates, ...loose], steps }, protections, merged, shared };
 }

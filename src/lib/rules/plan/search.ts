@@ -7,9 +7,11 @@ import type { Need, Option } from './types';
 
 export type Choice = { options: Option[]; score: number; addedSteps: number; cautions: number; harshness: number };
 
-const removalKey = (need: Need, option: Option) => `${need.freeGap}|${[...option.removal.conditions].sort().join('+')}`;
+// Keys join with \u0001: intermediate ids are the chemist's own and may hold any other character.
+const removalKey = (need: Need, option: Option) => `${need.freeAt}\u0001${[...option.removal.conditions].sort().join('+')}`;
 /** Same-type groups that take the same PG at the same gap go on in one step (five ketones, one ketalisation). */
-export const installKey = (need: Need, option: Option) => `${need.installGap}|${need.group}|${option.pg}|${option.install.reagents}`;
+export const installKey = (need: Need, option: Option) => `${need.installAt}\u0001${need.group}\u0001${option.pg}\u0001${option.install.reagents}`;
+const installClassOf = (need: Need) => `${need.installAt}\u0001${need.group}`;
 /** Lexicographic cost as one number, e.g. `scoreOf(2, 1, 3)` → 20103 (steps, then cautions, then harshness). */
 export const scoreOf = (added: number, cautions: number, harshness: number) => added * 10_000 + cautions * 100 + harshness;
 
@@ -24,12 +26,12 @@ function strips(rules: CheckRules, needs: Need[], a: number, oa: Option, b: numb
 	const sameRemoval = removalKey(na, oa) === removalKey(needs[b]!, ob);
 	const sameInstall = installKey(na, oa) === installKey(needs[b]!, ob);
 	// A same-type neighbour left free at this install would be attacked by it, unless it shares the step.
-	if (!sameInstall && needs[b]!.installGap === na.installGap && needs[b]!.group === na.group) {
+	if (!sameInstall && needs[b]!.installAt === na.installAt && needs[b]!.group === na.group) {
 		if (oa.install.conditions.some((c) => rules.reactivity(na.group, c)?.rating === 'reacts')) return true;
 	}
 	const exposed = [
-		...(maskedAt(needs, b, na.installGap, a, 'install') && !sameInstall ? oa.install.conditions : []),
-		...(maskedAt(needs, b, na.freeGap, a, 'removal') && !sameRemoval ? oa.removal.conditions : [])
+		...(maskedAt(needs, b, na.installAt, a, 'install') && !sameInstall ? oa.install.conditions : []),
+		...(maskedAt(needs, b, na.freeAt, a, 'removal') && !sameRemoval ? oa.removal.conditions : [])
 	];
 	return exposed.some((c) => rules.stability(ob.pg, c, []).rating === 'labile');
 }
@@ -76,8 +78,8 @@ export function searchChoices(rules: CheckRules, needs: Need[], options: Option[
 	// (gap, group type) and one removal per gap that no choice so far already brings.
 	const floor = options.map((list) => Math.min(...list.map((o) => scoreOf(0, o.cautions, o.harshness))));
 	const rest = floor.map((_, i) => floor.slice(i).reduce((sum, v) => sum + v, 0));
-	const installClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => `${n.installGap}|${n.group}|`))]);
-	const removalClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => `${n.freeGap}|`))]);
+	const installClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => installClassOf(n)))]);
+	const removalClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => n.freeAt))]);
 	const installs = new KeyCounts();
 	const removals = new KeyCounts();
 	const installClassesUsed = new KeyCounts();
@@ -98,8 +100,8 @@ export function searchChoices(rules: CheckRules, needs: Need[], options: Option[
 			for (let j = 0; j < depth; j++) if (!fits(depth, i, j, chosen[j]!)) return;
 			const install = installKeys[depth]![i]!;
 			const removal = removalKeys[depth]![i]!;
-			const installClass = `${needs[depth]!.installGap}|${needs[depth]!.group}|`;
-			const removalClass = `${needs[depth]!.freeGap}|`;
+			const installClass = installClassOf(needs[depth]!);
+			const removalClass = needs[depth]!.freeAt;
 			chosen.push(i);
 			installs.add(install);
 			removals.add(removal);

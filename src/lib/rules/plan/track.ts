@@ -1,12 +1,13 @@
-// Follows every free-group instance along the line of intermediates and finds the ones that a
-// step attacks while they stand by: those are the needs a plan must mask.
+// Follows every free-group instance through the route, step by step towards the target, and finds
+// the ones that a step attacks while they stand by: those are the needs a plan must mask.
 
 import { mapAtoms, type AtomMap } from '../../chem/atom-map';
 import { LruCache } from '../../chem/cache';
 import { readStructure } from '../../chem/parse';
 import { perceiveText } from '../../chem/perception-cache';
 import type { CheckRules } from '../check/types';
-import type { Chain } from './chain';
+import { combinedMolecule } from '../check/transformation';
+import type { RouteTree } from './tree';
 import type { Need } from './types';
 
 /** A free group as the planner masks it; a diol carries its two alcohols as `members`. */
@@ -36,16 +37,18 @@ export function freeUnits(structure: string): Unit[] {
 /**
  * Which product unit each substrate unit becomes (undefined: it reacts). As in the check, a group
  * id that keeps its count survives whole; the atom map (MCS, the slow part) only says which atoms
- * went where, and decides alone when some but not all instances of an id vanish.
+ * went where, and decides alone when some but not all instances of an id vanish. A convergent
+ * step's substrates are read as one molecule, atoms numbered in the order of `substrates`.
  */
-function follow(before: Unit[], after: Unit[], substrate: string, product: string): (number | undefined)[] {
-	const cacheKey = `${substrate}\u0001${product}`;
+function follow(before: Unit[], after: Unit[], substrates: string[], product: string): (number | undefined)[] {
+	const cacheKey = `${substrates.join('\u0000')}\u0001${product}`;
 	const stored = followed.get(cacheKey);
 	if (stored) return stored;
 	const count = (list: Unit[], id: string) => list.filter((u) => u.id === id).length;
 	const ids = [...new Set(before.map((u) => u.id))];
 	const needsMap = ids.some((id) => count(after, id) > 0 && !(count(before, id) === 1 && count(after, id) === 1));
-	const map: AtomMap | null = needsMap ? mapAtoms(readStructure(substrate).molecule, readStructure(product).molecule) : null;
+	const substrate = () => (substrates.length === 1 ? readStructure(substrates[0]!).molecule : combinedMolecule(substrates));
+	const map: AtomMap | null = needsMap ? mapAtoms(substrate(), readStructure(product).molecule) : null;
 	const result: (number | undefined)[] = before.map(() => undefined);
 	const used = new Set<number>();
 	before.forEach((unit, i) => {
@@ -82,51 +85,61 @@ export function clearFollowCache(): void {
 	followed.clear();
 }
 
-/** The needs of a route: units a step attacks (`reacts`) while they stand by, e.g. a ketone through a Grignard step. */
-export function findNeeds(chain: Chain, rules: CheckRules): Need[] {
-	const units = chain.nodes.map((node) => freeUnits(node.structure));
-	type Track = { unit: Unit; born: number; atomsAt: Map<number, number[]>; end: number; last: number };
-	const tracks: Track[] = [];
-	let open: (Track | undefined)[] = units[0]!.map((unit) => ({ unit, born: 0, atomsAt: new Map([[0, unit.atoms]]), end: chain.steps.length, last: 0 }));
-	tracks.push(...(open as Track[]));
-	chain.steps.forEach((_, i) => {
-		const next = follow(units[i]!, units[i + 1]!, chain.nodes[i]!.structure, chain.nodes[i + 1]!.structure);
-		const nextOpen: (Track | undefined)[] = units[i + 1]!.map(() => undefined);
-		next.forEach((target, from) => {
-			const track = open[from];
-			if (!track) return;
-			if (target === undefined || nextOpen[target]) track.end = Math.min(track.end, i);
-			else {
-				track.atomsAt.set(i + 1, units[i + 1]![target]!.atoms);
-				track.last = i + 1;
-				nextOpen[target] = track;
-			}
-		});
-		units[i + 1]!.forEach((unit, index) => {
-			if (nextOpen[index]) return;
-			const born: Track = { unit, born: i + 1, atomsAt: new Map([[i + 1, unit.atoms]]), end: chain.steps.length, last: i + 1 };
-			nextOpen[index] = born;
-			tracks.push(born);
-		});
-		open = nextOpen;
+/** The free units of a step's substrates as one list, atoms numbered as in `combinedMolecule`. */
+function substrateUnits(tree: RouteTree, from: string[], units: Map<string, Unit[]>): { unit: Unit; node: string; index: number }[] {
+	let offset = 0;
+	return from.flatMap((node) => {
+		const shift = offset;
+		if (from.length > 1) offset += readStructure(tree.byId.get(node)!.structure).molecule.getAllAtoms();
+		return units.get(node)!.map((unit, index) => ({ unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) }, node, index }));
 	});
+}
+
+/** The needs of a route: units a step attacks (`reacts`) while they stand by, e.g. a ketone through a Grignard step. */
+export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
+	const units = new Map(tree.nodes.map((node) => [node.id, freeUnits(node.structure)]));
+	type Track = { unit: Unit; path: string[]; atomsAt: Map<string, number[]>; end: string };
+	const tracks: Track[] = [];
+	// The track each unit of an intermediate continues, by intermediate id.
+	const open = new Map<string, Track[]>();
+	const track = (node: string, unit: Unit): Track => {
+		const made: Track = { unit, path: [node], atomsAt: new Map([[node, unit.atoms]]), end: tree.target };
+		tracks.push(made);
+		return made;
+	};
+	for (const node of tree.nodes) if (!tree.made.has(node.id)) open.set(node.id, units.get(node.id)!.map((unit) => track(node.id, unit)));
+	for (const step of tree.steps) {
+		const before = substrateUnits(tree, step.from, units);
+		const after = units.get(step.to)!;
+		const next = follow(before.map((b) => b.unit), after, step.from.map((id) => tree.byId.get(id)!.structure), tree.byId.get(step.to)!.structure);
+		const continued: (Track | undefined)[] = after.map(() => undefined);
+		next.forEach((target, i) => {
+			const followed = open.get(before[i]!.node)![before[i]!.index]!;
+			if (target === undefined || continued[target]) {
+				followed.end = before[i]!.node;
+				return;
+			}
+			followed.path.push(step.to);
+			followed.atomsAt.set(step.to, after[target]!.atoms);
+			continued[target] = followed;
+		});
+		// Units the step makes (or that no substrate unit became) start their own tracks here.
+		open.set(step.to, after.map((unit, i) => continued[i] ?? track(step.to, unit)));
+	}
 	const needs: Need[] = [];
 	for (const track of tracks) {
-		const attackedAt: number[] = [];
-		for (let step = track.born; step < track.end; step++) {
-			const hit = chain.conditions[step]!.some((c) => track.unit.members.some((g) => rules.reactivity(g, c.id)?.rating === 'reacts'));
-			if (hit) attackedAt.push(step);
+		const attackedAt: string[] = [];
+		let installAt: string | undefined;
+		for (const node of track.path) {
+			if (node === track.end) break;
+			const step = tree.next.get(node)!;
+			const hit = tree.conditions.get(step.id)!.some((c) => track.unit.members.some((g) => rules.reactivity(g, c.id)?.rating === 'reacts'));
+			if (!hit) continue;
+			attackedAt.push(step.id);
+			installAt ??= node;
 		}
-		if (attackedAt.length === 0) continue;
-		needs.push({
-			group: track.unit.id,
-			atoms: track.unit.atoms,
-			born: track.born,
-			atomsAt: track.atomsAt,
-			installGap: attackedAt[0]!,
-			freeGap: track.end,
-			attackedAt
-		});
+		if (!installAt) continue;
+		needs.push({ group: track.unit.id, atoms: track.unit.atoms, path: track.path.slice(0, track.path.indexOf(track.end) + 1), atomsAt: track.atomsAt, installAt, freeAt: track.end, attackedAt });
 	}
 	return needs;
 }

@@ -3,22 +3,22 @@
 
 import type { RouteDocument } from '../../route/document';
 
-/** One free-group instance followed along the linear route. */
+/** One free-group instance followed through the route, from the intermediate where it is first seen. */
 export type Need = {
 	/** Group id; a diol masked as one unit is `diol-1,2` or `diol-1,3`. */
 	group: string;
 	/** Atoms of the instance in the intermediate where it is first seen. */
 	atoms: number[];
-	/** Intermediate index where it is first seen. */
-	born: number;
-	/** Its atoms in every intermediate index it lives in (born … last). */
-	atomsAt: Map<number, number[]>;
-	/** Gap index (before step i) where the mask goes on: the first step that attacks it. */
-	installGap: number;
-	/** Gap where it must be free again: the step where it reacts on purpose, or `steps.length` (the end). */
-	freeGap: number;
-	/** Step indices that attack it while it stands by. */
-	attackedAt: number[];
+	/** Intermediate ids it lives in, from where it is first seen towards the target. */
+	path: string[];
+	/** Its atoms in every intermediate on its path. */
+	atomsAt: Map<string, number[]>;
+	/** Intermediate where the mask goes on: the one the first attacking step uses. */
+	installAt: string;
+	/** Intermediate where it must be free again: the one the step that works on it uses, or the target. */
+	freeAt: string;
+	/** Ids of the steps that attack it while it stands by. */
+	attackedAt: string[];
 };
 
 /** A way to mask one need: the PG and one install and one removal option. */
