@@ -1,48 +1,16 @@
-import { expect, test, type Browser, type Page } from '@playwright/test';
-import { signInAndWait } from './helpers';
+import { expect, test, type Page } from '@playwright/test';
+import {
+	asUser,
+	HYDROXY_KETONE,
+	KETO_ESTER,
+	makeRoute,
+	PROJECT,
+	signInAndWait,
+	unique
+} from './helpers';
 
-// Everything here is the invented Cormorant scenario: a fictional keto ester (OG-2031-A) meets a
-// Grignard reagent while its ketone is still free.
-const PROJECT = /Cormorant/;
-const KETO_ESTER = 'CC(=O)CCC(=O)OC';
-// The product the chemist wants: the ester becomes a tertiary alcohol and the ketone stays.
-const HYDROXY_KETONE = 'CC(=O)CCC(C)(C)O';
-const unique = (what: string) =>
-	`${what} ${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
-
-async function asUser(browser: Browser, who: string): Promise<Page> {
-	const page = await (await browser.newContext()).newPage();
-	await signInAndWait(page, `${who}@example.com`);
-	return page;
-}
-
-async function cormorantId(page: Page): Promise<string> {
-	const projects: { id: string; name: string }[] = (
-		await (await page.request.get('/api/projects')).json()
-	).projects;
-	return projects.find((p) => PROJECT.test(p.name))!.id;
-}
-
-/** A two-node route made through the API, for the tests that are about something else. */
-async function makeRoute(page: Page, name: string, reagents = 'MeMgBr, THF'): Promise<string> {
-	const created = await page.request.post(`/api/projects/${await cormorantId(page)}/routes`, {
-		data: {
-			name,
-			intermediates: [
-				{ id: 'a', label: 'OG-2031-A keto ester', structure: KETO_ESTER, position: { x: 0, y: 0 } },
-				{
-					id: 'c',
-					label: 'OG-2031-C hydroxy ketone',
-					structure: HYDROXY_KETONE,
-					position: { x: 360, y: 0 }
-				}
-			],
-			steps: [{ id: 's1', from: ['a'], to: 'c', reagents }]
-		}
-	});
-	expect(created.status()).toBe(201);
-	return (await created.json()).id;
-}
+// Everything here is the invented Cormorant scenario (see helpers.ts): a fictional keto ester
+// (OG-2031-A) meets a Grignard reagent while its ketone is still free.
 
 const node = (page: Page, label: string) =>
 	page.getByTestId('intermediate-node').filter({ hasText: label });
