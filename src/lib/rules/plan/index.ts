@@ -70,7 +70,12 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 
 function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option): string {
 	const threats = need.attackedAt.map((id) => `step "${id}"`).join(', ');
-	const off = need.freeAt === tree.target ? 'at the end' : `before step "${tree.next.get(need.freeAt)!.id}" (where it reacts)`;
+	const off =
+		option.removeAt !== need.freeAt
+			? `after step "${tree.made.get(option.removeAt)!.id}", as soon as nothing attacks it`
+			: need.freeAt === tree.target
+				? 'at the end'
+				: `before step "${tree.next.get(need.freeAt)!.id}" (where it reacts)`;
 	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : ''}.`;
 }
 

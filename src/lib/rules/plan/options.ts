@@ -21,25 +21,53 @@ export const harshnessOf = (conditions: string[]) => conditions.reduce((sum, id)
 export type Judged = { pg: string; options: Option[]; rejected: string | null; killedAt?: string };
 
 /**
- * Whether need `other` is masked at intermediate `node` while need `index` is worked on there. At
- * an intermediate the installs run first (in need order) and the removals after, so a group that
- * must come off here can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc
- * amine freed before step 3 is still masked while Fmoc goes on the other amine there. A need on
- * another branch of a convergent route is not in that intermediate at all.
+ * Whether need `other` is masked at intermediate `node` while need `index` is worked on there,
+ * its mask coming off at `removeAt` (by default where it must be free again). At an intermediate
+ * the installs run first (in need order) and the removals after, so a group that must come off
+ * here can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc amine freed
+ * before step 3 is still masked while Fmoc goes on the other amine there. A need on another
+ * branch of a convergent route is not in that intermediate at all.
  */
-export function maskedAt(needs: Need[], other: number, node: string, index: number, phase: 'install' | 'removal'): boolean {
+export function maskedAt(needs: Need[], other: number, node: string, index: number, phase: 'install' | 'removal', removeAt = needs[other]!.freeAt): boolean {
 	const y = needs[other]!;
 	const here = y.path.indexOf(node);
 	if (here < 0) return false;
 	const on = y.path.indexOf(y.installAt);
-	const off = y.path.indexOf(y.freeAt);
+	const off = y.path.indexOf(removeAt);
 	if (phase === 'removal') return on <= here && here <= off;
 	return (on < here || (on === here && other < index)) && here <= off;
 }
 
-/** The steps a mask on `need` must sit through: those that use its path from where it goes on to where it comes off. */
-export const stepsMasked = (tree: RouteTree, need: Need) =>
-	need.path.slice(need.path.indexOf(need.installAt), need.path.indexOf(need.freeAt)).map((node) => tree.next.get(node)!);
+/** Whether a need's group is back, free, at `node` because its mask came off early at `removeAt`. */
+export function freedEarlyAt(need: Need, removeAt: string, node: string): boolean {
+	const here = need.path.indexOf(node);
+	return here > need.path.indexOf(removeAt) && here <= need.path.indexOf(need.freeAt);
+}
+
+/**
+ * Where a PG on `need` may come off, latest first, with the cautions it collects on the way: from
+ * where it must be free again back to the product of the last step that attacks the group, as far
+ * as the PG survives the steps in between. Empty, with the step that removes it, when it cannot
+ * even reach the end of the last attack.
+ */
+function removalPoints(rules: CheckRules, tree: RouteTree, need: Need, pg: string): { points: { node: string; cautions: number }[]; killer?: { step: string; condition: string } } {
+	const on = need.path.indexOf(need.installAt);
+	const earliest = need.path.indexOf(need.removableFrom);
+	const latest = need.path.indexOf(need.freeAt);
+	const points: { node: string; cautions: number }[] = [];
+	let cautions = 0;
+	for (let at = on; at <= latest; at++) {
+		if (at >= earliest) points.unshift({ node: need.path[at]!, cautions });
+		if (at === latest) break;
+		const step = tree.next.get(need.path[at]!)!;
+		for (const c of tree.conditions.get(step.id)!) {
+			const rating = rules.stability(pg, c.id, c.explicit ? [] : c.reagents).rating;
+			if (rating === 'labile') return points.length ? { points } : { points, killer: { step: step.id, condition: c.id } };
+			if (rating === 'caution') cautions++;
+		}
+	}
+	return { points };
+}
 
 /** Every candidate PG for `needs[index]` with its admissible options or why it fails, e.g. Bn for an alcohol → "Bn rejected: … hydrogenation …". */
 export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: RouteTree, needs: Need[], index: number): Judged[] {
@@ -49,16 +77,10 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 	return rows.map((row): Judged => {
 		const transform = row.install.transforms.find((t) => (t.groups as readonly string[]).includes(need.group))?.smarts;
 		if (!transform) return { pg: row.id, options: [], rejected: `${row.id} rejected: the rule table has no install transform to draw it on a ${rules.groupLabel(need.group)}` };
-		let cautions = 0;
-		for (const step of stepsMasked(tree, need)) {
-			for (const c of tree.conditions.get(step.id)!) {
-				const answer = rules.stability(row.id, c.id, c.explicit ? [] : c.reagents);
-				if (answer.rating === 'labile') {
-					const rejected = `${row.id} rejected: the ${rules.conditionLabel(c.id).toLowerCase()} conditions of step "${step.id}" would remove it`;
-					return { pg: row.id, options: [], rejected, killedAt: step.id };
-				}
-				if (answer.rating === 'caution') cautions++;
-			}
+		const { points, killer } = removalPoints(rules, tree, need, row.id);
+		if (killer) {
+			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of step "${killer.step}" would remove it`;
+			return { pg: row.id, options: [], rejected, killedAt: killer.step };
 		}
 		const installConditions = [...row.install.conditions];
 		const install = { reagents: row.install.reagents[0] ?? '', conditions: installConditions };
@@ -66,22 +88,25 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 		if (installHarm.blocked) return { pg: row.id, options: [], rejected: `${row.id} rejected: installing it (${install.reagents}) ${installHarm.blocked}` };
 		const options: Option[] = [];
 		let firstRemovalProblem = '';
-		for (const method of row.remove) {
-			const reagents = method.reagents[0] ?? '';
-			const removalHarm = harm(rules, tree, needs, index, need.freeAt, 'removal', reagents, [...method.conditions]);
-			if (removalHarm.blocked) {
-				firstRemovalProblem ||= `removing it (${reagents}) ${removalHarm.blocked}`;
-				continue;
+		for (const point of points) {
+			for (const method of row.remove) {
+				const reagents = method.reagents[0] ?? '';
+				const removalHarm = harm(rules, tree, needs, index, point.node, 'removal', reagents, [...method.conditions]);
+				if (removalHarm.blocked) {
+					firstRemovalProblem ||= `removing it (${reagents}) ${removalHarm.blocked}`;
+					continue;
+				}
+				options.push({
+					pg: row.id,
+					transform,
+					install,
+					removal: { reagents, conditions: [...method.conditions] },
+					removeAt: point.node,
+					cautions: point.cautions + installHarm.cautions + removalHarm.cautions,
+					harshness: harshnessOf(installConditions) + harshnessOf([...method.conditions]),
+					why: ''
+				});
 			}
-			options.push({
-				pg: row.id,
-				transform,
-				install,
-				removal: { reagents, conditions: [...method.conditions] },
-				cautions: cautions + installHarm.cautions + removalHarm.cautions,
-				harshness: harshnessOf(installConditions) + harshnessOf([...method.conditions]),
-				why: ''
-			});
 		}
 		if (options.length === 0) return { pg: row.id, options, rejected: `${row.id} rejected: ${firstRemovalProblem}` };
 		return { pg: row.id, options, rejected: null };

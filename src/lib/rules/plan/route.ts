@@ -1,6 +1,6 @@
 // Writes a joint choice out as a route document: the original steps run on protected
 // intermediates, with an install step on the intermediate that the first attacking step uses and
-// a removal step (shared when conditions match) where each group must be free again. Branches of
+// a removal step (shared when conditions match) where the chosen option takes each PG off. Branches of
 // a convergent route get their own protection steps before the step that joins them.
 
 import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/document';
@@ -38,7 +38,7 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 		const made = tree.made.get(node.id);
 		if (made) steps.push({ ...made, from: made.from.map((id) => latest.get(id)!) });
 		// Masks that arrive with the intermediate: on before it, not yet off.
-		let active = all.filter((x) => place(x, needs[x]!.installAt) < place(x, node.id) && place(x, node.id) <= place(x, needs[x]!.freeAt));
+		let active = all.filter((x) => place(x, needs[x]!.installAt) < place(x, node.id) && place(x, node.id) <= place(x, options[x]!.removeAt));
 		intermediates.push({ ...node, structure: structureAt(node.id, active) });
 		let current = node.id;
 		const installs = new Map<string, number[]>();
@@ -63,12 +63,12 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 					intermediate: id,
 					protectingGroup: chosen.pg,
 					install: { before: tree.next.get(node.id)!.id, ...chosen.install, conditions: [...chosen.install.conditions] },
-					removal: { after: need.freeAt === tree.target ? 'end' : tree.made.get(need.freeAt)!.id, ...chosen.removal, conditions: [...chosen.removal.conditions] }
+					removal: { after: chosen.removeAt === tree.target ? 'end' : tree.made.get(chosen.removeAt)!.id, ...chosen.removal, conditions: [...chosen.removal.conditions] }
 				});
 			}
 		}
 		const batches = new Map<string, number[]>();
-		for (const x of active.filter((i) => needs[i]!.freeAt === node.id)) {
+		for (const x of active.filter((i) => options[i]!.removeAt === node.id)) {
 			const key = [...options[x]!.removal.conditions].sort().join('+');
 			batches.set(key, [...(batches.get(key) ?? []), x]);
 		}

@@ -2,13 +2,13 @@
 // lexicographic — added steps, then cautions, then harshness — folded into one score.
 
 import type { CheckRules } from '../check/types';
-import { maskedAt } from './options';
+import { freedEarlyAt, maskedAt } from './options';
 import type { Need, Option } from './types';
 
 export type Choice = { options: Option[]; score: number; addedSteps: number; cautions: number; harshness: number };
 
 // Keys join with \u0001: intermediate ids are the chemist's own and may hold any other character.
-const removalKey = (need: Need, option: Option) => `${need.freeAt}\u0001${[...option.removal.conditions].sort().join('+')}`;
+const removalKey = (option: Option) => `${option.removeAt}\u0001${[...option.removal.conditions].sort().join('+')}`;
 /** Same-type groups that take the same PG at the same gap go on in one step (five ketones, one ketalisation). */
 export const installKey = (need: Need, option: Option) => `${need.installAt}\u0001${need.group}\u0001${option.pg}\u0001${option.install.reagents}`;
 const installClassOf = (need: Need) => `${need.installAt}\u0001${need.group}`;
@@ -20,18 +20,21 @@ function compatible(rules: CheckRules, needs: Need[], x: number, ox: Option, y: 
 	return !strips(rules, needs, x, ox, y, oy) && !strips(rules, needs, y, oy, x, ox);
 }
 
-/** Whether need a's install or removal, done with option oa, would strip need b's PG ob. */
+/** Whether need a's install or removal, done with option oa, would strip need b's PG ob, or attack b's group once ob is off. */
 function strips(rules: CheckRules, needs: Need[], a: number, oa: Option, b: number, ob: Option): boolean {
 	const na = needs[a]!;
-	const sameRemoval = removalKey(na, oa) === removalKey(needs[b]!, ob);
-	const sameInstall = installKey(na, oa) === installKey(needs[b]!, ob);
+	const nb = needs[b]!;
+	const sameRemoval = removalKey(oa) === removalKey(ob);
+	const sameInstall = installKey(na, oa) === installKey(nb, ob);
+	const reacts = (group: string, conditions: string[]) => conditions.some((c) => rules.reactivity(group, c)?.rating === 'reacts');
 	// A same-type neighbour left free at this install would be attacked by it, unless it shares the step.
-	if (!sameInstall && needs[b]!.installAt === na.installAt && needs[b]!.group === na.group) {
-		if (oa.install.conditions.some((c) => rules.reactivity(na.group, c)?.rating === 'reacts')) return true;
-	}
+	if (!sameInstall && nb.installAt === na.installAt && nb.group === na.group && reacts(na.group, oa.install.conditions)) return true;
+	// A group whose mask came off early is free again for a's install or removal.
+	if (freedEarlyAt(nb, ob.removeAt, na.installAt) && nb.members.some((g) => reacts(g, oa.install.conditions))) return true;
+	if (freedEarlyAt(nb, ob.removeAt, oa.removeAt) && nb.members.some((g) => reacts(g, oa.removal.conditions))) return true;
 	const exposed = [
-		...(maskedAt(needs, b, na.installAt, a, 'install') && !sameInstall ? oa.install.conditions : []),
-		...(maskedAt(needs, b, na.freeAt, a, 'removal') && !sameRemoval ? oa.removal.conditions : [])
+		...(maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) && !sameInstall ? oa.install.conditions : []),
+		...(maskedAt(needs, b, oa.removeAt, a, 'removal', ob.removeAt) && !sameRemoval ? oa.removal.conditions : [])
 	];
 	return exposed.some((c) => rules.stability(ob.pg, c, []).rating === 'labile');
 }
@@ -63,7 +66,7 @@ export function searchChoices(rules: CheckRules, needs: Need[], options: Option[
 	const best: Choice[] = [];
 	const chosen: number[] = [];
 	const installKeys = options.map((list, x) => list.map((o) => installKey(needs[x]!, o)));
-	const removalKeys = options.map((list, x) => list.map((o) => removalKey(needs[x]!, o)));
+	const removalKeys = options.map((list) => list.map((o) => removalKey(o)));
 	// Pairwise compatibility is asked again and again on the way down: work each pair out once.
 	const pairs = new Map<number, Uint8Array>();
 	const fits = (x: number, i: number, y: number, j: number) => {
@@ -74,21 +77,33 @@ export function searchChoices(rules: CheckRules, needs: Need[], options: Option[
 		if (table[cell] === 0) table[cell] = compatible(rules, needs, x, options[x]![i]!, y, options[y]![j]!) ? 1 : 2;
 		return table[cell] === 1;
 	};
-	// Lower bounds for the needs from `depth` on: their cheapest ratings, and one install per
-	// (gap, group type) and one removal per gap that no choice so far already brings.
+	// Lower bounds for the needs from `depth` on: their cheapest ratings, one install per (place,
+	// group type) and the removals no choice so far already brings (see `removalsStillToCome`).
 	const floor = options.map((list) => Math.min(...list.map((o) => scoreOf(0, o.cautions, o.harshness))));
 	const rest = floor.map((_, i) => floor.slice(i).reduce((sum, v) => sum + v, 0));
 	const installClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => installClassOf(n)))]);
-	const removalClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => n.freeAt))]);
+	const windows = needs.map((n) => n.path.slice(n.path.indexOf(n.removableFrom), n.path.indexOf(n.freeAt) + 1));
 	const installs = new KeyCounts();
 	const removals = new KeyCounts();
 	const installClassesUsed = new KeyCounts();
-	const removalClassesUsed = new KeyCounts();
+	const removalPlaces = new KeyCounts();
 	const worst = () => (best.length < keep ? Infinity : best[best.length - 1]!.score);
+	// Each later need comes off somewhere in its window: windows of one place that no removal so far
+	// covers need a step each, and any other uncovered window at least one more.
+	const removalsStillToCome = (depth: number) => {
+		const single = new Set<string>();
+		let other = false;
+		for (let d = depth; d < needs.length; d++) {
+			const window = windows[d]!;
+			if (window.some((node) => removalPlaces.has(node))) continue;
+			if (window.length === 1) single.add(window[0]!);
+			else other = true;
+		}
+		const otherUncovered = other && windows.slice(depth).some((w) => w.length > 1 && !w.some((node) => removalPlaces.has(node) || single.has(node)));
+		return single.size + (otherUncovered ? 1 : 0);
+	};
 	const stepsStillToCome = (depth: number) =>
-		depth === needs.length
-			? 0
-			: installClasses[depth]!.filter((c) => !installClassesUsed.has(c)).length + removalClasses[depth]!.filter((c) => !removalClassesUsed.has(c)).length;
+		depth === needs.length ? 0 : installClasses[depth]!.filter((c) => !installClassesUsed.has(c)).length + removalsStillToCome(depth);
 	const visit = (depth: number, cautions: number, harshness: number) => {
 		const added = installs.size + removals.size;
 		if (best.length >= keep && scoreOf(added + stepsStillToCome(depth), cautions, harshness) + (rest[depth] ?? 0) >= worst()) return;
@@ -101,14 +116,13 @@ export function searchChoices(rules: CheckRules, needs: Need[], options: Option[
 			const install = installKeys[depth]![i]!;
 			const removal = removalKeys[depth]![i]!;
 			const installClass = installClassOf(needs[depth]!);
-			const removalClass = needs[depth]!.freeAt;
 			chosen.push(i);
 			installs.add(install);
 			removals.add(removal);
 			installClassesUsed.add(installClass);
-			removalClassesUsed.add(removalClass);
+			removalPlaces.add(option.removeAt);
 			visit(depth + 1, cautions + option.cautions, harshness + option.harshness);
-			removalClassesUsed.remove(removalClass);
+			removalPlaces.remove(option.removeAt);
 			installClassesUsed.remove(installClass);
 			removals.remove(removal);
 			installs.remove(install);

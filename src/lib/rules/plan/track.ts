@@ -130,16 +130,19 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 	for (const track of tracks) {
 		const attackedAt: string[] = [];
 		let installAt: string | undefined;
-		for (const node of track.path) {
-			if (node === track.end) break;
+		let removableFrom = track.end;
+		track.path.forEach((node, i) => {
+			if (i >= track.path.indexOf(track.end)) return;
 			const step = tree.next.get(node)!;
 			const hit = tree.conditions.get(step.id)!.some((c) => track.unit.members.some((g) => rules.reactivity(g, c.id)?.rating === 'reacts'));
-			if (!hit) continue;
+			if (!hit) return;
 			attackedAt.push(step.id);
 			installAt ??= node;
-		}
+			removableFrom = track.path[i + 1]!;
+		});
 		if (!installAt) continue;
-		needs.push({ group: track.unit.id, atoms: track.unit.atoms, path: track.path.slice(0, track.path.indexOf(track.end) + 1), atomsAt: track.atomsAt, installAt, freeAt: track.end, attackedAt });
+		const path = track.path.slice(0, track.path.indexOf(track.end) + 1);
+		needs.push({ group: track.unit.id, members: track.unit.members, atoms: track.unit.atoms, path, atomsAt: track.atomsAt, installAt, freeAt: track.end, removableFrom, attackedAt });
 	}
 	return needs;
 }

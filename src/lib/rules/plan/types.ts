@@ -7,6 +7,8 @@ import type { RouteDocument } from '../../route/document';
 export type Need = {
 	/** Group id; a diol masked as one unit is `diol-1,2` or `diol-1,3`. */
 	group: string;
+	/** The free groups the unit stands for: the group itself, and a diol's alcohols. */
+	members: string[];
 	/** Atoms of the instance in the intermediate where it is first seen. */
 	atoms: number[];
 	/** Intermediate ids it lives in, from where it is first seen towards the target. */
@@ -17,6 +19,8 @@ export type Need = {
 	installAt: string;
 	/** Intermediate where it must be free again: the one the step that works on it uses, or the target. */
 	freeAt: string;
+	/** The earliest intermediate it may come off at: the product of the last step that attacks it. */
+	removableFrom: string;
 	/** Ids of the steps that attack it while it stands by. */
 	attackedAt: string[];
 };
@@ -28,6 +32,8 @@ export type Option = {
 	transform: string;
 	install: { reagents: string; conditions: string[] };
 	removal: { reagents: string; conditions: string[] };
+	/** Intermediate it comes off at: the need's `freeAt`, or earlier once nothing attacks the group. */
+	removeAt: string;
 	cautions: number;
 	harshness: number;
 	why: string;
