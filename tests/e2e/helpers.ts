@@ -39,7 +39,11 @@ export async function cormorantId(page: Page): Promise<string> {
 }
 
 /** A two-node route made through the API, for the tests that are about something else. */
-export async function makeRoute(page: Page, name: string, reagents = 'MeMgBr, THF'): Promise<string> {
+export async function makeRoute(
+	page: Page,
+	name: string,
+	reagents = 'MeMgBr, THF'
+): Promise<string> {
 	const created = await page.request.post(`/api/projects/${await cormorantId(page)}/routes`, {
 		data: {
 			name,

@@ -44,7 +44,9 @@ test('a chemist plans protection, sees the ranked plans, uses plan 1 and lands o
 
 	await first.getByRole('button', { name: 'Use this plan' }).click();
 	await expect(page).not.toHaveURL(new RegExp(id));
-	await expect(page.getByRole('heading', { name: `${name} (protected, plan 1)`, level: 1 })).toBeVisible();
+	await expect(
+		page.getByRole('heading', { name: `${name} (protected, plan 1)`, level: 1 })
+	).toBeVisible();
 	await expect(page.getByTestId('intermediate-node')).toHaveCount(4);
 
 	// The planner's steps are marked on the canvas, in words and for screen readers.
@@ -52,8 +54,12 @@ test('a chemist plans protection, sees the ranked plans, uses plan 1 and lands o
 	await expect(stepLabel(page, 'protect').getByText('protect', { exact: true })).toBeVisible();
 	await expect(stepLabel(page, 'deprotect').getByText('deprotect', { exact: true })).toBeVisible();
 	await expect(stepLabel(page, 'transform')).toContainText('MeMgBr, THF');
-	await expect(page.locator('[aria-roledescription="edge"][aria-label^="Protection step: "]')).toHaveCount(1);
-	await expect(page.locator('[aria-roledescription="edge"][aria-label^="Deprotection step: "]')).toHaveCount(1);
+	await expect(
+		page.locator('[aria-roledescription="edge"][aria-label^="Protection step: "]')
+	).toHaveCount(1);
+	await expect(
+		page.locator('[aria-roledescription="edge"][aria-label^="Deprotection step: "]')
+	).toHaveCount(1);
 
 	// The new intermediates arrive without a place and are laid out: no two nodes overlap.
 	const overlaps = () =>
@@ -62,7 +68,9 @@ test('a chemist plans protection, sees the ranked plans, uses plan 1 and lands o
 			return boxes.flatMap((a, i) =>
 				boxes
 					.slice(i + 1)
-					.filter((b) => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom)
+					.filter(
+						(b) => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom
+					)
 			).length;
 		});
 	await expect.poll(overlaps).toBe(0);
@@ -92,7 +100,9 @@ test('a reviewer sees the plans but cannot use one', async ({ page, browser }) =
 	await dialog.getByRole('button', { name: 'Close' }).click();
 	await expect(dialog).toBeHidden();
 	// The server refuses too, whatever the page shows.
-	const refused = await page.request.post(`/api/routes/${id}/plan/1/save`, { data: { version: 1 } });
+	const refused = await page.request.post(`/api/routes/${id}/plan/1/save`, {
+		data: { version: 1 }
+	});
 	expect(refused.status()).toBe(403);
 });
 
@@ -108,7 +118,9 @@ test('a route with no possible plan says why instead of showing plans', async ({
 			n.id === 'c' ? { ...n, label: 'OG-2031-D hydroxy ester', structure: 'CC(O)(C)CCC(=O)OC' } : n
 		)
 	};
-	expect((await page.request.put(`/api/routes/${id}`, { data: { version: 1, document: kept } })).status()).toBe(200);
+	expect(
+		(await page.request.put(`/api/routes/${id}`, { data: { version: 1, document: kept } })).status()
+	).toBe(200);
 	await page.goto(`/routes/${id}`);
 	await page.getByRole('button', { name: 'Plan protection' }).click();
 	const dialog = plansDialog(page);

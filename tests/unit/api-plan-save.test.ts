@@ -14,8 +14,18 @@ let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
 let project: Project;
 type Who = keyof typeof f.people;
 
-async function call(handler: unknown, who: Who | null, params: Record<string, string>, body?: unknown) {
-	const event = fakeEvent({ user: who ? f.people[who] : null, path: '/api/x', method: 'POST', body }) as RequestEvent & {
+async function call(
+	handler: unknown,
+	who: Who | null,
+	params: Record<string, string>,
+	body?: unknown
+) {
+	const event = fakeEvent({
+		user: who ? f.people[who] : null,
+		path: '/api/x',
+		method: 'POST',
+		body
+	}) as RequestEvent & {
 		params: Record<string, string>;
 	};
 	event.params = params;
@@ -25,10 +35,12 @@ async function call(handler: unknown, who: Who | null, params: Record<string, st
 
 // The Cormorant keto ester meets a Grignard reagent while its ketone stands by, so the ketone
 // must be masked (Clayden, ketones react with Grignard reagents; from memory).
-const grignard = () => line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, THF'], 'OG-2031 Grignard');
+const grignard = () =>
+	line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, THF'], 'OG-2031 Grignard');
 // Here the ketone reacts on purpose and the methyl ester must stand by a Grignard reagent: no PG
 // masks an ester, so there is no plan (Clayden, esters react with Grignard reagents; from memory).
-const hopeless = () => line(['CC(=O)CCC(=O)OC', 'CC(O)(C)CCC(=O)OC'], ['MeMgBr, THF'], 'OG-2031 ester kept');
+const hopeless = () =>
+	line(['CC(=O)CCC(=O)OC', 'CC(O)(C)CCC(=O)OC'], ['MeMgBr, THF'], 'OG-2031 ester kept');
 
 async function storedRoute(doc = grignard()): Promise<string> {
 	const created = await call(createOne, 'chemist', { projectId: project.id }, doc);
@@ -47,18 +59,34 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 		const routeId = await storedRoute();
 		const saved = await call(savePlan, 'chemist', { routeId, rank: '1' }, { version: 1 });
 		expect(saved.status).toBe(201);
-		expect(saved.body).toEqual({ id: expect.any(String), version: 1, name: 'OG-2031 Grignard (protected, plan 1)' });
+		expect(saved.body).toEqual({
+			id: expect.any(String),
+			version: 1,
+			name: 'OG-2031 Grignard (protected, plan 1)'
+		});
 
 		// What was stored is exactly the planner's document for that rank, under the new name.
 		const expected = planRouteDocument(grignard()).plans[0]!.route;
 		const got = await call(getRoute, 'viewer', { routeId: saved.body.id });
-		expect(got.body.document).toEqual({ ...expected, name: 'OG-2031 Grignard (protected, plan 1)' });
+		expect(got.body.document).toEqual({
+			...expected,
+			name: 'OG-2031 Grignard (protected, plan 1)'
+		});
 		expect(got.body.projectId).toBe(project.id);
-		expect(got.body.document.steps.map((s: { intent?: string }) => s.intent ?? 'transform')).toEqual(['protect', 'transform', 'deprotect']);
+		expect(
+			got.body.document.steps.map((s: { intent?: string }) => s.intent ?? 'transform')
+		).toEqual(['protect', 'transform', 'deprotect']);
 
-		expect(await PlannedRoute.findOne({ where: { routeId: saved.body.id }, raw: true })).toMatchObject({ plannedFromId: routeId, rank: 1 });
-		const event = await ActivityEvent.findOne({ where: { kind: 'route.planned' }, order: [['createdAt', 'DESC']] });
-		expect(event?.summary).toBe('Chemist saved plan 1 for “OG-2031 Grignard” as the route “OG-2031 Grignard (protected, plan 1)”.');
+		expect(
+			await PlannedRoute.findOne({ where: { routeId: saved.body.id }, raw: true })
+		).toMatchObject({ plannedFromId: routeId, rank: 1 });
+		const event = await ActivityEvent.findOne({
+			where: { kind: 'route.planned' },
+			order: [['createdAt', 'DESC']]
+		});
+		expect(event?.summary).toBe(
+			'Chemist saved plan 1 for “OG-2031 Grignard” as the route “OG-2031 Grignard (protected, plan 1)”.'
+		);
 		expect(event?.details).toEqual({ routeId: saved.body.id, plannedFromId: routeId, rank: 1 });
 		expect(event?.projectId).toBe(project.id);
 
@@ -75,7 +103,10 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 		const saved = await call(savePlan, 'lead', { routeId, rank: '2' }, { version: 1 });
 		expect(saved.status).toBe(201);
 		const got = await call(getRoute, 'lead', { routeId: saved.body.id });
-		expect(got.body.document).toEqual({ ...plans[1]!.route, name: 'OG-2031 Grignard (protected, plan 2)' });
+		expect(got.body.document).toEqual({
+			...plans[1]!.route,
+			name: 'OG-2031 Grignard (protected, plan 2)'
+		});
 	});
 
 	it('refuses reviewers and viewers (403), other teams and unknown routes (404), and visitors (401), saving nothing', async () => {
@@ -86,7 +117,9 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 			expect(refused.status, who).toBe(403);
 			expect(refused.body.error.code).toBe('forbidden');
 		}
-		expect((await call(savePlan, 'outsider', { routeId, rank: '1' }, { version: 1 })).status).toBe(404);
+		expect((await call(savePlan, 'outsider', { routeId, rank: '1' }, { version: 1 })).status).toBe(
+			404
+		);
 		const unknown = { routeId: '00000000-0000-4000-8000-000000000000', rank: '1' };
 		expect((await call(savePlan, 'lead', unknown, { version: 1 })).status).toBe(404);
 		expect((await call(savePlan, null, { routeId, rank: '1' }, { version: 1 })).status).toBe(401);
@@ -97,8 +130,13 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 		const routeId = await storedRoute();
 		const stale = await call(savePlan, 'chemist', { routeId, rank: '1' }, { version: 7 });
 		expect(stale.status).toBe(409);
-		expect(stale.body.error).toMatchObject({ code: 'version-conflict', details: { currentVersion: 1 } });
-		expect((await call(savePlan, 'chemist', { routeId, rank: '1' }, {})).body.error.code).toBe('invalid_body');
+		expect(stale.body.error).toMatchObject({
+			code: 'version-conflict',
+			details: { currentVersion: 1 }
+		});
+		expect((await call(savePlan, 'chemist', { routeId, rank: '1' }, {})).body.error.code).toBe(
+			'invalid_body'
+		);
 		for (const rank of ['9', '0', 'first']) {
 			const missing = await call(savePlan, 'chemist', { routeId, rank }, { version: 1 });
 			expect(missing.status, rank).toBe(404);
@@ -115,10 +153,21 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 
 	it('answers 422 naming the problem when the stored route is not a valid route document', async () => {
 		// The service stores what it is given; a half-drawn route can point at a missing intermediate.
-		const broken = await createRoute(f.people.chemist, project, { ...grignard(), steps: [{ id: 's1', from: ['i0'], to: 'gone' }] });
-		const answer = await call(savePlan, 'chemist', { routeId: broken.id, rank: '1' }, { version: 1 });
+		const broken = await createRoute(f.people.chemist, project, {
+			...grignard(),
+			steps: [{ id: 's1', from: ['i0'], to: 'gone' }]
+		});
+		const answer = await call(
+			savePlan,
+			'chemist',
+			{ routeId: broken.id, rank: '1' },
+			{ version: 1 }
+		);
 		expect(answer.status).toBe(422);
-		expect(answer.body.error).toMatchObject({ code: 'invalid_route', message: expect.stringContaining('unknown intermediate "gone"') });
+		expect(answer.body.error).toMatchObject({
+			code: 'invalid_route',
+			message: expect.stringContaining('unknown intermediate "gone"')
+		});
 	});
 });
 
@@ -135,10 +184,18 @@ describe('links between a route and its saved plans', () => {
 				{ id: second.body.id, name: 'OG-2031 Grignard (protected, plan 2)', rank: 2 }
 			]
 		});
-		const event = fakeEvent({ user: f.people.viewer, path: `/routes/${first.body.id}` }) as RequestEvent & { params: Record<string, string> };
+		const event = fakeEvent({
+			user: f.people.viewer,
+			path: `/routes/${first.body.id}`
+		}) as RequestEvent & { params: Record<string, string> };
 		event.params = { routeId: first.body.id };
-		const data = (await (load as unknown as (e: RequestEvent) => Promise<Record<string, unknown>>)(event)) as { links: unknown };
-		expect(data.links).toEqual({ plannedFrom: { id: routeId, name: 'OG-2031 Grignard', rank: 1 }, plannedVersions: [] });
+		const data = (await (load as unknown as (e: RequestEvent) => Promise<Record<string, unknown>>)(
+			event
+		)) as { links: unknown };
+		expect(data.links).toEqual({
+			plannedFrom: { id: routeId, name: 'OG-2031 Grignard', rank: 1 },
+			plannedVersions: []
+		});
 	});
 
 	it('keep the planned route when the original goes (the link is cleared)', async () => {
@@ -148,7 +205,9 @@ describe('links between a route and its saved plans', () => {
 		const planned = (await Route.findByPk(saved.body.id))!;
 		expect(planned).not.toBeNull();
 		expect(await routeLinks(planned)).toEqual({ plannedFrom: null, plannedVersions: [] });
-		expect(await PlannedRoute.findOne({ where: { routeId: planned.id }, raw: true })).toMatchObject({ plannedFromId: null, rank: 1 });
+		expect(await PlannedRoute.findOne({ where: { routeId: planned.id }, raw: true })).toMatchObject(
+			{ plannedFromId: null, rank: 1 }
+		);
 	});
 });
 

@@ -23,7 +23,12 @@ const route: RouteDocument = {
 		{ id: 'z', structure: 'CC(=O)CCC(=O)O' }
 	],
 	steps: [
-		{ id: '5d1c0a9e-grignard', from: ['a'], to: 'b', reagents: 'MeMgBr, THF, then aqueous NH4Cl work-up at 0 °C' },
+		{
+			id: '5d1c0a9e-grignard',
+			from: ['a'],
+			to: 'b',
+			reagents: 'MeMgBr, THF, then aqueous NH4Cl work-up at 0 °C'
+		},
 		{ id: 'esterify', from: ['z'], to: 'a', reagents: 'MeOH, H2SO4' }
 	]
 };
@@ -33,7 +38,11 @@ const dioxolane: Protection = {
 	atoms: [0, 1, 2, 3],
 	intermediate: 'a-dioxolane',
 	protectingGroup: 'dioxolane',
-	install: { before: '5d1c0a9e-grignard', reagents: 'ethylene glycol, TsOH, toluene', conditions: ['acid-mild'] },
+	install: {
+		before: '5d1c0a9e-grignard',
+		reagents: 'ethylene glycol, TsOH, toluene',
+		conditions: ['acid-mild']
+	},
 	removal: { after: 'end', reagents: '1 M HCl, THF', conditions: ['acid-mild'] }
 };
 
@@ -42,29 +51,44 @@ describe('plan view', () => {
 		expect(stepOrder(route).map((s) => s.id)).toEqual(['esterify', '5d1c0a9e-grignard']);
 		const names = stepNames(route);
 		expect(names.get('esterify')).toBe('step 1 (MeOH, H2SO4)');
-		expect(names.get('5d1c0a9e-grignard')).toBe('step 2 (MeMgBr, THF, then aqueous NH4Cl work-up…)');
-		expect(stepNames({ ...route, steps: [{ id: 's', from: ['a'], to: 'b' }] }).get('s')).toBe('step 1');
+		expect(names.get('5d1c0a9e-grignard')).toBe(
+			'step 2 (MeMgBr, THF, then aqueous NH4Cl work-up…)'
+		);
+		expect(stepNames({ ...route, steps: [{ id: 's', from: ['a'], to: 'b' }] }).get('s')).toBe(
+			'step 1'
+		);
 	});
 
 	it('says where a protecting group goes on and comes off', () => {
 		const names = stepNames(route);
-		expect(installPlace(dioxolane, names)).toBe('before step 2 (MeMgBr, THF, then aqueous NH4Cl work-up…)');
-		expect(removalPlace(dioxolane, names)).toBe('at the end');
-		expect(removalPlace({ ...dioxolane, removal: { ...dioxolane.removal, after: 'esterify' } }, names)).toBe(
-			'after step 1 (MeOH, H2SO4)'
+		expect(installPlace(dioxolane, names)).toBe(
+			'before step 2 (MeMgBr, THF, then aqueous NH4Cl work-up…)'
 		);
+		expect(removalPlace(dioxolane, names)).toBe('at the end');
+		expect(
+			removalPlace({ ...dioxolane, removal: { ...dioxolane.removal, after: 'esterify' } }, names)
+		).toBe('after step 1 (MeOH, H2SO4)');
 		// A step the map no longer has is still named, by its id.
-		expect(installPlace({ ...dioxolane, install: { ...dioxolane.install, before: 'gone' } }, names)).toBe('before step “gone”');
+		expect(
+			installPlace({ ...dioxolane, install: { ...dioxolane.install, before: 'gone' } }, names)
+		).toBe('before step “gone”');
 	});
 
 	it('uses the rule table’s labels when they are there and the ids until then', () => {
-		const labels = { groups: new Map([['ester', 'carboxylic ester']]), protectingGroups: new Map([['TBS', 'tert-butyldimethylsilyl ether']]) };
+		const labels = {
+			groups: new Map([['ester', 'carboxylic ester']]),
+			protectingGroups: new Map([['TBS', 'tert-butyldimethylsilyl ether']])
+		};
 		expect(groupName('ester', labels)).toBe('carboxylic ester');
 		expect(groupName('ester', null)).toBe('ester');
 		expect(groupName('route', labels)).toBe('the route');
 		expect(protectingGroupName('TBS', labels)).toBe('tert-butyldimethylsilyl ether');
 		expect(protectingGroupName('dioxolane', labels)).toBeNull();
-		expect([0, 1, 2].map(addedStepsText)).toEqual(['No added steps', '1 added step', '2 added steps']);
+		expect([0, 1, 2].map(addedStepsText)).toEqual([
+			'No added steps',
+			'1 added step',
+			'2 added steps'
+		]);
 	});
 
 	it('finds the first protected intermediate of a protection in the plan’s route', () => {
@@ -74,7 +98,13 @@ describe('plan view', () => {
 			protections: [dioxolane],
 			addedSteps: 2,
 			rationale: [],
-			route: { ...route, intermediates: [...route.intermediates, { id: 'a-dioxolane', structure: 'CC1(CCC(=O)OC)OCCO1' }] }
+			route: {
+				...route,
+				intermediates: [
+					...route.intermediates,
+					{ id: 'a-dioxolane', structure: 'CC1(CCC(=O)OC)OCCO1' }
+				]
+			}
 		};
 		expect(protectedStructure(plan, dioxolane)).toBe('CC1(CCC(=O)OC)OCCO1');
 		expect(protectedStructure(plan, { ...dioxolane, intermediate: 'nowhere' })).toBeNull();
@@ -91,10 +121,21 @@ describe('step edges of the planner', () => {
 				{ id: 'plain', from: ['b'], to: 'z', reagents: 'MeMgBr', intent: 'transform' }
 			]
 		};
-		expect(doc.steps.map(intentLabel)).toEqual(['Protection step: ethylene glycol, TsOH', 'Deprotection step', null]);
+		expect(doc.steps.map(intentLabel)).toEqual([
+			'Protection step: ethylene glycol, TsOH',
+			'Deprotection step',
+			null
+		]);
 		const edges = toEdges(doc, [], null);
-		expect(edges.map((e) => e.ariaLabel)).toEqual(['Protection step: ethylene glycol, TsOH', 'Deprotection step', undefined]);
-		const renamed = { ...doc, steps: [{ ...doc.steps[0]!, reagents: '2,2-dimethoxypropane, CSA' }, ...doc.steps.slice(1)] };
+		expect(edges.map((e) => e.ariaLabel)).toEqual([
+			'Protection step: ethylene glycol, TsOH',
+			'Deprotection step',
+			undefined
+		]);
+		const renamed = {
+			...doc,
+			steps: [{ ...doc.steps[0]!, reagents: '2,2-dimethoxypropane, CSA' }, ...doc.steps.slice(1)]
+		};
 		const again = toEdges(renamed, edges, null);
 		expect(again[0]!.ariaLabel).toBe('Protection step: 2,2-dimethoxypropane, CSA');
 		expect(again[1]).toBe(edges[1]);

@@ -10,7 +10,10 @@ import {
 import type { Route } from './route';
 
 /** A route saved from one of the planner's plans for another route of the same project. */
-export class PlannedRoute extends Model<InferAttributes<PlannedRoute>, InferCreationAttributes<PlannedRoute>> {
+export class PlannedRoute extends Model<
+	InferAttributes<PlannedRoute>,
+	InferCreationAttributes<PlannedRoute>
+> {
 	declare id: CreationOptional<string>;
 	/** The route the plan was saved as. */
 	declare routeId: string;

@@ -17,21 +17,38 @@ const body = z.object({ version: z.number().int().positive() });
  * the chemist never saw.
  */
 export const POST: RequestHandler = apiHandler(async (event) => {
-	const { route, user, project } = await requireRouteAction(event, event.params.routeId, 'route.edit');
+	const { route, user, project } = await requireRouteAction(
+		event,
+		event.params.routeId,
+		'route.edit'
+	);
 	const rank = /^[1-9][0-9]{0,2}$/.test(event.params.rank) ? Number(event.params.rank) : null;
 	const { version } = await readJson(event, body);
 	if (version !== route.version) {
-		return apiError(409, 'version-conflict', `The route has changed since these plans were made (now at version ${route.version}). Plan again.`, {
-			currentVersion: route.version
-		});
+		return apiError(
+			409,
+			'version-conflict',
+			`The route has changed since these plans were made (now at version ${route.version}). Plan again.`,
+			{
+				currentVersion: route.version
+			}
+		);
 	}
 	const answer = planRouteDocument(routeDocumentOr422(await routeDocument(route)));
 	const plan = answer.plans.find((p) => p.rank === rank);
 	if (!plan) {
-		const why = answer.unsolved?.map((u) => u.reason).join(' ') ?? `The planner found ${answer.plans.length} plan(s).`;
-		error(404, { code: 'no_such_plan', message: `There is no plan ${event.params.rank} for this route. ${why}` });
+		const why =
+			answer.unsolved?.map((u) => u.reason).join(' ') ??
+			`The planner found ${answer.plans.length} plan(s).`;
+		error(404, {
+			code: 'no_such_plan',
+			message: `There is no plan ${event.params.rank} for this route. ${why}`
+		});
 	}
-	const document = routeDocumentOr422({ ...plan.route, name: plannedRouteName(route.name, plan.rank) });
+	const document = routeDocumentOr422({
+		...plan.route,
+		name: plannedRouteName(route.name, plan.rank)
+	});
 	const created = await createRoute(user, project, document, { from: route, rank: plan.rank });
 	return json({ id: created.id, version: created.version, name: created.name }, { status: 201 });
 });
