@@ -74,7 +74,11 @@ describe('install transforms agree with RDKit running the same reaction SMARTS',
 				it(`${row.id} on a ${group}`, () => {
 					const model = MODELS[group]!;
 					const unit = freeUnits(model).find((u) => u.id === group)!;
-					const ours = canonical(protectedStructure(model, [{ pg: row.id, transform: transform.smarts, atoms: unit.atoms }]));
+					const ours = canonical(
+						protectedStructure(model, [
+							{ pg: row.id, transform: transform.smarts, atoms: unit.atoms }
+						])
+					);
 					const theirs = rdkitProducts(transform.smarts, model);
 					// One site in each model, so RDKit makes one distinct product and ours is it.
 					expect([...theirs]).toEqual([ours]);
@@ -89,7 +93,11 @@ describe('transforms change only the chosen site', () => {
 		// The hydroxyls are 1,4 apart, so no two of them read as a diol.
 		const triol = 'OCCC[C@H](O)CCCO';
 		const secondary = freeUnits(triol).find((u) => u.id === 'alcohol-secondary')!;
-		const ours = canonical(protectedStructure(triol, [{ pg: 'TBS', transform: '[O;H1:1]>>[O:1][Si](C)(C)C(C)(C)C', atoms: secondary.atoms }]));
+		const ours = canonical(
+			protectedStructure(triol, [
+				{ pg: 'TBS', transform: '[O;H1:1]>>[O:1][Si](C)(C)C(C)(C)C', atoms: secondary.atoms }
+			])
+		);
 		expect(rdkitProducts('[O;H1:1]>>[O:1][Si](C)(C)C(C)(C)C', triol)).toContain(ours);
 		expect(ours).toBe(canonical('OCCC[C@H](O[Si](C)(C)C(C)(C)C)CCCO'));
 	});
@@ -100,17 +108,27 @@ describe('transforms change only the chosen site', () => {
 		const atomsOf = (id: string) => units.find((u) => u.id === id)!.atoms;
 		const drawn = protectedStructure(start, [
 			{ pg: 'dioxolane', transform: '[C:1]=O>>[C:1]1OCCO1', atoms: atomsOf('ketone') },
-			{ pg: 'TBS', transform: '[O;H1:1]>>[O:1][Si](C)(C)C(C)(C)C', atoms: atomsOf('alcohol-secondary') },
+			{
+				pg: 'TBS',
+				transform: '[O;H1:1]>>[O:1][Si](C)(C)C(C)(C)C',
+				atoms: atomsOf('alcohol-secondary')
+			},
 			{ pg: 'Boc', transform: '[#7;!H0:1]>>[#7:1]C(=O)OC(C)(C)C', atoms: atomsOf('amine-primary') }
 		]);
-		expect(canonical(drawn)).toBe(canonical('CC1(OCCO1)C[C@H](O[Si](C)(C)C(C)(C)C)C[C@@H](NC(=O)OC(C)(C)C)CC'));
+		expect(canonical(drawn)).toBe(
+			canonical('CC1(OCCO1)C[C@H](O[Si](C)(C)C(C)(C)C)C[C@@H](NC(=O)OC(C)(C)C)CC')
+		);
 	});
 
-	it('puts one acetonide on the 1,2-diol of a 1,2,4-triol, not on its 1,3-diol — Greene\'s, acetonides of 1,2-diols (from memory)', () => {
+	it("puts one acetonide on the 1,2-diol of a 1,2,4-triol, not on its 1,3-diol — Greene's, acetonides of 1,2-diols (from memory)", () => {
 		const triol = 'OC[C@@H](O)CCO';
 		const diol = freeUnits(triol).find((u) => u.id === 'diol-1,2')!;
-		const transform = rows.find((r) => r.id === 'acetonide')!.install.transforms.find((t) => t.groups.includes('diol-1,2'))!.smarts;
-		const ours = canonical(protectedStructure(triol, [{ pg: 'acetonide', transform, atoms: diol.atoms }]));
+		const transform = rows
+			.find((r) => r.id === 'acetonide')!
+			.install.transforms.find((t) => t.groups.includes('diol-1,2'))!.smarts;
+		const ours = canonical(
+			protectedStructure(triol, [{ pg: 'acetonide', transform, atoms: diol.atoms }])
+		);
 		// Written from the other end, the centre's neighbours come in a new order: @@ becomes @.
 		expect(ours).toBe(canonical('OCC[C@H]1COC(C)(C)O1'));
 		expect(rdkitProducts(transform, triol)).toEqual(new Set([ours]));

@@ -42,7 +42,7 @@ describe('strategy cases from textbook practice', () => {
 		expect(pgsOf(answer)[0]).toBe('acetonide');
 		const benzylidene = answer.plans.find((p) => p.protections[0]!.protectingGroup === 'benzylidene')!;
 		expect(benzylidene.protections[0]!.removal.after).toBe('s1');
-		expect(benzylidene.rationale[0]).toContain('after step "s1", as soon as nothing attacks it');
+		expect(benzylidene.rationale[0]).toContain('after step "s1" ((COCl)2, DMSO, Et3N), as soon as nothing attacks it');
 		// Its removal step runs before the hydrogenation.
 		const order = benzylidene.route.steps.map((st) => st.intent ?? st.id);
 		expect(order.indexOf('deprotect')).toBeLessThan(order.indexOf('s2'));
@@ -54,7 +54,7 @@ describe('strategy cases from textbook practice', () => {
 		const answer = planRoute(line(['OCCCCC(=O)OC', 'OCCCCC(C)(C)O', 'OCCCCC(C)=C'], ['MeMgBr, THF', 'TsOH, toluene, reflux']), { verify: firstClash, plans: 20 });
 		const bn = answer.plans.find((p) => p.protections[0]!.protectingGroup === 'Bn')!;
 		expect(bn.protections[0]!.removal).toMatchObject({ after: 's1', conditions: ['hydrogenation'] });
-		expect(bn.rationale[0]).toContain('off after step "s1", as soon as nothing attacks it');
+		expect(bn.rationale[0]).toContain('off after step "s1" (MeMgBr, THF), as soon as nothing attacks it');
 		expect(bn.rationale.join(' ')).not.toContain('Bn rejected');
 	});
 
@@ -82,7 +82,7 @@ describe('strategy cases from textbook practice', () => {
 			)
 		);
 		expect(answer.plans).toEqual([]);
-		expect(answer.unsolved).toContainEqual({ group: 'alkyne-terminal', atoms: [0, 1], reason: expect.stringContaining('Step "s2" makes it impossible') });
+		expect(answer.unsolved).toContainEqual({ group: 'alkyne-terminal', atoms: [0, 1], reason: expect.stringContaining('Step "s2" (TBAF, THF) makes it impossible') });
 	});
 
 	it('finds no plan when a Grignard reagent meets a methyl ester the step keeps — Clayden, esters react with Grignard reagents (from memory)', () => {

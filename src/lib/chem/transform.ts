@@ -29,15 +29,19 @@ export function compileTransform(smarts: string): Compiled {
 	const stored = compiledCache.get(smarts);
 	if (stored) return stored;
 	const parts = smarts.split('>>');
-	if (parts.length !== 2) throw new TransformError(`"${smarts}" is not one reaction SMARTS ("reactant>>product").`);
+	if (parts.length !== 2)
+		throw new TransformError(`"${smarts}" is not one reaction SMARTS ("reactant>>product").`);
 	let reaction: Reaction;
 	try {
 		reaction = smartsParser.parseReaction(smarts);
 	} catch (caught) {
-		throw new TransformError(`"${smarts}" cannot be read: ${String((caught as Error).message ?? caught)}`);
+		throw new TransformError(
+			`"${smarts}" cannot be read: ${String((caught as Error).message ?? caught)}`
+		);
 	}
 	const warning = smartsParser.getSmartsWarning();
-	if (warning) throw new TransformError(`"${smarts}" uses SMARTS that openchemlib ignores: ${warning}`);
+	if (warning)
+		throw new TransformError(`"${smarts}" uses SMARTS that openchemlib ignores: ${warning}`);
 	if (reaction.getReactants() !== 1 || reaction.getProducts() !== 1) {
 		throw new TransformError(`"${smarts}" must have one reactant and one product.`);
 	}
@@ -50,7 +54,10 @@ export function compileTransform(smarts: string): Compiled {
 		if (mapNo) mapped.push(atom);
 		maxMapNo = Math.max(maxMapNo, mapNo);
 	}
-	if (mapped.length === 0) throw new TransformError(`"${smarts}" maps no atom: nothing would say where the change happens.`);
+	if (mapped.length === 0)
+		throw new TransformError(
+			`"${smarts}" maps no atom: nothing would say where the change happens.`
+		);
 	const compiled: Compiled = { reactant, mapped, maxMapNo, parts: parts as [string, string] };
 	compiledCache.set(smarts, compiled);
 	return compiled;
@@ -61,7 +68,10 @@ export function compileTransform(smarts: string): Compiled {
  * secondary alcohol of `OCCC(O)C` only: `applyTransforms(m, [{ smarts: '[O;H1:1]>>[O:1][Si](C)(C)C(C)(C)C', atoms: [4] }])`.
  * Throws TransformError when a transform finds no site among its atoms.
  */
-export function applyTransforms(molecule: Molecule, transforms: readonly SiteTransform[]): Molecule {
+export function applyTransforms(
+	molecule: Molecule,
+	transforms: readonly SiteTransform[]
+): Molecule {
 	if (transforms.length === 0) return molecule.getCompactCopy();
 	const copy = molecule.getCompactCopy();
 	copy.ensureHelperArrays(Molecule.cHelperRings);
@@ -78,7 +88,8 @@ export function applyTransforms(molecule: Molecule, transforms: readonly SiteTra
 	const reactor = new Reactor(combinedReaction(transforms.map((t) => t.smarts)));
 	reactor.setReactant(0, copy);
 	const product = reactor.getProducts()[0]?.[0];
-	if (!product) throw new TransformError('The transforms did not apply together at the chosen sites.');
+	if (!product)
+		throw new TransformError('The transforms did not apply together at the chosen sites.');
 	for (let atom = 0; atom < product.getAllAtoms(); atom++) {
 		const label = product.getAtomCustomLabel(atom);
 		if (!label?.startsWith(']')) continue;
@@ -101,7 +112,9 @@ function siteOf(molecule: Molecule, transform: SiteTransform): number[] {
 			if (site.every((a) => allowed.has(a))) return site;
 		}
 	}
-	throw new TransformError(`"${transform.smarts}" finds no site among atoms ${transform.atoms.join(', ')}.`);
+	throw new TransformError(
+		`"${transform.smarts}" finds no site among atoms ${transform.atoms.join(', ')}.`
+	);
 }
 
 /**
@@ -119,7 +132,8 @@ function combinedReaction(smarts: string[]): Reaction {
 	let offset = 0;
 	for (const one of smarts) {
 		const { parts, maxMapNo } = compileTransform(one);
-		const shift = (side: string) => side.replace(/:(\d+)\]/g, (_, n: string) => `:${Number(n) + offset}]`);
+		const shift = (side: string) =>
+			side.replace(/:(\d+)\]/g, (_, n: string) => `:${Number(n) + offset}]`);
 		reactants.push(shift(parts[0]));
 		products.push(shift(parts[1]));
 		offset += maxMapNo;

@@ -2,45 +2,9 @@
 // random UUIDs from the canvas), where each protecting group goes on and comes off, in words.
 
 import type { RuleLabels } from '$lib/client/route-client';
-import type { RouteDocument, RouteStep } from '$lib/route/document';
 import type { Plan, Protection } from '$lib/rules/plan';
 
-const MAX_REAGENT_CHARS = 40;
-
-/** Steps in route order: each after the steps that make its starting intermediates. */
-export function stepOrder(doc: RouteDocument): RouteStep[] {
-	const madeBy = new Map(doc.steps.map((step) => [step.to, step]));
-	const depth = new Map<string, number>();
-	const depthOf = (id: string, trail: Set<string>): number => {
-		const known = depth.get(id);
-		if (known !== undefined) return known;
-		const step = madeBy.get(id);
-		// A start of the route, or (in a document that is not valid yet) a cycle: stop there.
-		if (!step || trail.has(id)) return 0;
-		trail.add(id);
-		const d = 1 + Math.max(...step.from.map((from) => depthOf(from, trail)));
-		depth.set(id, d);
-		return d;
-	};
-	return doc.steps
-		.map((step, index) => ({ step, index, depth: depthOf(step.to, new Set()) }))
-		.sort((a, b) => a.depth - b.depth || a.index - b.index)
-		.map(({ step }) => step);
-}
-
-/** E.g. `{ s1 → 'step 1 (MeMgBr, THF)' }`; long reagent text is cut with an ellipsis. */
-export function stepNames(doc: RouteDocument): Map<string, string> {
-	return new Map(
-		stepOrder(doc).map((step, i) => {
-			const reagents = step.reagents?.trim() ?? '';
-			const short =
-				reagents.length > MAX_REAGENT_CHARS
-					? `${reagents.slice(0, MAX_REAGENT_CHARS - 1).trimEnd()}…`
-					: reagents;
-			return [step.id, short ? `step ${i + 1} (${short})` : `step ${i + 1}`];
-		})
-	);
-}
+export { stepNames, stepOrder } from '$lib/route/step-names';
 
 const stepName = (names: Map<string, string>, id: string) => names.get(id) ?? `step “${id}”`;
 

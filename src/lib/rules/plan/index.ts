@@ -42,7 +42,7 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 		return { plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale: ['No step attacks a free group that stands by: nothing needs masking.'] }] };
 	}
 	const judged = needs.map((_, i) => judgeCandidates(table, rules, tree, needs, i));
-	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, need, judged[i]!)]));
+	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, tree, need, judged[i]!)]));
 	if (unsolved.length) return { plans: [], unsolved };
 	const optionLists = judged.map((list) => list.flatMap((j) => j.options).sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness));
 	const plans: Plan[] = [];
@@ -69,23 +69,25 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 }
 
 function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option): string {
-	const threats = need.attackedAt.map((id) => `step "${id}"`).join(', ');
+	const threats = need.attackedAt.map((id) => tree.stepName(id)).join(', ');
 	const off =
 		option.removeAt !== need.freeAt
-			? `after step "${tree.made.get(option.removeAt)!.id}", as soon as nothing attacks it`
+			? `after ${tree.stepName(tree.made.get(option.removeAt)!.id)}, as soon as nothing attacks it`
 			: need.freeAt === tree.target
 				? 'at the end'
-				: `before step "${tree.next.get(need.freeAt)!.id}" (where it reacts)`;
+				: `before ${tree.stepName(tree.next.get(need.freeAt)!.id)}, where it reacts`;
 	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : ''}.`;
 }
 
-function whyUnsolved(rules: CheckRules, need: Need, judged: Judged[]): Unsolved {
+function whyUnsolved(rules: CheckRules, tree: RouteTree, need: Need, judged: Judged[]): Unsolved {
 	const label = rules.groupLabel(need.group);
-	const first = need.attackedAt[0]!;
-	if (judged.length === 0) return { group: need.group, atoms: need.atoms, reason: `Step "${first}" attacks the free ${label}, and no protecting group in the rule table masks a ${label}.` };
+	const first = tree.stepName(need.attackedAt[0]!);
+	if (judged.length === 0) return { group: need.group, atoms: need.atoms, reason: `${capital(first)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.` };
 	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt) ? judged[0]!.killedAt : undefined;
 	if (killer !== undefined) {
-		return { group: need.group, atoms: need.atoms, reason: `Step "${killer}" makes it impossible: the free ${label} must be masked from step "${first}" on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).` };
+		return { group: need.group, atoms: need.atoms, reason: `${capital(tree.stepName(killer))} makes it impossible: the free ${label} must be masked from ${first} on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).` };
 	}
-	return { group: need.group, atoms: need.atoms, reason: `Step "${first}" attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.` };
+	return { group: need.group, atoms: need.atoms, reason: `${capital(first)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.` };
 }
+
+const capital = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);

@@ -79,7 +79,7 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 		if (!transform) return { pg: row.id, options: [], rejected: `${row.id} rejected: the rule table has no install transform to draw it on a ${rules.groupLabel(need.group)}` };
 		const { points, killer } = removalPoints(rules, tree, need, row.id);
 		if (killer) {
-			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of step "${killer.step}" would remove it`;
+			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of ${tree.stepName(killer.step)} would remove it`;
 			return { pg: row.id, options: [], rejected, killedAt: killer.step };
 		}
 		const installConditions = [...row.install.conditions];

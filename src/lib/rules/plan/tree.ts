@@ -3,6 +3,7 @@
 // reagents that brought them, as the clash check sees them.
 
 import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/document';
+import { stepLabeller } from '../../route/step-names';
 import type { CheckRules } from '../check/types';
 
 export type StepCondition = { id: string; reagents: string[]; explicit: boolean };
@@ -20,6 +21,8 @@ export type RouteTree = {
 	conditions: Map<string, StepCondition[]>;
 	/** The one intermediate no step uses: where every branch ends. */
 	target: string;
+	/** How the rationale names a step, e.g. `step "s2" (H2, Pd/C, EtOH)`. */
+	stepName: (id: string) => string;
 };
 
 /**
@@ -33,17 +36,20 @@ export function routeTree(doc: RouteDocument, rules: CheckRules): RouteTree | st
 	for (const step of doc.steps) {
 		for (const from of step.from) {
 			const other = next.get(from);
-			if (other) return `Intermediate "${from}" is used by two steps ("${other.id}" and "${step.id}"); the planner plans routes that converge on one target, so plan each branch as its own route.`;
+			if (other)
+				return `Intermediate "${from}" is used by two steps ("${other.id}" and "${step.id}"); the planner plans routes that converge on one target, so plan each branch as its own route.`;
 			next.set(from, step);
 		}
 		const other = made.get(step.to);
-		if (other) return `Intermediate "${step.to}" is made by two steps ("${other.id}" and "${step.id}"); keep one of them for planning.`;
+		if (other)
+			return `Intermediate "${step.to}" is made by two steps ("${other.id}" and "${step.id}"); keep one of them for planning.`;
 		made.set(step.to, step);
 	}
 	const byId = new Map(doc.intermediates.map((n) => [n.id, n]));
 	const onSteps = doc.intermediates.filter((n) => next.has(n.id) || made.has(n.id));
 	const targets = onSteps.filter((n) => !next.has(n.id));
-	if (targets.length !== 1) return `The route ends in ${targets.length} intermediates (${targets.map((n) => `"${n.id}"`).join(', ')}); the planner needs the steps to converge on one target.`;
+	if (targets.length !== 1)
+		return `The route ends in ${targets.length} intermediates (${targets.map((n) => `"${n.id}"`).join(', ')}); the planner needs the steps to converge on one target.`;
 	// Depth-first from the target: each step after everything that feeds it.
 	const nodes: RouteIntermediate[] = [];
 	const steps: RouteStep[] = [];
@@ -56,18 +62,41 @@ export function routeTree(doc: RouteDocument, rules: CheckRules): RouteTree | st
 		nodes.push(byId.get(id)!);
 	};
 	visit(targets[0]!.id);
-	if (steps.length !== doc.steps.length) return 'Some steps do not lead to the route\'s target (a loop?); the planner needs every step on the way to one target.';
-	const conditions = new Map(steps.map((s) => [s.id, stepConditions(rules, s.reagents, s.conditions)]));
-	return { nodes, steps, byId, next, made, conditions, target: targets[0]!.id };
+	if (steps.length !== doc.steps.length)
+		return "Some steps do not lead to the route's target (a loop?); the planner needs every step on the way to one target.";
+	const conditions = new Map(
+		steps.map((s) => [s.id, stepConditions(rules, s.reagents, s.conditions)])
+	);
+	return {
+		nodes,
+		steps,
+		byId,
+		next,
+		made,
+		conditions,
+		target: targets[0]!.id,
+		stepName: stepLabeller(doc)
+	};
 }
 
 /** A step's condition classes, e.g. `'H2, Pd/C'` → `[{ id: 'hydrogenation', reagents: ['H2', …] }]`. */
-export function stepConditions(rules: CheckRules, reagents: string | undefined, explicit: string[] = []): StepCondition[] {
+export function stepConditions(
+	rules: CheckRules,
+	reagents: string | undefined,
+	explicit: string[] = []
+): StepCondition[] {
 	const classified = reagents?.trim() ? rules.classify(reagents) : { conditions: [], matched: [] };
-	const ids = [...new Set([...explicit.filter((id) => rules.conditionIds.includes(id)), ...classified.conditions])];
+	const ids = [
+		...new Set([
+			...explicit.filter((id) => rules.conditionIds.includes(id)),
+			...classified.conditions
+		])
+	];
 	return ids.map((id) => ({
 		id,
-		reagents: [...new Set(classified.matched.filter((m) => m.conditions.includes(id)).map((m) => m.reagent))],
+		reagents: [
+			...new Set(classified.matched.filter((m) => m.conditions.includes(id)).map((m) => m.reagent))
+		],
 		explicit: explicit.includes(id)
 	}));
 }
