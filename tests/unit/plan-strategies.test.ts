@@ -25,6 +25,8 @@ describe('strategy cases from textbook practice', () => {
 		expect(perceiveText(masked.structure).protectingGroups.map((pg) => pg.id)).toContain('dioxolane');
 		// The free ketone comes back at the end: the last intermediate is the original product.
 		expect(dioxolane.route.intermediates.at(-1)!.structure).toBe('CC(=O)CCC(C)(C)O');
+		// Labels say which PGs a drawn intermediate carries; the freed product keeps the plain name.
+		expect(dioxolane.route.intermediates.map((n) => n.label)).toEqual(['i0', 'i0 (with dioxolane)', 'i1 (with dioxolane)', 'i1']);
 	});
 
 	it('keeps a 1,2-diol as an acetonide through a hydrogenation, not as a benzylidene acetal — Greene\'s, benzylidene acetals fall to hydrogenolysis (from memory)', () => {

@@ -21,6 +21,13 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 		return id;
 	};
 	const place = (x: number, node: string) => needs[x]!.path.indexOf(node);
+	// A label says which protecting groups an intermediate carries, so a drawn compound never
+	// passes under the name of the unprotected one.
+	const labelAt = (node: RouteIntermediate, active: number[]) => {
+		const base = node.label ?? node.id;
+		const pgs = [...new Set(active.map((x) => options[x]!.pg))];
+		return (pgs.length ? `${base} (with ${pgs.join(', ')})` : base).slice(0, 120);
+	};
 	const structureAt = (node: string, active: number[]) =>
 		protectedStructure(
 			tree.byId.get(node)!.structure,
@@ -39,7 +46,7 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 		if (made) steps.push({ ...made, from: made.from.map((id) => latest.get(id)!) });
 		// Masks that arrive with the intermediate: on before it, not yet off.
 		let active = all.filter((x) => place(x, needs[x]!.installAt) < place(x, node.id) && place(x, node.id) <= place(x, options[x]!.removeAt));
-		intermediates.push({ ...node, structure: structureAt(node.id, active) });
+		intermediates.push({ ...node, label: labelAt(node, active), structure: structureAt(node.id, active) });
 		let current = node.id;
 		const installs = new Map<string, number[]>();
 		for (const x of all.filter((i) => needs[i]!.installAt === node.id)) {
@@ -50,7 +57,7 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 			active = [...active, ...batch];
 			const option = options[batch[0]!]!;
 			const id = fresh(`${node.id}-${option.pg}`);
-			intermediates.push({ id, label: `${node.label ?? node.id}, ${option.pg}-protected`, structure: structureAt(node.id, active) });
+			intermediates.push({ id, label: labelAt(node, active), structure: structureAt(node.id, active) });
 			steps.push({ id: fresh(`protect-${option.pg}`), from: [current], to: id, reagents: option.install.reagents, conditions: [...option.install.conditions], intent: 'protect', notes: 'Added by the planner.' });
 			current = id;
 			if (batch.length > 1) shared.push({ pg: option.pg, count: batch.length });
@@ -76,7 +83,7 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 			active = active.filter((x) => !batch.includes(x));
 			const removal = options[batch[0]!]!.removal;
 			const id = fresh(`${node.id}-free`);
-			intermediates.push({ id, label: `${node.label ?? node.id} without ${batch.map((x) => options[x]!.pg).join(', ')}`, structure: structureAt(node.id, active) });
+			intermediates.push({ id, label: labelAt(node, active), structure: structureAt(node.id, active) });
 			steps.push({ id: fresh(`remove-${batch.map((x) => options[x]!.pg).join('-')}`), from: [current], to: id, reagents: removal.reagents, conditions: [...removal.conditions], intent: 'deprotect', notes: 'Added by the planner.' });
 			if (batch.length > 1) merged.push(batch.map((x) => options[x]!.pg));
 			current = id;
