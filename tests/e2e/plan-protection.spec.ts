@@ -40,6 +40,10 @@ test('a chemist plans protection, sees the ranked plans, uses plan 1 and lands o
 	await expect(first.getByRole('region', { name: 'Why plan 1' })).toContainText('ketone');
 	// The first protected intermediate is drawn by the server.
 	await expect(first.getByRole('img', { name: /^Protected intermediate with / })).toBeVisible();
+	// The reagents the plan adds come with their hazard notes, each deferring to the SDS.
+	const care = first.getByRole('region', { name: 'Take care with plan 1' });
+	await expect(care).toContainText('Hazards of the added steps');
+	await expect(care).toContainText('Check the SDS');
 	await expect(page.getByTestId('save-status')).toHaveText('All changes saved');
 
 	await first.getByRole('button', { name: 'Use this plan' }).click();

@@ -31,10 +31,23 @@ describe('POST /api/plan', () => {
 		expect(status).toBe(200);
 		expect(body.unsolved).toBeUndefined();
 		const [plan] = body.plans;
-		expect(Object.keys(plan).sort()).toEqual(['addedSteps', 'protections', 'rank', 'rationale', 'route', 'score']);
+		// The fields, plus what the plan asks of the people who run it.
+		expect(Object.keys(plan).sort()).toEqual(['addedSteps', 'cautions', 'hazards', 'protections', 'rank', 'rationale', 'route', 'score']);
 		expect(Object.keys(plan.protections[0]).sort()).toEqual(['atoms', 'group', 'install', 'intermediate', 'protectingGroup', 'removal']);
 		expect(plan.protections[0]).toMatchObject({ group: 'ketone', install: { before: 's1' }, removal: { after: 'end' } });
 		expect(plan.route.steps.map((s: { intent?: string }) => s.intent ?? 'transform')).toEqual(['protect', 'transform', 'deprotect']);
+	});
+
+	it('lists the hazards of the reagents a plan adds, each deferring to the SDS — rules/reagents.json hazard notes', async () => {
+		const { body } = await call(planPost, 'viewer', { body: grignard });
+		const added = new Set(body.plans[0].route.steps.filter((s: { intent?: string }) => s.intent).map((s: { id: string }) => s.id));
+		expect(body.plans[0].hazards.length).toBeGreaterThan(0);
+		for (const hazard of body.plans[0].hazards) {
+			expect(added.has(hazard.step)).toBe(true);
+			expect(hazard.note).toMatch(/SDS/);
+		}
+		// The Grignard step is the chemist's own: its hazards are not the plan's to list.
+		expect(body.plans[0].hazards.map((h: { reagent: string }) => h.reagent)).not.toContain('MeMgBr');
 	});
 
 	it('answers 422 for a bad route document and 401 without a user', async () => {

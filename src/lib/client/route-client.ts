@@ -3,7 +3,7 @@
 // conflict (the conflict notice) and an unreadable structure (the field's error).
 
 import type { RouteDocument } from '$lib/route/document';
-import type { PlanAnswer } from '$lib/rules/plan';
+import type { CheckedPlanAnswer as PlanAnswer } from '$lib/rules/plan';
 import { callApi, jsonBody, type ApiResult } from './api';
 import type { Toasts } from './toasts.svelte';
 

@@ -60,3 +60,13 @@ export type Plan = {
 export type Unsolved = { group: string; atoms: number[]; reason: string };
 
 export type PlanAnswer = { plans: Plan[]; unsolved?: Unsolved[] };
+
+/** What a plan asks of the people who run it (added by the server, which runs the clash check). */
+export type PlanSafety = {
+	/** Hazard notes for the reagents of the steps the plan adds, e.g. NaH for a benzylation. */
+	hazards: { step: string; reagent: string; note: string }[];
+	/** `caution` items the re-check found anywhere in the protected route. */
+	cautions: { step: string; message: string }[];
+};
+export type CheckedPlan = Plan & PlanSafety;
+export type CheckedPlanAnswer = { plans: CheckedPlan[]; unsolved?: Unsolved[] };

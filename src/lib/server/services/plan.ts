@@ -1,5 +1,5 @@
 import type { RouteDocument } from '../../route/document';
-import { planRoute, type PlanAnswer } from '../../rules/plan';
+import { planRoute, type CheckedPlanAnswer, type Plan, type PlanSafety } from '../../rules/plan';
 import { checkRouteDocument, defaultCheckRules } from './check';
 
 /** The first clash or unreadable step of a route, or null when it re-checks clean. */
@@ -12,7 +12,31 @@ export function firstClash(route: RouteDocument): string | null {
 	return null;
 }
 
-/** Plans a route with the default rule table, every plan re-checked through `checkRouteDocument`. */
-export function planRouteDocument(document: RouteDocument): PlanAnswer {
-	return planRoute(document, { verify: firstClash, rules: defaultCheckRules() });
+/**
+ * Plans a route with the default rule table, every plan re-checked through `checkRouteDocument`,
+ * and says for each plan which hazards its added steps bring and which cautions remain.
+ */
+export function planRouteDocument(document: RouteDocument): CheckedPlanAnswer {
+	const answer = planRoute(document, { verify: firstClash, rules: defaultCheckRules() });
+	return { ...answer, plans: answer.plans.map((plan) => ({ ...plan, ...safetyOf(plan) })) };
+}
+
+function safetyOf(plan: Plan): PlanSafety {
+	// The re-check that admitted the plan filled the check's caches: this pass costs little.
+	const checks = checkRouteDocument(plan.route);
+	const added = new Set(
+		plan.route.steps
+			.filter((s) => s.intent === 'protect' || s.intent === 'deprotect')
+			.map((s) => s.id)
+	);
+	return {
+		hazards: checks
+			.filter((c) => added.has(c.id))
+			.flatMap((c) => c.hazards.map((h) => ({ step: c.id, reagent: h.reagent, note: h.note }))),
+		cautions: checks.flatMap((c) =>
+			c.clashes
+				.filter((x) => x.severity === 'caution')
+				.map((x) => ({ step: c.id, message: x.message }))
+		)
+	};
 }
