@@ -5,7 +5,14 @@ import { POST as createOne } from '../../src/routes/api/projects/[projectId]/rou
 import { GET as getRoute } from '../../src/routes/api/routes/[routeId]/+server';
 import { load } from '../../src/routes/routes/[routeId]/+page.server';
 import { ActivityEvent, PlannedRoute, Route, type Project } from '../../src/lib/server/db';
-import { createRoute, plannedRouteName, routeLinks } from '../../src/lib/server/services/routes';
+import {
+	createRoute,
+	plannedRouteName,
+	routeDocumentAt,
+	routeLinks,
+	saveRoute,
+	VersionConflict
+} from '../../src/lib/server/services/routes';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 import { line } from '../factories/plan-routes';
@@ -217,5 +224,22 @@ describe('plannedRouteName', () => {
 		const long = plannedRouteName('OG-2031 '.repeat(20).slice(0, 120), 1);
 		expect(long).toHaveLength(120);
 		expect(long.endsWith(' (protected, plan 1)')).toBe(true);
+	});
+});
+
+describe('reading a stored route at the version the plans were made for', () => {
+	it('refuses when a save lands after the route was loaded, even if the children read new', async () => {
+		const routeId = await storedRoute();
+		const stale = (await Route.findByPk(routeId))!;
+		expect((await routeDocumentAt(stale, 1)).steps.map((s) => s.reagents)).toEqual(['MeMgBr, THF']);
+		await saveRoute(
+			f.people.chemist,
+			(await Route.findByPk(routeId))!,
+			1,
+			line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['EtMgBr, THF']),
+			f.team.id
+		);
+		// The loaded instance still says version 1; the version read after the children does not.
+		await expect(routeDocumentAt(stale, 1)).rejects.toBeInstanceOf(VersionConflict);
 	});
 });

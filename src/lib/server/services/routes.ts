@@ -151,6 +151,19 @@ export async function routeDocument(route: Route): Promise<RouteDocument> {
 }
 
 /**
+ * The stored route as a document, provided it is still at `version`; otherwise VersionConflict.
+ * Saves bump the version in the same transaction as they replace the children, so a version
+ * unchanged after the children were read means no save landed in between.
+ */
+export async function routeDocumentAt(route: Route, version: number): Promise<RouteDocument> {
+	if (route.version !== version) throw new VersionConflict(route.version);
+	const document = await routeDocument(route);
+	const now = await Route.findByPk(route.id, { attributes: ['version'] });
+	if (now?.version !== version) throw new VersionConflict(now?.version ?? route.version);
+	return document;
+}
+
+/**
  * Replaces the route's content when `expectedVersion` is still current; otherwise writes
  * nothing and throws VersionConflict. Returns the new version.
  */

@@ -5,7 +5,12 @@ import { apiError, apiHandler, readJson } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
 import { planRouteDocument } from '$lib/server/services/plan';
 import { routeDocumentOr422 } from '$lib/server/route-api';
-import { createRoute, plannedRouteName, routeDocument } from '$lib/server/services/routes';
+import {
+	createRoute,
+	plannedRouteName,
+	routeDocumentAt,
+	VersionConflict
+} from '$lib/server/services/routes';
 
 const body = z.object({ version: z.number().int().positive() });
 
@@ -24,17 +29,19 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	);
 	const rank = /^[1-9][0-9]{0,2}$/.test(event.params.rank) ? Number(event.params.rank) : null;
 	const { version } = await readJson(event, body);
-	if (version !== route.version) {
+	let stored;
+	try {
+		stored = await routeDocumentAt(route, version);
+	} catch (caught) {
+		if (!(caught instanceof VersionConflict)) throw caught;
 		return apiError(
 			409,
 			'version-conflict',
-			`The route has changed since these plans were made (now at version ${route.version}). Plan again.`,
-			{
-				currentVersion: route.version
-			}
+			`The route has changed since these plans were made (now at version ${caught.currentVersion}). Plan again.`,
+			{ currentVersion: caught.currentVersion }
 		);
 	}
-	const answer = planRouteDocument(routeDocumentOr422(await routeDocument(route)));
+	const answer = planRouteDocument(routeDocumentOr422(stored));
 	const plan = answer.plans.find((p) => p.rank === rank);
 	if (!plan) {
 		const why =
