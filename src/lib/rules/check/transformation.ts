@@ -13,10 +13,12 @@ export type Site = { id: string; atoms: number[]; survives: boolean };
 export type Transformation = { protectingGroups: Site[]; freeGroups: Site[]; mapped: boolean };
 
 const cache = new LruCache<string, Transformation>(1000);
+// The texts were read and checked when perceived; mapping needs the atoms, not the warnings.
+const MAP_ONLY = { warnings: false } as const;
 
 /** Joins several substrate texts into one molecule; atom indices follow the order given. */
 export function combinedMolecule(texts: string[]): Molecule {
-	const [first, ...rest] = texts.map((text) => readStructure(text).molecule);
+	const [first, ...rest] = texts.map((text) => readStructure(text, MAP_ONLY).molecule);
 	for (const other of rest) first!.addMolecule(other);
 	return first!;
 }
@@ -35,7 +37,7 @@ export function transformation(substrates: string[], product: string): Transform
 	// changed. Only when some but not all instances of an id vanish must the atoms be mapped
 	// (the maximum common substructure is the slow part) to tell which one reacted.
 	const map = ambiguous(before, after)
-		? mapAtoms(combined ?? readStructure(substrates[0]!).molecule, readStructure(product).molecule)
+		? mapAtoms(combined ?? readStructure(substrates[0]!, MAP_ONLY).molecule, readStructure(product, MAP_ONLY).molecule)
 		: null;
 	const result = compare(before, after, map);
 	cache.set(key, result);

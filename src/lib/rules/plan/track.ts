@@ -14,6 +14,8 @@ import type { Need } from './types';
 export type Unit = { id: string; atoms: number[]; members: string[] };
 
 const DIOLS = ['diol-1,2', 'diol-1,3'];
+// The texts were read and checked when perceived; mapping needs the atoms, not the warnings.
+const MAP_ONLY = { warnings: false } as const;
 const key = (atoms: number[]) => [...atoms].sort((a, b) => a - b).join(',');
 
 /** The free units of a structure: a diol absorbs the alcohols inside it, e.g. `OCC(O)C` → one `diol-1,2`. */
@@ -47,8 +49,8 @@ function follow(before: Unit[], after: Unit[], substrates: string[], product: st
 	const count = (list: Unit[], id: string) => list.filter((u) => u.id === id).length;
 	const ids = [...new Set(before.map((u) => u.id))];
 	const needsMap = ids.some((id) => count(after, id) > 0 && !(count(before, id) === 1 && count(after, id) === 1));
-	const substrate = () => (substrates.length === 1 ? readStructure(substrates[0]!).molecule : combinedMolecule(substrates));
-	const map: AtomMap | null = needsMap ? mapAtoms(substrate(), readStructure(product).molecule) : null;
+	const substrate = () => (substrates.length === 1 ? readStructure(substrates[0]!, MAP_ONLY).molecule : combinedMolecule(substrates));
+	const map: AtomMap | null = needsMap ? mapAtoms(substrate(), readStructure(product, MAP_ONLY).molecule) : null;
 	const result: (number | undefined)[] = before.map(() => undefined);
 	const used = new Set<number>();
 	before.forEach((unit, i) => {
@@ -90,7 +92,7 @@ function substrateUnits(tree: RouteTree, from: string[], units: Map<string, Unit
 	let offset = 0;
 	return from.flatMap((node) => {
 		const shift = offset;
-		if (from.length > 1) offset += readStructure(tree.byId.get(node)!.structure).molecule.getAllAtoms();
+		if (from.length > 1) offset += readStructure(tree.byId.get(node)!.structure, MAP_ONLY).molecule.getAllAtoms();
 		return units.get(node)!.map((unit, index) => ({ unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) }, node, index }));
 	});
 }
