@@ -128,6 +128,34 @@ describe('strategy cases from textbook practice', () => {
 		expect(answer.unsolved![0]).toMatchObject({ group: 'carboxylic-acid', reason: expect.stringContaining('methyl-ester rejected') });
 	});
 
+	it('counts THP\'s new stereocentre as a caution on a chiral substrate only — Greene\'s, THP ethers of chiral alcohols are diastereomer mixtures (from memory)', () => {
+		const note = 'THP puts a new stereocentre at its acetal carbon';
+		const thp = (answer: ReturnType<typeof planRoute>) => answer.plans.find((p) => p.protections[0]!.protectingGroup === 'THP')!;
+		const chiral = planRoute(line(['C[C@H](O)CCC(=O)OC', 'C[C@H](O)CCC(C)(C)O'], ['MeMgBr, THF']), { verify: firstClash, plans: 20 });
+		const achiral = planRoute(line(['OCCCCC(=O)OC', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']), { verify: firstClash, plans: 20 });
+		expect(thp(chiral).rationale[0]).toContain(note);
+		expect(thp(achiral).rationale[0]).not.toContain(note);
+		// One caution more than on the achiral alcohol, so a silyl ether ranks above THP there.
+		expect(thp(chiral).score - thp(achiral).score).toBe(100);
+		expect(chiral.plans[0]!.protections[0]!.protectingGroup).not.toBe('THP');
+	});
+
+	it('does not silylate an alcohol beside the free amine a coupling needs — Clayden, amines react with silyl and acyl chlorides faster than alcohols (from memory)', () => {
+		const doc: RouteDocument = {
+			name: 'OG-2044 coupling',
+			intermediates: [
+				{ id: 'acid', structure: 'CCC(C)C(=O)O' },
+				{ id: 'amine', structure: 'NC[C@H](O)CC' },
+				{ id: 'amide', structure: 'CCC(C)C(=O)NC[C@H](O)CC' }
+			],
+			steps: [{ id: 'couple', from: ['acid', 'amine'], to: 'amide', reagents: 'HATU, DIPEA, DMF' }]
+		};
+		const answer = planRouteDocument(doc);
+		expect(answer.plans.length).toBeGreaterThan(0);
+		for (const plan of answer.plans) expect(['TMS', 'TES', 'TBS', 'TIPS', 'TBDPS']).not.toContain(plan.protections[0]!.protectingGroup);
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/TBS rejected: installing it \(TBSCl, imidazole, DMF\) would also attack the free primary alkylamine/);
+	});
+
 	it('adds nothing when no step attacks a bystander — common practice (a Swern oxidation of a lone alcohol)', () => {
 		const answer = planRouteDocument(line(['CCCCO', 'CCCC=O'], ['(COCl)2, DMSO, Et3N']));
 		expect(answer.plans).toHaveLength(1);

@@ -1,6 +1,6 @@
-// Formula, average molar mass and the canonical key of a molecule.
+// Formula, average molar mass, canonical key and stereocentres of a molecule.
 
-import { Canonizer, type Molecule } from 'openchemlib';
+import { Canonizer, Molecule } from 'openchemlib';
 
 /** Hill formula with the net charge, e.g. `formulaOf(Molecule.fromSmiles('OC(=O)C(F)(F)F'))` → `'C2HF3O2'`, `'C[N+](C)(C)C'` → `'C4H12N+'`. */
 export function formulaOf(molecule: Molecule): string {
@@ -53,4 +53,12 @@ export function canonicalForm(molecule: Molecule): CanonicalForm {
 		fromCanonical[rank] = atom;
 	});
 	return { key: canonizer.getIDCode(), toCanonical, fromCanonical };
+}
+
+/** Atoms that are stereocentres, specified or not, e.g. `stereocentres(fromSmiles('CC(O)CC'))` → `[1]`. Needs a molecule read with stereo. */
+export function stereocentres(molecule: Molecule): number[] {
+	molecule.ensureHelperArrays(Molecule.cHelperParities);
+	const atoms: number[] = [];
+	for (let atom = 0; atom < molecule.getAtoms(); atom++) if (molecule.getAtomParity(atom) !== Molecule.cAtomParityNone) atoms.push(atom);
+	return atoms;
 }

@@ -137,6 +137,8 @@ export const protectingGroupConditionsSchema = z.object({
 		.array(z.strictObject({ reagent: text, condition: conditionIdSchema, rating: stabilityRatingSchema, reason: text }))
 		.default([]),
 	notes: z.array(text),
+	/** Installing it makes a new stereocentre (THP): said, and counted as a caution, on a chiral substrate. */
+	newStereocentre: text.optional(),
 	source: text
 }).loose();
 export const protectingGroupConditionsFileSchema = z.array(protectingGroupConditionsSchema);

@@ -58,7 +58,7 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 		const rationale = [
 			...needs.map((need, i) => because(rules, tree, need, choice.options[i]!)),
 			...drawn.shared.map(({ pg, count }) => `One protection step puts ${pg} on ${count} groups of the same kind at once.`),
-			...drawn.merged.map((pgs) => `One deprotection step removes ${pgs.join(' and ')} together: they come off under the same conditions.`),
+			...drawn.merged.map((pgs) => `One deprotection step takes off ${together(pgs)}: they come off under the same conditions.`),
 			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`))
 		];
 		plans.push({ rank: plans.length + 1, score: scoreOf(choice.addedSteps, choice.cautions, choice.harshness), protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
@@ -76,7 +76,8 @@ function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option)
 			: need.freeAt === tree.target
 				? 'at the end'
 				: `before ${tree.stepName(tree.next.get(need.freeAt)!.id)}, where it reacts`;
-	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : ''}.`;
+	const cautions = option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : '';
+	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${cautions}.${option.why ? ` ${option.why}` : ''}`;
 }
 
 function whyUnsolved(rules: CheckRules, tree: RouteTree, need: Need, judged: Judged[]): Unsolved {
@@ -91,3 +92,10 @@ function whyUnsolved(rules: CheckRules, tree: RouteTree, need: Need, judged: Jud
 }
 
 const capital = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+
+/** E.g. `['TBS', 'dioxolane']` → "TBS and dioxolane together"; `['THP', 'THP']` → "both THP groups at once". */
+function together(pgs: string[]): string {
+	const unique = [...new Set(pgs)];
+	if (unique.length > 1) return `${unique.join(' and ')} together`;
+	return pgs.length === 2 ? `both ${unique[0]} groups at once` : `all ${pgs.length} ${unique[0]} groups at once`;
+}

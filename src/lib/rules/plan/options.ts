@@ -2,7 +2,9 @@
 // sit through, goes on without attacking what else is free, comes off without harming what stays.
 
 import { perceptionRules } from '../../chem/patterns';
+import { readStructure } from '../../chem/parse';
 import { perceiveText } from '../../chem/perception-cache';
+import { stereocentres } from '../../chem/properties';
 import type { CheckRules } from '../check/types';
 import type { RuleTable } from '../table';
 import { stepConditions, type RouteTree } from './tree';
@@ -86,6 +88,8 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 		const install = { reagents: row.install.reagents[0] ?? '', conditions: installConditions };
 		const installHarm = harm(rules, tree, needs, index, need.installAt, 'install', install.reagents, installConditions);
 		if (installHarm.blocked) return { pg: row.id, options: [], rejected: `${row.id} rejected: installing it (${install.reagents}) ${installHarm.blocked}` };
+		// A PG that makes a new stereocentre turns a chiral substrate into a mixture of diastereomers.
+		const diastereomers = row.newStereocentre !== undefined && isChiral(tree.byId.get(need.installAt)!.structure);
 		const options: Option[] = [];
 		let firstRemovalProblem = '';
 		for (const point of points) {
@@ -102,9 +106,9 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 					install,
 					removal: { reagents, conditions: [...method.conditions] },
 					removeAt: point.node,
-					cautions: point.cautions + installHarm.cautions + removalHarm.cautions,
+					cautions: point.cautions + installHarm.cautions + removalHarm.cautions + (diastereomers ? 1 : 0),
 					harshness: harshnessOf(installConditions) + harshnessOf([...method.conditions]),
-					why: ''
+					why: diastereomers ? row.newStereocentre! : ''
 				});
 			}
 		}
@@ -113,23 +117,29 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 	});
 }
 
+const isChiral = (structure: string) => stereocentres(readStructure(structure, { stereo: true, warnings: false }).molecule).length > 0;
+
 /** What an install or removal at intermediate `node` would attack among the free groups and the route's own PGs then present. */
 function harm(rules: CheckRules, tree: RouteTree, needs: Need[], index: number, node: string, phase: 'install' | 'removal', reagents: string, conditions: string[]) {
 	const structure = tree.byId.get(node)!.structure;
 	const conds = stepConditions(rules, reagents, conditions);
 	const need = needs[index]!;
-	const own = new Set(need.atomsAt.get(node) ?? []);
+	// Units are told apart by their whole atom sets: neighbouring groups share atoms (an amino
+	// alcohol's CH2 belongs to both), so one shared atom does not make a unit this need's own.
+	const setKey = (atoms: readonly number[]) => [...atoms].sort((a, b) => a - b).join(',');
+	const own = setKey(need.atomsAt.get(node) ?? []);
 	// Free units masked by another need at that moment are not exposed (their PG is judged jointly).
-	const masked = new Set<number>();
+	const masked = new Set<string>();
 	needs.forEach((other, j) => {
-		// A same-type neighbour that goes on at the same gap may share this install step; the
+		// A same-type neighbour that goes on at the same place may share this install step; the
 		// search only lets it stay free if it does not (see `compatible` in search.ts).
 		const coInstall = phase === 'install' && other.installAt === node && other.group === need.group;
-		if (j !== index && (coInstall || maskedAt(needs, j, node, index, phase))) for (const a of other.atomsAt.get(node) ?? []) masked.add(a);
+		const atoms = other.atomsAt.get(node);
+		if (atoms && j !== index && (coInstall || maskedAt(needs, j, node, index, phase))) masked.add(setKey(atoms));
 	});
 	let cautions = 0;
 	for (const unit of freeUnits(structure)) {
-		if (unit.atoms.some((a) => own.has(a) || masked.has(a))) continue;
+		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) continue;
 		for (const c of conds) {
 			for (const member of unit.members) {
 				const rule = rules.reactivity(member, c.id);

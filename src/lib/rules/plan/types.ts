@@ -36,6 +36,7 @@ export type Option = {
 	removeAt: string;
 	cautions: number;
 	harshness: number;
+	/** A drawback to say alongside the choice, e.g. THP's new stereocentre on a chiral alcohol; often empty. */
 	why: string;
 };
 
