@@ -156,6 +156,15 @@ describe('strategy cases from textbook practice', () => {
 		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/TBS rejected: installing it \(TBSCl, imidazole, DMF\) would also attack the free primary alkylamine/);
 	});
 
+	it('says why the usual cyclic acetal is not used when the diol\'s acetonide goes on later under acid — Greene\'s, acetals exchange under acid catalysis (from memory)', () => {
+		const answer = planRouteDocument(
+			line(['OC[C@@H](O)CC(=O)CCC(=O)OC', 'OC[C@@H](O)CC(=O)CCC=O', 'OC[C@@H](O)CC(=O)CC/C=C/C(=O)OCC'], ['DIBAL-H, CH2Cl2, –78 °C', '(EtO)2P(O)CH2CO2Et, NaH, THF'])
+		);
+		const best = answer.plans[0]!;
+		expect(best.protections.map((p) => `${p.protectingGroup}:${p.group}`)).toEqual(['dithiane:ketone', 'acetonide:diol-1,2']);
+		expect(best.rationale).toContain('dioxolane not used for the ketone: putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane on the ketone.');
+	});
+
 	it('adds nothing when no step attacks a bystander — common practice (a Swern oxidation of a lone alcohol)', () => {
 		const answer = planRouteDocument(line(['CCCCO', 'CCCC=O'], ['(COCl)2, DMSO, Et3N']));
 		expect(answer.plans).toHaveLength(1);

@@ -8,7 +8,7 @@ import { loadRuleTable, type RuleTable } from '../table';
 import { clearDrawCache } from './draw';
 import { judgeCandidates, type Judged } from './options';
 import { drawRoute } from './route';
-import { scoreOf, searchChoices } from './search';
+import { conflict, scoreOf, searchChoices } from './search';
 import { clearFollowCache, findNeeds } from './track';
 import { routeTree, type RouteTree } from './tree';
 import type { Need, Option, Plan, PlanAnswer, Unsolved } from './types';
@@ -59,7 +59,8 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 			...needs.map((need, i) => because(rules, tree, need, choice.options[i]!)),
 			...drawn.shared.map(({ pg, count }) => `One protection step puts ${pg} on ${count} groups of the same kind at once.`),
 			...drawn.merged.map((pgs) => `One deprotection step takes off ${together(pgs)}: they come off under the same conditions.`),
-			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`))
+			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`)),
+			...notTogether(rules, needs, judged, choice.options)
 		];
 		plans.push({ rank: plans.length + 1, score: scoreOf(choice.addedSteps, choice.cautions, choice.harshness), protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
 	}
@@ -98,4 +99,26 @@ function together(pgs: string[]): string {
 	const unique = [...new Set(pgs)];
 	if (unique.length > 1) return `${unique.join(' and ')} together`;
 	return pgs.length === 2 ? `both ${unique[0]} groups at once` : `all ${pgs.length} ${unique[0]} groups at once`;
+}
+
+/**
+ * Protecting groups that suit a group on their own but not beside this plan's other choices, and
+ * why, e.g. "dioxolane not used for the ketone: putting the acetonide on (…) would strip the
+ * dioxolane on the ketone." At most three per group; a PG merely ranked lower is not mentioned.
+ */
+function notTogether(rules: CheckRules, needs: Need[], judged: Judged[][], chosen: Option[]): string[] {
+	return needs.flatMap((need, i) =>
+		judged[i]!
+			.filter((j) => j.options.length && j.pg !== chosen[i]!.pg)
+			.flatMap((j) => {
+				let reason: string | null = null;
+				for (const option of j.options) {
+					const clash = chosen.map((other, k) => (k === i ? null : (conflict(rules, needs, i, option, k, other) ?? conflict(rules, needs, k, other, i, option)))).find((r) => r !== null);
+					if (!clash) return [];
+					reason ??= clash;
+				}
+				return reason ? [`${j.pg} not used for the ${rules.groupLabel(need.group)}: ${reason}.`] : [];
+			})
+			.slice(0, 3)
+	);
 }

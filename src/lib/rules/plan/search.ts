@@ -17,26 +17,42 @@ export const scoreOf = (added: number, cautions: number, harshness: number) => a
 
 /** Whether two chosen options can share a route: neither one's install or removal strips the other's PG. */
 function compatible(rules: CheckRules, needs: Need[], x: number, ox: Option, y: number, oy: Option): boolean {
-	return !strips(rules, needs, x, ox, y, oy) && !strips(rules, needs, y, oy, x, ox);
+	return conflict(rules, needs, x, ox, y, oy) === null && conflict(rules, needs, y, oy, x, ox) === null;
 }
 
-/** Whether need a's install or removal, done with option oa, would strip need b's PG ob, or attack b's group once ob is off. */
-function strips(rules: CheckRules, needs: Need[], a: number, oa: Option, b: number, ob: Option): boolean {
+/**
+ * Why need a's install or removal, done with option oa, cannot share the route with need b's
+ * option ob (it strips ob's PG, or attacks b's group while it is free), or null when it can.
+ * E.g. "putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane".
+ */
+export function conflict(rules: CheckRules, needs: Need[], a: number, oa: Option, b: number, ob: Option): string | null {
 	const na = needs[a]!;
 	const nb = needs[b]!;
 	const sameRemoval = removalKey(oa) === removalKey(ob);
 	const sameInstall = installKey(na, oa) === installKey(nb, ob);
 	const reacts = (group: string, conditions: string[]) => conditions.some((c) => rules.reactivity(group, c)?.rating === 'reacts');
+	const putting = `putting the ${oa.pg} on (${oa.install.reagents})`;
+	const taking = `taking the ${oa.pg} off (${oa.removal.reagents})`;
+	const label = rules.groupLabel(nb.group);
 	// A same-type neighbour left free at this install would be attacked by it, unless it shares the step.
-	if (!sameInstall && nb.installAt === na.installAt && nb.group === na.group && reacts(na.group, oa.install.conditions)) return true;
+	if (!sameInstall && nb.installAt === na.installAt && nb.group === na.group && reacts(na.group, oa.install.conditions)) {
+		return `${putting} would attack the ${label} beside it unless both take the same protecting group`;
+	}
 	// A group whose mask came off early is free again for a's install or removal.
-	if (freedEarlyAt(nb, ob.removeAt, na.installAt) && nb.members.some((g) => reacts(g, oa.install.conditions))) return true;
-	if (freedEarlyAt(nb, ob.removeAt, oa.removeAt) && nb.members.some((g) => reacts(g, oa.removal.conditions))) return true;
-	const exposed = [
-		...(maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) && !sameInstall ? oa.install.conditions : []),
-		...(maskedAt(needs, b, oa.removeAt, a, 'removal', ob.removeAt) && !sameRemoval ? oa.removal.conditions : [])
-	];
-	return exposed.some((c) => rules.stability(ob.pg, c, []).rating === 'labile');
+	if (freedEarlyAt(nb, ob.removeAt, na.installAt) && nb.members.some((g) => reacts(g, oa.install.conditions))) {
+		return `${putting} would attack the ${label} once its ${ob.pg} is off`;
+	}
+	if (freedEarlyAt(nb, ob.removeAt, oa.removeAt) && nb.members.some((g) => reacts(g, oa.removal.conditions))) {
+		return `${taking} would attack the ${label} once its ${ob.pg} is off`;
+	}
+	const stripped = (conditions: string[]) => conditions.some((c) => rules.stability(ob.pg, c, []).rating === 'labile');
+	if (maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) && !sameInstall && stripped(oa.install.conditions)) {
+		return `${putting} would strip the ${ob.pg} on the ${label}`;
+	}
+	if (maskedAt(needs, b, oa.removeAt, a, 'removal', ob.removeAt) && !sameRemoval && stripped(oa.removal.conditions)) {
+		return `${taking} would strip the ${ob.pg} on the ${label}`;
+	}
+	return null;
 }
 
 /** Counts of keys in use, so a step shared by several needs is counted once. */
