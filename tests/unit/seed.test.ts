@@ -1,6 +1,9 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { verifyCredentials } from '../../src/lib/server/auth/credentials';
-import { Project, User } from '../../src/lib/server/db';
+import { graphProblems } from '../../src/lib/route/document';
+import { Project, Route, User } from '../../src/lib/server/db';
+import { planRouteDocument } from '../../src/lib/server/services/plan';
+import { routeDocument } from '../../src/lib/server/services/routes';
 import { seedDemoIfEmpty } from '../../src/lib/server/db/seed-demo';
 import { listProjectsFor } from '../../src/lib/server/services/projects';
 import { teamsOf } from '../../src/lib/server/services/teams';
@@ -35,6 +38,32 @@ describe('demo scenario', () => {
 		const outsiderTeams = (await listProjectsFor(outsider!.id)).map((p) => p.teamId);
 		expect(leadTeams.some((t) => outsiderTeams.includes(t))).toBe(false);
 		expect(await Project.count()).toBe(3);
+	});
+
+	it("comes with routes to plan: alternatives with reasons, a convergent coupling, and one the planner calls impossible — Greene's; Clayden (from memory)", async () => {
+		const routes = await Route.findAll({ order: [['name', 'ASC']] });
+		expect(routes.map((r) => r.name)).toEqual([
+			'OG-2031 keto ester — methyl addition',
+			'OG-2031 side chain — first sketch',
+			'OG-2044 amide coupling',
+			'OG-3107 lactone core — side-chain addition'
+		]);
+		const planned = new Map<string, ReturnType<typeof planRouteDocument>>();
+		for (const route of routes) {
+			const document = await routeDocument(route);
+			expect(graphProblems(document), route.name).toEqual([]);
+			planned.set(route.name, planRouteDocument(document));
+		}
+		expect(
+			planned.get('OG-2031 keto ester — methyl addition')!.plans[0]!.protections[0]!.group
+		).toBe('ketone');
+		expect(
+			planned.get('OG-2031 side chain — first sketch')!.plans[0]!.rationale.join(' ')
+		).toContain('dioxolane not used for the ketone');
+		expect(planned.get('OG-2044 amide coupling')!.plans[0]!.protections).toHaveLength(2);
+		expect(
+			planned.get('OG-3107 lactone core — side-chain addition')!.unsolved![0]!.reason
+		).toContain('no protecting group in the rule table masks a carboxylic ester');
 	});
 
 	it('rejects a wrong password', async () => {

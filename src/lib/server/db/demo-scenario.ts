@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ROLES } from '../../policy';
+import { routeDocumentShape } from '../../route/document';
 import scenario from './demo-scenario.json';
 
 // The JSON is the single source: the seed reads it here, `npm start` reads it to print sign-ins.
@@ -9,7 +10,13 @@ const demoSchema = z.object({
 		z.object({
 			name: z.string(),
 			people: z.array(z.object({ email: z.email(), name: z.string(), role: z.enum(ROLES) })),
-			projects: z.array(z.object({ name: z.string(), description: z.string() }))
+			projects: z.array(
+				z.object({
+					name: z.string(),
+					description: z.string(),
+					routes: z.array(routeDocumentShape).default([])
+				})
+			)
 		})
 	)
 });
