@@ -4,6 +4,7 @@ import { protectedStructure } from '../../src/lib/rules/plan/draw';
 import { freeUnits } from '../../src/lib/rules/plan/track';
 import rows from '../../rules/protecting-groups.json';
 import { rdkit } from './rdkit';
+import { MODEL_SUBSTRATES as MODELS } from '../factories/model-substrates';
 
 // The planner draws protected intermediates by running each PG's install transform (a reaction
 // SMARTS in rules/protecting-groups.json) with openchemlib's Reactor on chosen atoms. RDKit (the
@@ -49,23 +50,6 @@ function rdkitProducts(smarts: string, smiles: string): Set<string> {
 		substrate.delete();
 	}
 }
-
-const MODELS: Record<string, string> = {
-	'alcohol-primary': 'OCCCC',
-	'alcohol-secondary': 'C[C@@H](O)CC',
-	'alcohol-tertiary': 'CC(C)(O)CC',
-	phenol: 'Oc1ccc(C)cc1',
-	'diol-1,2': 'OC[C@H](O)CCC',
-	'diol-1,3': 'OCC[C@@H](O)CC',
-	ketone: 'CC(=O)CCC',
-	aldehyde: 'O=CCCCC',
-	'amine-primary': 'NCCCC',
-	'amine-secondary': 'CNCCC',
-	'indole-nh': 'c1ccc2[nH]ccc2c1',
-	'carboxylic-acid': 'OC(=O)[C@@H](C)CC',
-	'alkyne-terminal': 'C#CCCC',
-	thiol: 'SCCCC'
-};
 
 describe('install transforms agree with RDKit running the same reaction SMARTS', () => {
 	for (const row of rows) {

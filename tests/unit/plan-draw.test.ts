@@ -3,27 +3,12 @@ import { perceiveText } from '../../src/lib/chem';
 import { protectedStructure } from '../../src/lib/rules/plan/draw';
 import { freeUnits } from '../../src/lib/rules/plan/track';
 import rows from '../../rules/protecting-groups.json';
+import { MODEL_SUBSTRATES as MODELS } from '../factories/model-substrates';
 
 // Every PG the rule table knows is drawn, with its install transform, onto a small invented
 // substrate of each group type it protects, and perception must find that PG again, masking that
 // group (the transforms and the perception rules agree).
 // Structures of the protected forms: common practice (Greene's, 5th ed. — from memory).
-const MODELS: Record<string, string> = {
-	'alcohol-primary': 'OCCCC',
-	'alcohol-secondary': 'CC(O)CC',
-	'alcohol-tertiary': 'CC(C)(O)CC',
-	phenol: 'Oc1ccccc1',
-	'diol-1,2': 'OCC(O)CCC',
-	'diol-1,3': 'OCCC(O)CC',
-	ketone: 'CC(=O)CCC',
-	aldehyde: 'O=CCCCC',
-	'amine-primary': 'NCCCC',
-	'amine-secondary': 'CNCCC',
-	'indole-nh': 'c1ccc2[nH]ccc2c1',
-	'carboxylic-acid': 'OC(=O)CCCC',
-	'alkyne-terminal': 'C#CCCC',
-	thiol: 'SCCCC'
-};
 
 describe('drawing protected intermediates', () => {
 	for (const row of rows) {
