@@ -1,10 +1,14 @@
 import type { RouteDocument } from '../../route/document';
 import { planRoute, type CheckedPlanAnswer, type Plan, type PlanSafety } from '../../rules/plan';
-import { checkRouteDocument, defaultCheckRules } from './check';
+import { checkRouteDocument, defaultCheckRules, type RouteStepCheck } from './check';
 
 /** The first clash or unreadable step of a route, or null when it re-checks clean. */
 export function firstClash(route: RouteDocument): string | null {
-	for (const step of checkRouteDocument(route)) {
+	return firstClashIn(checkRouteDocument(route));
+}
+
+function firstClashIn(checks: RouteStepCheck[]): string | null {
+	for (const step of checks) {
 		if (step.error) return `step "${step.id}": ${step.error.message}`;
 		const clash = step.clashes.find((c) => c.severity === 'clash');
 		if (clash) return `step "${step.id}": ${clash.message}`;
@@ -17,13 +21,24 @@ export function firstClash(route: RouteDocument): string | null {
  * and says for each plan which hazards its added steps bring and which cautions remain.
  */
 export function planRouteDocument(document: RouteDocument): CheckedPlanAnswer {
-	const answer = planRoute(document, { verify: firstClash, rules: defaultCheckRules() });
-	return { ...answer, plans: answer.plans.map((plan) => ({ ...plan, ...safetyOf(plan) })) };
+	// The re-check that admits each plan also gives its hazards and cautions: keep it, by route.
+	const checked = new WeakMap<RouteDocument, RouteStepCheck[]>();
+	const verify = (route: RouteDocument) => {
+		const checks = checkRouteDocument(route);
+		checked.set(route, checks);
+		return firstClashIn(checks);
+	};
+	const answer = planRoute(document, { verify, rules: defaultCheckRules() });
+	return {
+		...answer,
+		plans: answer.plans.map((plan) => ({
+			...plan,
+			...safetyOf(plan, checked.get(plan.route) ?? checkRouteDocument(plan.route))
+		}))
+	};
 }
 
-function safetyOf(plan: Plan): PlanSafety {
-	// The re-check that admitted the plan filled the check's caches: this pass costs little.
-	const checks = checkRouteDocument(plan.route);
+function safetyOf(plan: Plan, checks: RouteStepCheck[]): PlanSafety {
 	const added = new Set(
 		plan.route.steps
 			.filter((s) => s.intent === 'protect' || s.intent === 'deprotect')
