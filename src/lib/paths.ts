@@ -2,21 +2,37 @@
 export const paths = {
 	home: () => '/',
 	signIn: (redirectTo?: string) =>
-		redirectTo && redirectTo !== '/' ? `/signin?redirectTo=${encodeURIComponent(redirectTo)}` : '/signin',
+		redirectTo && redirectTo !== '/'
+			? `/signin?redirectTo=${encodeURIComponent(redirectTo)}`
+			: '/signin',
 	signOut: () => '/signout',
 	projects: () => '/projects',
 	project: (projectId: string) => `/projects/${projectId}`,
 	route: (routeId: string) => `/routes/${routeId}`,
-	routeExport: (routeId: string, format: 'sdf' | 'json') => `/api/routes/${routeId}/export?format=${format}`,
+	routeExport: (routeId: string, format: 'sdf' | 'json') =>
+		`/api/routes/${routeId}/export?format=${format}`,
 	team: (teamId: string) => `/teams/${teamId}`,
 	account: () => '/account',
 	setPassword: (token: string) => `/set-password/${token}`
 };
 
-/** Only same-site paths are followed after sign-in, never another origin. */
+// Any origin works as the base: only whether the target stays on it matters.
+const SAME_ORIGIN_PROBE = 'http://orthogon.invalid';
+
+/**
+ * The in-app path to go to after sign-in, or the projects page. The target is parsed with `URL`,
+ * as a browser would read it (tabs and newlines dropped, a backslash read as a slash), and kept
+ * only when it stays on this origin; `/<tab>/evil.example`, `//evil.example` and `https://evil.example` all fall
+ * back. The answer is the parsed path, so it carries no raw control characters into a header.
+ */
 export function safeRedirectTarget(value: string | null | undefined): string {
-	if (!value || !value.startsWith('/') || value.startsWith('//') || value.startsWith('/\\')) {
+	if (!value || !value.startsWith('/')) return paths.projects();
+	let target: URL;
+	try {
+		target = new URL(value, SAME_ORIGIN_PROBE);
+	} catch {
 		return paths.projects();
 	}
-	return value;
+	if (target.origin !== SAME_ORIGIN_PROBE) return paths.projects();
+	return target.pathname + target.search + target.hash;
 }
