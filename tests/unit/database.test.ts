@@ -46,7 +46,7 @@ describe('migrations', () => {
 		expect(await migrate(sequelize)).toEqual([]);
 		const tables = async () =>
 			(await sequelize.getQueryInterface().showAllTables()).filter((t) => t !== 'schema_migrations').sort();
-		expect(await tables()).toEqual(['activity_events', 'api_tokens', 'intermediates', 'memberships', 'planned_routes', 'projects', 'routes', 'set_password_links', 'steps', 'teams', 'users']);
+		expect(await tables()).toEqual(['activity_events', 'api_tokens', 'intermediates', 'memberships', 'planned_routes', 'projects', 'routes', 'sessions', 'set_password_links', 'sign_in_limits', 'steps', 'teams', 'users']);
 		await migrateDownAll(sequelize);
 		expect(await tables()).toEqual([]);
 		expect(await migrate(sequelize)).toHaveLength(migrations.length);

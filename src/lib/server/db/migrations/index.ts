@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as foundation from './0001-foundation';
 import * as routes from './0002-routes';
 import * as plannedRoutes from './0003-planned-routes';
+import * as sessionsAndSignInLimits from './0004-sessions-and-sign-in-limits';
 
 export type Migration = {
 	name: string;
@@ -16,5 +17,6 @@ export type Migration = {
 export const migrations: Migration[] = [
 	{ name: '0001-foundation', ...foundation },
 	{ name: '0002-routes', ...routes },
-	{ name: '0003-planned-routes', ...plannedRoutes }
+	{ name: '0003-planned-routes', ...plannedRoutes },
+	{ name: '0004-sessions-and-sign-in-limits', ...sessionsAndSignInLimits }
 ];

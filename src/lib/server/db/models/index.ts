@@ -6,17 +6,18 @@ import { Membership } from './membership';
 import { PlannedRoute } from './planned-route';
 import { Project } from './project';
 import { Route } from './route';
+import { Session } from './session';
 import { SetPasswordLink } from './set-password-link';
 import { Step } from './step';
 import { Team } from './team';
 import { User } from './user';
 
-export { ActivityEvent, ApiToken, Intermediate, Membership, PlannedRoute, Project, Route, SetPasswordLink, Step, Team, User };
+export { ActivityEvent, ApiToken, Intermediate, Membership, PlannedRoute, Project, Route, Session, SetPasswordLink, Step, Team, User };
 export { ROUTE_STATUSES, type RouteStatus } from './route';
 
 /** Binds every model to one Sequelize instance and wires the associations. */
 export function initModels(sequelize: Sequelize) {
-	for (const model of [User, Team, Membership, ApiToken, SetPasswordLink, Project, ActivityEvent, Route, Intermediate, Step, PlannedRoute]) {
+	for (const model of [User, Team, Membership, ApiToken, SetPasswordLink, Project, ActivityEvent, Route, Intermediate, Step, PlannedRoute, Session]) {
 		model.initModel(sequelize);
 	}
 	Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' });
@@ -30,4 +31,5 @@ export function initModels(sequelize: Sequelize) {
 	Route.hasMany(Step, { as: 'steps', foreignKey: 'routeId' });
 	PlannedRoute.belongsTo(Route, { as: 'route', foreignKey: 'routeId' });
 	PlannedRoute.belongsTo(Route, { as: 'plannedFrom', foreignKey: 'plannedFromId' });
+	Session.belongsTo(User, { as: 'user', foreignKey: 'userId' });
 }
