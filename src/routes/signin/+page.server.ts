@@ -4,7 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import type { Actions, PageServerLoad } from './$types';
 import { safeRedirectTarget } from '$lib/paths';
 import { signIn } from '$lib/server/auth/auth';
-import { forgetSignInFailures, takeSignInAttempt } from '$lib/server/auth/rate-limit';
+import { currentSignInContext } from '$lib/server/auth/sign-in-context';
 import { DEMO_PASSWORD, DEMO_SIGN_INS } from '$lib/server/db/demo-scenario';
 import { signInSchema } from './schema';
 
@@ -25,15 +25,6 @@ export const actions: Actions = {
 		if (!form.valid) return fail(400, { form });
 		const { email, password } = form.data;
 
-		const verdict = await takeSignInAttempt(email, event.getClientAddress());
-		if (!verdict.allowed) {
-			event.setHeaders({ 'retry-after': String(verdict.retryAfterSeconds) });
-			const minutes = Math.ceil(verdict.retryAfterSeconds / 60);
-			return message(form, `Too many sign-in attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`, {
-				status: 429
-			});
-		}
-
 		// Auth.js reads the credentials from the request body, which superforms has consumed.
 		const body = new FormData();
 		body.set('providerId', 'credentials');
@@ -47,12 +38,18 @@ export const actions: Actions = {
 		try {
 			await signIn({ ...event, request });
 		} catch (caught) {
-			if (isRedirect(caught)) {
-				await forgetSignInFailures(email);
-				throw caught;
-			}
+			if (isRedirect(caught)) throw caught;
 			if (caught instanceof Error && caught.name === 'CredentialsSignin') {
 				form.data.password = '';
+				// The limits are applied inside Auth.js (auth/sign-in.ts), which notes a refusal here.
+				const retryAfterSeconds = currentSignInContext()?.retryAfterSeconds;
+				if (retryAfterSeconds) {
+					event.setHeaders({ 'retry-after': String(retryAfterSeconds) });
+					const minutes = Math.ceil(retryAfterSeconds / 60);
+					return message(form, `Too many sign-in attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`, {
+						status: 429
+					});
+				}
 				return message(form, 'That e-mail and password do not match an Orthogon account.', { status: 400 });
 			}
 			throw caught;

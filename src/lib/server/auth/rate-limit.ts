@@ -1,33 +1,121 @@
-import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
+import {
+	RateLimiterPostgres,
+	RateLimiterRes,
+	RateLimiterSQLite,
+	type RateLimiterStoreAbstract
+} from 'rate-limiter-flexible';
+import type { Sequelize } from 'sequelize';
+import { dbReady, User } from '../db';
+import { normaliseEmail } from './credentials';
 
-// Per e-mail the limit stops password guessing on one account; per address it stops one client
-// spraying many accounts. Both windows are 15 minutes.
-const WINDOW_SECONDS = 15 * 60;
-const perEmail = new RateLimiterMemory({ keyPrefix: 'signin-email', points: 5, duration: WINDOW_SECONDS });
-// A shared address (a site's outbound proxy, a test run) may need more: ORTHOGON_SIGNIN_LIMIT_PER_ADDRESS.
-const perAddress = new RateLimiterMemory({
-	keyPrefix: 'signin-ip',
-	points: Number(process.env.ORTHOGON_SIGNIN_LIMIT_PER_ADDRESS) || 30,
-	duration: WINDOW_SECONDS
-});
+// What a stranger can do and what they cannot: five wrong passwords for one account *from one
+// address* block that account from that address only, so the owner elsewhere signs in as usual;
+// one address spraying many accounts is stopped by its own count. Only failures count: an attempt
+// reserves a point before the password is checked (so parallel guesses cannot overtake the limit)
+// and a correct password gives it back.
+export const SIGN_IN_LIMITS = {
+	windowSeconds: 15 * 60,
+	perAccountFromAddress: 5,
+	// A shared address (a site's outbound proxy, a test run) may need more.
+	perAddress: Number(process.env.ORTHOGON_SIGNIN_LIMIT_PER_ADDRESS) || 30
+} as const;
+
+// The counts live in the database (migration 0004), so every server counts against the same
+// numbers: rate-limiter-flexible's PostgreSQL store through Sequelize's pool, its SQLite store on
+// Sequelize's own connection.
+const TABLE = 'sign_in_limits';
+
+type Limiters = {
+	perAccountFromAddress: RateLimiterStoreAbstract;
+	perAddress: RateLimiterStoreAbstract;
+};
+const limitersByDatabase = new WeakMap<Sequelize, Promise<Limiters>>();
+
+async function limiters(): Promise<Limiters> {
+	await dbReady();
+	const sequelize = User.sequelize!;
+	let found = limitersByDatabase.get(sequelize);
+	if (!found) {
+		found = createLimiters(sequelize);
+		limitersByDatabase.set(sequelize, found);
+	}
+	return found;
+}
+
+type SqliteConnectionManager = { getConnection(options: object): Promise<unknown> };
+
+async function createLimiters(sequelize: Sequelize): Promise<Limiters> {
+	const common = { tableName: TABLE, tableCreated: true, duration: SIGN_IN_LIMITS.windowSeconds };
+	let make: (keyPrefix: string, points: number) => RateLimiterStoreAbstract;
+	if (sequelize.getDialect() === 'postgres') {
+		make = (keyPrefix, points) =>
+			new RateLimiterPostgres({
+				...common,
+				storeClient: sequelize,
+				storeType: 'sequelize',
+				keyPrefix,
+				points
+			});
+	} else {
+		const manager = sequelize.connectionManager as unknown as SqliteConnectionManager;
+		const connection = await manager.getConnection({});
+		make = (keyPrefix, points) =>
+			new RateLimiterSQLite({
+				...common,
+				storeClient: connection,
+				storeType: 'sqlite3',
+				keyPrefix,
+				points
+			});
+	}
+	return {
+		perAccountFromAddress: make('signin-account', SIGN_IN_LIMITS.perAccountFromAddress),
+		perAddress: make('signin-address', SIGN_IN_LIMITS.perAddress)
+	};
+}
 
 export type SignInAllowance = { allowed: true } | { allowed: false; retryAfterSeconds: number };
 
-/** Counts one sign-in attempt; refuses it once either limit is spent. */
+const accountKey = (email: string, address: string) =>
+	`${normaliseEmail(email) || '(blank)'}|${address}`;
+
+function refusal(res: RateLimiterRes): SignInAllowance {
+	return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil(res.msBeforeNext / 1000)) };
+}
+
+/**
+ * Reserves one attempt for this e-mail from this address, or refuses it (without checking the
+ * password) while either count is spent. Call `settleSignInAttempt` once the password is checked.
+ */
 export async function takeSignInAttempt(email: string, address: string): Promise<SignInAllowance> {
+	const { perAccountFromAddress, perAddress } = await limiters();
+	const key = accountKey(email, address);
+	const [account, addressCount] = await Promise.all([
+		perAccountFromAddress.get(key),
+		perAddress.get(address)
+	]);
+	if (account && account.remainingPoints <= 0) return refusal(account);
+	if (addressCount && addressCount.remainingPoints <= 0) return refusal(addressCount);
 	try {
 		await perAddress.consume(address);
-		await perEmail.consume(email.trim().toLowerCase() || '(blank)');
+		await perAccountFromAddress.consume(key);
 		return { allowed: true };
 	} catch (rejection) {
-		if (rejection instanceof RateLimiterRes) {
-			return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil(rejection.msBeforeNext / 1000)) };
-		}
+		if (rejection instanceof RateLimiterRes) return refusal(rejection);
 		throw rejection;
 	}
 }
 
-/** A successful sign-in clears the e-mail's count (the address keeps its count). */
-export async function forgetSignInFailures(email: string): Promise<void> {
-	await perEmail.delete(email.trim().toLowerCase());
+/** A correct password: the attempt did not fail, so its point goes back and the account's count clears. */
+export async function settleSignInAttempt(
+	email: string,
+	address: string,
+	succeeded: boolean
+): Promise<void> {
+	if (!succeeded) return;
+	const { perAccountFromAddress, perAddress } = await limiters();
+	await Promise.all([
+		perAccountFromAddress.delete(accountKey(email, address)),
+		perAddress.reward(address, 1)
+	]);
 }

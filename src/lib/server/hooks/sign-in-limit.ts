@@ -1,22 +1,26 @@
 import type { Handle } from '@sveltejs/kit';
-import { takeSignInAttempt } from '../auth/rate-limit';
+import { apiError } from '../api';
+import { withSignInContext } from '../auth/sign-in-context';
 
-// Scripted sign-ins post straight to Auth.js and skip the sign-in page's action, so the same
-// limits are applied here.
+/** Auth.js answers everything under this prefix itself (its `basePath`). */
+const AUTH_JS_PREFIX = '/auth/';
+
+export const TOO_MANY_ATTEMPTS = 'Too many failed sign-in attempts. Try again later.';
+
+// The limits themselves are applied inside Auth.js's `authorize` (auth/sign-in.ts), which every
+// credentials sign-in passes whatever its path. This hook gives it the client's address, and turns
+// a refused scripted attempt into 429 with `retry-after` (the sign-in page words its own answer).
 export const limitScriptedSignIn: Handle = async ({ event, resolve }) => {
-	if (event.request.method === 'POST' && event.url.pathname === '/auth/callback/credentials') {
-		const form = await event.request
-			.clone()
-			.formData()
-			.catch(() => null);
-		const email = String(form?.get('email') ?? '');
-		const verdict = await takeSignInAttempt(email, event.getClientAddress());
-		if (!verdict.allowed) {
-			return new Response('Too many sign-in attempts. Try again later.', {
-				status: 429,
-				headers: { 'retry-after': String(verdict.retryAfterSeconds) }
-			});
+	if (event.request.method !== 'POST') return resolve(event);
+	return withSignInContext(event.getClientAddress(), async (context) => {
+		const response = await resolve(event);
+		if (context.retryAfterSeconds === null || !event.url.pathname.startsWith(AUTH_JS_PREFIX)) {
+			return response;
 		}
-	}
-	return resolve(event);
+		const refused = apiError(429, 'rate_limited', TOO_MANY_ATTEMPTS, {
+			retryAfterSeconds: context.retryAfterSeconds
+		});
+		refused.headers.set('retry-after', String(context.retryAfterSeconds));
+		return refused;
+	});
 };
