@@ -12,6 +12,8 @@ declare global {
 			user: SessionUser | null;
 			/** How `user` was established; API tokens never open a browser session. */
 			via: 'session' | 'token' | null;
+			/** The server-side session behind a cookie sign-in (auth/sessions.ts); null for tokens. */
+			sessionId: string | null;
 		}
 		interface PageData {
 			user?: SessionUser | null;
@@ -22,12 +24,14 @@ declare global {
 declare module '@auth/core/types' {
 	interface Session {
 		user: { id: string; name?: string | null; email?: string | null; image?: string | null };
+		sessionId?: string;
 	}
 }
 
 declare module '@auth/core/jwt' {
 	interface JWT {
 		uid?: string;
+		sid?: string;
 	}
 }
 

@@ -2,11 +2,12 @@ import { fail } from '@sveltejs/kit';
 import { message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import type { Actions, PageServerLoad } from './$types';
-import { createApiToken, listApiTokens, revokeApiToken } from '$lib/server/auth/api-tokens';
-import { requireUser } from '$lib/server/auth/guards';
+import { createApiToken, listApiTokens, revokeAllApiTokens, revokeApiToken } from '$lib/server/auth/api-tokens';
+import { requirePasswordSession, requireUser } from '$lib/server/auth/guards';
+import { endOtherSessions } from '$lib/server/auth/sessions';
 import { changeOwnPassword } from '$lib/server/services/users';
 import { teamsOf } from '$lib/server/services/teams';
-import { changePasswordSchema, createTokenSchema } from './schema';
+import { changePasswordDefaults, changePasswordSchema, createTokenSchema } from './schema';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireUser(event);
@@ -14,7 +15,7 @@ export const load: PageServerLoad = async (event) => {
 		listApiTokens(user.id),
 		teamsOf(user.id),
 		superValidate(zod4(createTokenSchema)),
-		superValidate(zod4(changePasswordSchema))
+		superValidate(changePasswordDefaults, zod4(changePasswordSchema), { errors: false })
 	]);
 	return {
 		tokens: tokens.map((t) => ({ id: t.id, label: t.label, prefix: t.prefix, createdAt: t.createdAt, lastUsedAt: t.lastUsedAt })),
@@ -26,7 +27,7 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	createToken: async (event) => {
-		const user = requireUser(event);
+		const user = requirePasswordSession(event);
 		const form = await superValidate(event.request, zod4(createTokenSchema));
 		if (!form.valid) return fail(400, { tokenForm: form });
 		const { token } = await createApiToken(user.id, form.data.label);
@@ -34,18 +35,26 @@ export const actions: Actions = {
 		return message(form, { token });
 	},
 	revokeToken: async (event) => {
-		const user = requireUser(event);
+		const user = requirePasswordSession(event);
 		const id = String((await event.request.formData()).get('tokenId') ?? '');
 		if (!(await revokeApiToken(user.id, id))) return fail(404, { problem: 'That token is already revoked.' });
 		return { revoked: true };
 	},
 	changePassword: async (event) => {
-		const user = requireUser(event);
+		const user = requirePasswordSession(event);
 		const form = await superValidate(event.request, zod4(changePasswordSchema));
 		if (!form.valid) return fail(400, { passwordForm: form });
 		if (!(await changeOwnPassword(user.id, form.data.current, form.data.next))) {
 			return setError(form, 'current', 'That is not your current password.');
 		}
-		return message({ ...form, data: { current: '', next: '', confirm: '' } }, 'Your password was changed.');
+		// Whoever knew the old password is signed out everywhere else; this browser stays in.
+		const ended = await endOtherSessions(user.id, event.locals.sessionId);
+		const revoked = form.data.revokeTokens ? await revokeAllApiTokens(user.id) : 0;
+		const done = [
+			'Your password was changed.',
+			`${ended} other session${ended === 1 ? ' was' : 's were'} signed out.`,
+			form.data.revokeTokens ? `${revoked} API token${revoked === 1 ? ' was' : 's were'} revoked.` : 'Your API tokens still work.'
+		].join(' ');
+		return message({ ...form, data: changePasswordDefaults }, done);
 	}
 };

@@ -35,6 +35,13 @@ export async function revokeApiToken(userId: string, tokenId: string): Promise<b
 	return count > 0;
 }
 
+/** Revokes every live token of the user (after a password change); returns how many. */
+export async function revokeAllApiTokens(userId: string): Promise<number> {
+	await dbReady();
+	const [count] = await ApiToken.update({ revokedAt: new Date() }, { where: { userId, revokedAt: null } });
+	return count;
+}
+
 /** The owner of a live token given as `Authorization: Bearer …`, or null. */
 export async function userForApiToken(token: string): Promise<SessionUser | null> {
 	await dbReady();

@@ -24,6 +24,21 @@ export function requireUser(event: GuardEvent): SessionUser {
 	redirect(303, paths.signIn(event.url.pathname + event.url.search));
 }
 
+/**
+ * The user, only when they signed in with their password (a browser session): an API token must
+ * not mint more tokens, revoke them or change the password, or a leaked token would outlive itself.
+ */
+export function requirePasswordSession(event: GuardEvent): SessionUser {
+	const user = requireUser(event);
+	if (event.locals.via !== 'session') {
+		error(403, {
+			code: 'forbidden',
+			message: 'An API token cannot manage tokens or change the password. Sign in with your password to do that.'
+		});
+	}
+	return user;
+}
+
 /** The user's role in a team, read from the database on every call (never from the session). */
 export async function roleIn(userId: string, teamId: string): Promise<Role | null> {
 	await dbReady();
