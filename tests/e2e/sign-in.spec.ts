@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { signIn, signInAndWait } from './helpers';
+import { signIn, signInAndWait, unique } from './helpers';
 
 const FIRST_TEAM = 'Cormorant — keto-diol side chain';
 const SECOND_TEAM = 'Heron — hydroxy lactone core';
@@ -44,6 +44,28 @@ test('sign-out ends the session', async ({ page }) => {
 	await expect(page).toHaveURL(/\/signin/);
 });
 
+test('sign-out ends the session on the server: a copy of the old cookie is refused', async ({ page, playwright, baseURL }) => {
+	await signInAndWait(page, 'viewer@example.com');
+	const cookie = (await page.context().cookies()).map((c) => `${c.name}=${c.value}`).join('; ');
+	const copy = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { cookie } });
+	expect((await copy.get('/api/projects')).status()).toBe(200);
+	await page.getByRole('button', { name: 'Sign out' }).click();
+	await expect(page.getByRole('heading', { name: 'Sign in' })).toBeVisible();
+	expect((await copy.get('/api/projects')).status()).toBe(401);
+	await copy.dispose();
+});
+
+test('redirectTo after sign-in never leaves the site and never breaks the page', async ({ page, baseURL }) => {
+	await signInAndWait(page, 'viewer@example.com');
+	for (const target of ['/%09/evil.example', '%0a', '/%0a/evil.example', '//evil.example', '/%5Cevil.example', 'https://evil.example']) {
+		const response = await page.goto(`/signin?redirectTo=${target}`);
+		expect(response?.status(), target).toBe(200);
+		expect(new URL(page.url()).origin, target).toBe(new URL(baseURL!).origin);
+	}
+	await page.goto(`/signin?redirectTo=${encodeURIComponent('/projects?x=1')}`);
+	await expect(page).toHaveURL(/\/projects\?x=1$/);
+});
+
 test('after a sign-in the chemist lands where they were going', async ({ page }) => {
 	await page.goto('/account');
 	await expect(page).toHaveURL(/redirectTo=%2Faccount/);
@@ -71,6 +93,36 @@ test('repeated wrong passwords are refused with 429 and Retry-After', async ({ r
 	// The sign-in page shares the same count and says so in words.
 	await signIn(page, email, 'guess');
 	await expect(page.getByRole('alert')).toContainText('Too many sign-in attempts. Try again in 15 minutes.');
+});
+
+for (const path of ['/auth/callback/credentials/', '/auth/callback//credentials']) {
+	test(`guesses posted to ${path} are limited like any other`, async ({ request, baseURL }) => {
+		const email = `${unique('guesser').replace(/\W/g, '')}@example.com`;
+		const attempt = () =>
+			request.post(path, {
+				form: { email, password: 'guess' },
+				headers: { origin: new URL(baseURL!).origin },
+				maxRedirects: 0
+			});
+		for (let i = 0; i < 5; i++) expect((await attempt()).status()).not.toBe(429);
+		const refused = await attempt();
+		expect(refused.status()).toBe(429);
+		expect(Number(refused.headers()['retry-after'])).toBeGreaterThan(0);
+		expect((await refused.json()).error.code).toBe('rate_limited');
+	});
+}
+
+test('successful scripted sign-ins do not count against the limit', async ({ request, baseURL }) => {
+	const origin = new URL(baseURL!).origin;
+	for (let i = 0; i < 8; i++) {
+		const response = await request.post('/auth/callback/credentials', {
+			form: { email: 'reviewer@example.com', password: 'orthogon-demo' },
+			headers: { origin },
+			maxRedirects: 0
+		});
+		expect(response.status()).toBe(302);
+		expect(response.headers()['location']).not.toContain('error=');
+	}
 });
 
 test('pages run under the content security policy without console errors', async ({ page }) => {
