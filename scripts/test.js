@@ -6,6 +6,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { ensureChromium } from './ensure-chromium.js';
 import { startTestPostgres } from './test-postgres.js';
+import { runTwoServerTest } from './test-two-servers.js';
 
 const REPORTS = 'test-results';
 fs.mkdirSync(REPORTS, { recursive: true });
@@ -40,12 +41,26 @@ fs.rmSync(vitestReport, { force: true });
 const vitestOk = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], {
 	...(postgres.url ? { TEST_POSTGRES_URL: postgres.url } : {})
 });
-postgres.stop?.();
 if (!vitestOk) failures.push('unit tests');
 count(vitestReport, (r) => [r.numPassedTests, r.numFailedTests + (r.numFailedTestSuites ?? 0)]);
 
 console.log('\n▶ Build');
-if (!run('node', ['scripts/start.js', '--build-only'])) failures.push('build');
+const built = run('node', ['scripts/start.js', '--build-only']);
+if (!built) failures.push('build');
+
+// The throwaway PostgreSQL stays up until here: two built servers share it.
+console.log('\n▶ Two servers on one PostgreSQL (shared sessions and sign-in limits)');
+if (!postgres.url) {
+	console.log(`The two-server test is skipped: ${postgres.reason}.`);
+} else if (!built) {
+	console.log('The two-server test is skipped: the build failed.');
+} else {
+	const twoServers = await runTwoServerTest(postgres.url);
+	passed += twoServers.passed;
+	failed += twoServers.failed;
+	if (twoServers.failed) failures.push('two-server test');
+}
+postgres.stop?.();
 
 console.log('\n▶ Browser tests (Playwright on Debian Chromium)');
 const e2eReport = path.resolve(REPORTS, 'playwright.json');

@@ -1,7 +1,7 @@
 import type { Handle } from '@sveltejs/kit';
 import { apiError } from '../api';
 import { userForApiToken } from '../auth/api-tokens';
-import { cookiePolicy } from '../auth/cookie-policy';
+import { cookiePolicy, holdAuthCookiesToPolicy } from '../auth/cookie-policy';
 import { userForSession } from '../auth/sessions';
 
 /** Who is asking: a Bearer token (API scripts) or the Auth.js session cookie (the browser). */
@@ -18,6 +18,7 @@ export const identify: Handle = async ({ event, resolve }) => {
 		event.locals.via = 'token';
 		return resolve(event);
 	}
+	holdAuthCookiesToPolicy(event.cookies);
 	const session = await event.locals.auth();
 	const userId = session?.user?.id;
 	if (userId) {
