@@ -15,15 +15,22 @@ for (const role of ['lead', 'chemist', 'reviewer', 'viewer']) {
 
 test('a wrong password shows a clear message and no session', async ({ page }) => {
 	await signIn(page, 'lead@example.com', 'not-the-password');
-	await expect(page.getByRole('alert')).toHaveText('That e-mail and password do not match an Orthogon account.');
+	await expect(page.getByRole('alert')).toHaveText(
+		'That e-mail and password do not match an Orthogon account.'
+	);
 	await page.goto('/projects');
 	await expect(page).toHaveURL(/\/signin\?redirectTo=%2Fprojects/);
 });
 
-test('the outsider never sees the first team’s project, not even by its address', async ({ page, browser }) => {
+test('the outsider never sees the first team’s project, not even by its address', async ({
+	page,
+	browser
+}) => {
 	const leadPage = await (await browser.newContext()).newPage();
 	await signInAndWait(leadPage, 'lead@example.com');
-	const href = await leadPage.getByRole('link', { name: new RegExp(FIRST_TEAM) }).getAttribute('href');
+	const href = await leadPage
+		.getByRole('link', { name: new RegExp(FIRST_TEAM) })
+		.getAttribute('href');
 	expect(href).toMatch(/^\/projects\/[0-9a-f-]{36}$/);
 
 	await signInAndWait(page, 'outsider@example.com');
@@ -44,7 +51,11 @@ test('sign-out ends the session', async ({ page }) => {
 	await expect(page).toHaveURL(/\/signin/);
 });
 
-test('sign-out ends the session on the server: a copy of the old cookie is refused', async ({ page, playwright, baseURL }) => {
+test('sign-out ends the session on the server: a copy of the old cookie is refused', async ({
+	page,
+	playwright,
+	baseURL
+}) => {
 	await signInAndWait(page, 'viewer@example.com');
 	const cookie = (await page.context().cookies()).map((c) => `${c.name}=${c.value}`).join('; ');
 	const copy = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { cookie } });
@@ -55,9 +66,19 @@ test('sign-out ends the session on the server: a copy of the old cookie is refus
 	await copy.dispose();
 });
 
-test('redirectTo after sign-in never leaves the site and never breaks the page', async ({ page, baseURL }) => {
+test('redirectTo after sign-in never leaves the site and never breaks the page', async ({
+	page,
+	baseURL
+}) => {
 	await signInAndWait(page, 'viewer@example.com');
-	for (const target of ['/%09/evil.example', '%0a', '/%0a/evil.example', '//evil.example', '/%5Cevil.example', 'https://evil.example']) {
+	for (const target of [
+		'/%09/evil.example',
+		'%0a',
+		'/%0a/evil.example',
+		'//evil.example',
+		'/%5Cevil.example',
+		'https://evil.example'
+	]) {
 		const response = await page.goto(`/signin?redirectTo=${target}`);
 		expect(response?.status(), target).toBe(200);
 		expect(new URL(page.url()).origin, target).toBe(new URL(baseURL!).origin);
@@ -75,7 +96,11 @@ test('after a sign-in the chemist lands where they were going', async ({ page })
 	await expect(page.getByRole('heading', { name: 'Your account' })).toBeVisible();
 });
 
-test('repeated wrong passwords are refused with 429 and Retry-After', async ({ request, page, baseURL }) => {
+test('repeated wrong passwords are refused with 429 and Retry-After', async ({
+	request,
+	page,
+	baseURL
+}) => {
 	const email = 'no-such-person@example.com';
 	const attempt = () =>
 		request.post('/auth/callback/credentials', {
@@ -92,7 +117,9 @@ test('repeated wrong passwords are refused with 429 and Retry-After', async ({ r
 
 	// The sign-in page shares the same count and says so in words.
 	await signIn(page, email, 'guess');
-	await expect(page.getByRole('alert')).toContainText('Too many sign-in attempts. Try again in 15 minutes.');
+	await expect(page.getByRole('alert')).toContainText(
+		'Too many sign-in attempts. Try again in 15 minutes.'
+	);
 });
 
 for (const path of ['/auth/callback/credentials/', '/auth/callback//credentials']) {
@@ -112,7 +139,10 @@ for (const path of ['/auth/callback/credentials/', '/auth/callback//credentials'
 	});
 }
 
-test('successful scripted sign-ins do not count against the limit', async ({ request, baseURL }) => {
+test('successful scripted sign-ins do not count against the limit', async ({
+	request,
+	baseURL
+}) => {
 	const origin = new URL(baseURL!).origin;
 	for (let i = 0; i < 8; i++) {
 		const response = await request.post('/auth/callback/credentials', {

@@ -2,7 +2,12 @@ import { fail } from '@sveltejs/kit';
 import { message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import type { Actions, PageServerLoad } from './$types';
-import { createApiToken, listApiTokens, revokeAllApiTokens, revokeApiToken } from '$lib/server/auth/api-tokens';
+import {
+	createApiToken,
+	listApiTokens,
+	revokeAllApiTokens,
+	revokeApiToken
+} from '$lib/server/auth/api-tokens';
 import { requirePasswordSession, requireUser } from '$lib/server/auth/guards';
 import { endOtherSessions } from '$lib/server/auth/sessions';
 import { changeOwnPassword } from '$lib/server/services/users';
@@ -18,7 +23,13 @@ export const load: PageServerLoad = async (event) => {
 		superValidate(changePasswordDefaults, zod4(changePasswordSchema), { errors: false })
 	]);
 	return {
-		tokens: tokens.map((t) => ({ id: t.id, label: t.label, prefix: t.prefix, createdAt: t.createdAt, lastUsedAt: t.lastUsedAt })),
+		tokens: tokens.map((t) => ({
+			id: t.id,
+			label: t.label,
+			prefix: t.prefix,
+			createdAt: t.createdAt,
+			lastUsedAt: t.lastUsedAt
+		})),
 		teams,
 		tokenForm,
 		passwordForm
@@ -37,7 +48,8 @@ export const actions: Actions = {
 	revokeToken: async (event) => {
 		const user = requirePasswordSession(event);
 		const id = String((await event.request.formData()).get('tokenId') ?? '');
-		if (!(await revokeApiToken(user.id, id))) return fail(404, { problem: 'That token is already revoked.' });
+		if (!(await revokeApiToken(user.id, id)))
+			return fail(404, { problem: 'That token is already revoked.' });
 		return { revoked: true };
 	},
 	changePassword: async (event) => {
@@ -53,7 +65,9 @@ export const actions: Actions = {
 		const done = [
 			'Your password was changed.',
 			`${ended} other session${ended === 1 ? ' was' : 's were'} signed out.`,
-			form.data.revokeTokens ? `${revoked} API token${revoked === 1 ? ' was' : 's were'} revoked.` : 'Your API tokens still work.'
+			form.data.revokeTokens
+				? `${revoked} API token${revoked === 1 ? ' was' : 's were'} revoked.`
+				: 'Your API tokens still work.'
 		].join(' ');
 		return message({ ...form, data: changePasswordDefaults }, done);
 	}

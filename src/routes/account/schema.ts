@@ -14,7 +14,10 @@ export const changePasswordSchema = z
 		// (see changePasswordDefaults).
 		revokeTokens: z.boolean().default(false)
 	})
-	.refine((v) => v.next === v.confirm, { path: ['confirm'], message: 'The two new passwords differ.' });
+	.refine((v) => v.next === v.confirm, {
+		path: ['confirm'],
+		message: 'The two new passwords differ.'
+	});
 
 // Ticked at first: a password is usually changed because it may have leaked, and a token made by
 // whoever had it would otherwise keep working. Unticked, scripts keep running.

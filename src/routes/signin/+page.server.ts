@@ -15,7 +15,10 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 	const demo =
 		process.env.ORTHOGON_DEMO === '0'
 			? null
-			: { password: DEMO_PASSWORD, people: DEMO_SIGN_INS.map(({ email, role, team }) => ({ email, role, team })) };
+			: {
+					password: DEMO_PASSWORD,
+					people: DEMO_SIGN_INS.map(({ email, role, team }) => ({ email, role, team }))
+				};
 	return { form, demo };
 };
 
@@ -46,11 +49,17 @@ export const actions: Actions = {
 				if (retryAfterSeconds) {
 					event.setHeaders({ 'retry-after': String(retryAfterSeconds) });
 					const minutes = Math.ceil(retryAfterSeconds / 60);
-					return message(form, `Too many sign-in attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`, {
-						status: 429
-					});
+					return message(
+						form,
+						`Too many sign-in attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
+						{
+							status: 429
+						}
+					);
 				}
-				return message(form, 'That e-mail and password do not match an Orthogon account.', { status: 400 });
+				return message(form, 'That e-mail and password do not match an Orthogon account.', {
+					status: 400
+				});
 			}
 			throw caught;
 		}

@@ -38,7 +38,10 @@ export async function revokeApiToken(userId: string, tokenId: string): Promise<b
 /** Revokes every live token of the user (after a password change); returns how many. */
 export async function revokeAllApiTokens(userId: string): Promise<number> {
 	await dbReady();
-	const [count] = await ApiToken.update({ revokedAt: new Date() }, { where: { userId, revokedAt: null } });
+	const [count] = await ApiToken.update(
+		{ revokedAt: new Date() },
+		{ where: { userId, revokedAt: null } }
+	);
 	return count;
 }
 

@@ -18,7 +18,10 @@ export const {
 } = SvelteKitAuth({
 	providers: [
 		Credentials({
-			credentials: { email: { label: 'E-mail' }, password: { label: 'Password', type: 'password' } },
+			credentials: {
+				email: { label: 'E-mail' },
+				password: { label: 'Password', type: 'password' }
+			},
 			authorize: (credentials) => authorizeSignIn(credentials.email, credentials.password)
 		})
 	],

@@ -9,7 +9,10 @@ export function normaliseEmail(email: string): string {
 }
 
 /** The user whose e-mail and password match, or null (unknown e-mail, no password yet, or wrong). */
-export async function verifyCredentials(email: unknown, password: unknown): Promise<SessionUser | null> {
+export async function verifyCredentials(
+	email: unknown,
+	password: unknown
+): Promise<SessionUser | null> {
 	if (typeof email !== 'string' || typeof password !== 'string' || !email || !password) return null;
 	await dbReady();
 	const user = await User.findOne({ where: { email: normaliseEmail(email) } });

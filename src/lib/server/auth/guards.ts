@@ -19,7 +19,10 @@ export function requireUser(event: GuardEvent): SessionUser {
 	const user = event.locals.user;
 	if (user) return user;
 	if (isApiPath(event.url)) {
-		error(401, { code: 'unauthenticated', message: 'Sign in, or send an API token as a Bearer token.' });
+		error(401, {
+			code: 'unauthenticated',
+			message: 'Sign in, or send an API token as a Bearer token.'
+		});
 	}
 	redirect(303, paths.signIn(event.url.pathname + event.url.search));
 }
@@ -33,7 +36,8 @@ export function requirePasswordSession(event: GuardEvent): SessionUser {
 	if (event.locals.via !== 'session') {
 		error(403, {
 			code: 'forbidden',
-			message: 'An API token cannot manage tokens or change the password. Sign in with your password to do that.'
+			message:
+				'An API token cannot manage tokens or change the password. Sign in with your password to do that.'
 		});
 	}
 	return user;
@@ -90,7 +94,9 @@ export async function requireProjectAction(event: GuardEvent, projectId: string,
 export async function requireRouteAction(event: GuardEvent, routeId: string, action: Action) {
 	const user = requireUser(event);
 	await dbReady();
-	const route = isUuid(routeId) ? await Route.findByPk(routeId, { include: [{ model: Project, as: 'project' }] }) : null;
+	const route = isUuid(routeId)
+		? await Route.findByPk(routeId, { include: [{ model: Project, as: 'project' }] })
+		: null;
 	if (!route?.project || !(await roleIn(user.id, route.project.teamId))) notFound('That route');
 	const { role } = await requireTeamAction(event, route.project.teamId, action);
 	return { user, role, route, project: route.project };
