@@ -66,6 +66,20 @@ test('sign-out ends the session on the server: a copy of the old cookie is refus
 	await copy.dispose();
 });
 
+test('a sign-out posted as text/plain still signs out, and is no 500', async ({
+	page,
+	baseURL
+}) => {
+	await signInAndWait(page, 'viewer@example.com');
+	const response = await page.request.post('/signout', {
+		headers: { 'content-type': 'text/plain', origin: new URL(baseURL!).origin },
+		data: 'anything',
+		maxRedirects: 0
+	});
+	expect(response.status()).toBeLessThan(400);
+	expect((await page.request.get('/api/projects')).status()).toBe(401);
+});
+
 test('redirectTo after sign-in never leaves the site and never breaks the page', async ({
 	page,
 	baseURL

@@ -5,5 +5,18 @@ import { signOut } from '$lib/server/auth/auth';
 
 export const load: PageServerLoad = () => redirect(303, paths.projects());
 
-// The sign-out form posts `redirectTo`; Auth.js clears the session cookie and redirects there.
-export const actions: Actions = { default: signOut };
+// Auth.js reads a form body; a sign-out needs nothing from the client's body, so whatever it sent
+// (a form, text/plain, nothing) Auth.js gets a well-formed one. Its `signOut` event ends the
+// session on the server (auth/sessions.ts), then it clears the cookie and goes to sign-in.
+export const actions: Actions = {
+	default: (event) => {
+		const headers = new Headers(event.request.headers);
+		headers.delete('content-type');
+		headers.delete('content-length');
+		const body = new URLSearchParams({ redirectTo: paths.signIn() });
+		return signOut({
+			...event,
+			request: new Request(event.request.url, { method: 'POST', headers, body })
+		});
+	}
+};
