@@ -23,3 +23,22 @@ export const STRUCTURE_LIMITS = {
 } as const;
 
 export type StructureLimit = keyof typeof STRUCTURE_LIMITS;
+
+/**
+ * Bytes each cache of the chemistry may hold, per process (each chemistry worker has its own).
+ * Together about 100 MB: well inside a worker's heap limit (ORTHOGON_CHEM_WORKER_HEAP_MB).
+ */
+export const CACHE_BYTES = {
+	/** Perceptions by structure text (src/lib/chem/perception-cache.ts). */
+	perceptionByText: 32 * 2 ** 20,
+	/** Perceptions by canonical key (src/lib/chem/perception-cache.ts). */
+	perceptionByKey: 16 * 2 ** 20,
+	/** Survival of groups across a step (src/lib/rules/check/transformation.ts). */
+	transformations: 24 * 2 ** 20,
+	/** Protected intermediates drawn by the planner (src/lib/rules/plan/draw.ts). */
+	drawnStructures: 16 * 2 ** 20,
+	/** Atom mappings of steps kept between plans (src/lib/rules/plan/track.ts). */
+	followedSteps: 8 * 2 ** 20,
+	/** Compiled combined reactions (src/lib/chem/transform.ts); each counted at a fixed 16 KB. */
+	combinedReactions: 4 * 2 ** 20
+} as const;
