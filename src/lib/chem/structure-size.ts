@@ -1,10 +1,13 @@
 // Counting a structure's atoms and bonds from its text alone, before openchemlib parses it:
 // the counts line of a molfile can declare any number, and openchemlib allocates arrays for
 // what it declares. Unknown atom symbols are refused here too, with the place they were found.
+// Sizes are checked before symbols: a text that is both too large and wrong is refused for size.
 
 import { isHydrogenSymbol, isMolfileSymbol, isSmilesSymbol } from './elements';
 import { StructureError } from './errors';
+import { detectFormat } from './format';
 import { STRUCTURE_LIMITS } from './limits';
+import { splitSdf } from './sdf';
 import { smilesAtoms } from './smiles-atoms';
 
 export type StructureSize = { atoms: number; bonds: number; heavyAtoms: number };
@@ -14,23 +17,18 @@ type Where = { record?: number };
 /** Counts and checks a SMILES (without its title), e.g. `smilesSize('CCO')` → `{ atoms: 3, bonds: 2, heavyAtoms: 3 }`. */
 export function smilesSize(smiles: string, offset = 0): StructureSize {
 	const tokens = smilesAtoms(smiles);
-	let heavyAtoms = 0;
-	for (const token of tokens) {
-		if (!isSmilesSymbol(token.symbol)) {
-			throw new StructureError(
-				'unknown_element',
-				`“${token.symbol}” at character ${offset + token.position + 1} is not an element symbol.`,
-				{ position: offset + token.position }
-			);
-		}
-		if (!isHydrogenSymbol(token.symbol)) heavyAtoms += 1;
-	}
-	const size = {
-		atoms: tokens.length,
-		bonds: tokens.length - 1 + ringClosures(smiles),
-		heavyAtoms
-	};
+	const heavyAtoms = tokens.filter((token) => !isHydrogenSymbol(token.symbol)).length;
+	const bonds = tokens.length - 1 + ringClosures(smiles);
+	const size = { atoms: tokens.length, bonds, heavyAtoms };
 	checkSize(size, {});
+	const unknown = tokens.find((token) => !isSmilesSymbol(token.symbol));
+	if (unknown) {
+		throw new StructureError(
+			'unknown_element',
+			`“${unknown.symbol}” at character ${offset + unknown.position + 1} is not an element symbol.`,
+			{ position: offset + unknown.position }
+		);
+	}
 	return size;
 }
 
@@ -56,16 +54,14 @@ function v2000Size(lines: string[], counts: string, where: Where): StructureSize
 	const declaredAtoms = Number(counts.slice(0, 3)) || 0;
 	const declaredBonds = Number(counts.slice(3, 6)) || 0;
 	checkSize({ atoms: declaredAtoms, bonds: declaredBonds, heavyAtoms: 0 }, where, 'declares');
-	let heavyAtoms = 0;
-	const atomLines = lines.slice(4, 4 + declaredAtoms);
-	atomLines.forEach((line, index) => {
-		const symbol = line.slice(31, 34).trim();
-		if (symbol === '') return; // a short line: the parser reports the truncation
-		checkMolfileSymbol(symbol, index, where);
-		if (!isHydrogenSymbol(symbol)) heavyAtoms += 1;
-	});
+	const symbols = lines.slice(4, 4 + declaredAtoms).map((line) => line.slice(31, 34).trim());
+	const heavyAtoms = symbols.filter((symbol) => symbol !== '' && !isHydrogenSymbol(symbol)).length;
 	const size = { atoms: declaredAtoms, bonds: declaredBonds, heavyAtoms };
 	checkSize(size, where);
+	// An empty symbol is a short line: the parser reports the truncation.
+	symbols.forEach((symbol, atom) => {
+		if (symbol !== '') checkMolfileSymbol(symbol, atom, where);
+	});
 	return size;
 }
 
@@ -80,6 +76,7 @@ function v3000Size(lines: string[], where: Where): StructureSize {
 	let bonds = 0;
 	let heavyAtoms = 0;
 	let continued = false;
+	let unknown: { symbol: string; atom: number } | null = null;
 	for (const line of lines) {
 		if (!line.startsWith('M  V30 ')) continue;
 		const body = line.slice(7).trim();
@@ -96,14 +93,30 @@ function v3000Size(lines: string[], where: Where): StructureSize {
 		atoms += 1;
 		const symbol = body.split(/\s+/)[1] ?? '';
 		// Atom lists ("[C,N]", "NOT [O,S]") are queries built from element symbols.
-		if (!/^(NOT\s*)?\[/.test(symbol)) checkMolfileSymbol(symbol, atoms - 1, where);
+		const isList = /^(NOT\s*)?\[/.test(symbol);
+		if (!isList && !unknown && !isMolfileSymbol(symbol)) unknown = { symbol, atom: atoms - 1 };
 		if (!isHydrogenSymbol(symbol)) heavyAtoms += 1;
-		// Stop counting as soon as a limit is passed: a huge block need not be read to the end.
+		// Stop counting once a limit is passed: a huge block need not be read to its end.
 		if (atoms > STRUCTURE_LIMITS.maxAtoms || bonds > STRUCTURE_LIMITS.maxBonds) break;
 	}
 	const size = { atoms, bonds, heavyAtoms };
 	checkSize(size, where);
+	if (unknown) checkMolfileSymbol(unknown.symbol, unknown.atom, where);
 	return size;
+}
+
+/**
+ * Counts and checks any structure text as the reader sees it (the first word of a SMILES, the
+ * first record of an SDF), e.g. `structureSize('CCO').heavyAtoms` → 3. Throws StructureError.
+ */
+export function structureSize(text: string): StructureSize {
+	const format = detectFormat(text);
+	if (format === 'smiles') {
+		const offset = text.length - text.trimStart().length;
+		return smilesSize(text.trim().split(/\s+/)[0]!, offset);
+	}
+	if (format === 'sdf') return molfileSize(splitSdf(text)[0]!.molfile, { record: 1 });
+	return molfileSize(text);
 }
 
 function checkMolfileSymbol(symbol: string, atom: number, where: Where): void {
