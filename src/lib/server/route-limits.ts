@@ -9,11 +9,23 @@ import { structureSize } from '../chem/structure-size';
 import type { RouteDocument } from '../route/document';
 import { ApiFailure } from './api';
 
-/** Throws ApiFailure 422 `structure_too_large` naming the intermediate, or `route_too_large`. */
+/**
+ * Throws ApiFailure 422 `structure_too_large` naming the intermediate, `route_too_large`, or
+ * `invalid_structure` for a NUL character.
+ */
 export function assertRouteWithinLimits(document: RouteDocument): void {
 	let heavyAtoms = 0;
 	for (const node of document.intermediates) {
 		if (node.structure.trim() === '') continue;
+		// No structure format has a NUL, and databases refuse it in text (SQLite cuts the SQL).
+		if (node.structure.includes('\u0000')) {
+			throw new ApiFailure(
+				422,
+				'invalid_structure',
+				`Intermediate “${node.label ?? node.id}” holds a NUL character, which no structure format allows.`,
+				{ intermediate: node.id }
+			);
+		}
 		try {
 			heavyAtoms += structureSize(node.structure).heavyAtoms;
 		} catch (caught) {
