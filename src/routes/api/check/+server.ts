@@ -3,9 +3,10 @@ import { z } from 'zod';
 import type { RequestHandler } from './$types';
 import { apiHandler, readJson } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
+import { STRUCTURE_LIMITS } from '$lib/chem/limits';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 
-const MAX_STRUCTURE = 1024 * 1024;
+const MAX_STRUCTURE = STRUCTURE_LIMITS.maxTextBytes;
 const checkBody = z.object({
 	steps: z
 		.array(
