@@ -114,13 +114,11 @@ function substrateUnits(
 		const shift = offset;
 		if (from.length > 1)
 			offset += readStructure(tree.byId.get(node)!.structure, MAP_ONLY).molecule.getAllAtoms();
-		return units
-			.get(node)!
-			.map((unit, index) => ({
-				unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) },
-				node,
-				index
-			}));
+		return units.get(node)!.map((unit, index) => ({
+			unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) },
+			node,
+			index
+		}));
 	});
 }
 
