@@ -1,11 +1,12 @@
 // The pool's settings, from the environment with documented defaults (README, "Configuration").
 import { availableParallelism } from 'node:os';
 
+/** A whole number from the environment: unset or not a number → the default; below `min` → `min`. */
 function fromEnv(name: string, fallback: number, min: number): number {
 	const raw = process.env[name];
 	if (raw === undefined || raw.trim() === '') return fallback;
 	const value = Number(raw);
-	return Number.isFinite(value) && value >= min ? Math.floor(value) : fallback;
+	return Number.isFinite(value) ? Math.max(min, Math.floor(value)) : fallback;
 }
 
 export type ChemPoolConfig = {
@@ -28,6 +29,7 @@ export function chemPoolConfig(): ChemPoolConfig {
 		budgetMs: fromEnv('ORTHOGON_CHEM_BUDGET_MS', 10_000, 1),
 		pageBudgetMs: fromEnv('ORTHOGON_CHEM_PAGE_BUDGET_MS', 4_000, 1),
 		maxQueue: fromEnv('ORTHOGON_CHEM_QUEUE', 64, 0),
-		workerHeapMb: fromEnv('ORTHOGON_CHEM_WORKER_HEAP_MB', 512, 64)
+		// At least 256 MB: openchemlib, the rule table and the caches (CACHE_BYTES) need about 150.
+		workerHeapMb: fromEnv('ORTHOGON_CHEM_WORKER_HEAP_MB', 512, 256)
 	};
 }
