@@ -1,9 +1,10 @@
 import { sveltekit } from '@sveltejs/kit/vite';
 import tailwindcss from '@tailwindcss/vite';
 import { defineConfig } from 'vitest/config';
+import { chemWorker } from './scripts/vite-chem-worker.js';
 
 export default defineConfig({
-	plugins: [tailwindcss(), sveltekit()],
+	plugins: [tailwindcss(), chemWorker(), sveltekit()],
 	build: {
 		rolldownOptions: {
 			checks: { pluginTimings: false },

@@ -151,6 +151,23 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 		}
 	});
 
+	it('answers a rank that cannot name a plan before planning (issue 10, defect 11)', async () => {
+		const routeId = await storedRoute();
+		// With a 1 ms chemistry budget any planning would answer 503; the rank is refused first.
+		process.env.ORTHOGON_CHEM_BUDGET_MS = '1';
+		try {
+			for (const rank of ['0', 'first', '1e3']) {
+				const refused = await call(savePlan, 'chemist', { routeId, rank }, { version: 1 });
+				expect(refused.status, rank).toBe(404);
+				expect(refused.body.error).toMatchObject({
+					code: 'no_such_plan',
+					message: expect.stringMatching(/numbered 1, 2, 3/)
+				});
+			}
+		} finally {
+			delete process.env.ORTHOGON_CHEM_BUDGET_MS;
+		}
+	});
 	it('says why when the route has no plan at all', async () => {
 		const routeId = await storedRoute(hopeless());
 		const answer = await call(savePlan, 'chemist', { routeId, rank: '1' }, { version: 1 });

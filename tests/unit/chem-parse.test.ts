@@ -99,7 +99,7 @@ describe('bad input', () => {
 	});
 	it('an unbalanced parenthesis and an unknown element point at their character', () => {
 		expect(failure('CC)C')).toMatchObject({ code: 'smiles_syntax', position: 2 });
-		expect(failure('C[Xq]C')).toMatchObject({ code: 'smiles_syntax' });
+		expect(failure('C[Xq]C')).toMatchObject({ code: 'unknown_element', position: 1 });
 		expect(failure('  CC)C').position).toBe(4); // leading blanks are counted
 	});
 	it('a pentavalent carbon names the atom and its position', () => {

@@ -1,8 +1,9 @@
 import { isHttpError, isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { load } from '../../src/routes/routes/[routeId]/+page.server';
+import { readFileSync } from 'node:fs';
 import { createRoute } from '../../src/lib/server/services/routes';
-import type { Project } from '../../src/lib/server/db';
+import { Intermediate, Route, type Project } from '../../src/lib/server/db';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
@@ -50,6 +51,47 @@ describe('the route map page load', () => {
 			expect(analyses['CC(=O)CCC(=O)OC']!.groups.map((g) => g.id)).toContain('ketone');
 			// An unreadable stored structure is left to its node to explain, not a failed page.
 			expect(analyses['C1CC']).toBeUndefined();
+		}
+	});
+
+	it('opens a route stored before the limits with the killer molfile in it (issue 10, defect 1)', async () => {
+		// Written straight to the database, as an older version let a save do.
+		const killer = readFileSync(
+			new URL('../fixtures/declares-99999999-atoms-v3000.mol', import.meta.url),
+			'utf8'
+		);
+		const old = await Route.create({
+			projectId: project.id,
+			name: 'Stored before the limits',
+			createdById: f.people.chemist.id,
+			archivedAt: null
+		});
+		for (const [ordinal, structure] of [killer, 'OCCO'].entries()) {
+			await Intermediate.create({
+				routeId: old.id,
+				key: `n${ordinal}`,
+				label: null,
+				structure,
+				canonical: null,
+				positionX: null,
+				positionY: null,
+				ordinal
+			});
+		}
+		const data = await open('viewer', old.id);
+		const analyses = data.analyses as Record<string, { svg?: string }>;
+		expect(analyses['OCCO']!.svg).toContain('<svg');
+		expect(analyses[killer]).toBeUndefined(); // its node asks /api/analyze and shows the 422
+	});
+
+	it('comes without drawings, not late, when the page budget runs out', async () => {
+		process.env.ORTHOGON_CHEM_PAGE_BUDGET_MS = '1';
+		try {
+			const data = await open('viewer');
+			expect(data.analyses).toEqual({});
+			expect((data.document as { name: string }).name).toBe('OG-2031 page');
+		} finally {
+			delete process.env.ORTHOGON_CHEM_PAGE_BUDGET_MS;
 		}
 	});
 

@@ -1,9 +1,15 @@
 // One error type for every way a structure can fail to be read, so callers (the API, imports,
 // scripts) can answer with a code and a sentence instead of a toolkit's stack trace.
 
+import type { StructureLimit } from './limits';
+
+export type StructureLimitPassed = { name: StructureLimit; max: number; found: number };
+
 export type StructureErrorCode =
 	| 'empty'
 	| 'too_large'
+	| 'unknown_element'
+	| 'bad_isotope'
 	| 'unknown_format'
 	| 'smiles_syntax'
 	| 'unclosed_ring'
@@ -22,14 +28,21 @@ export class StructureError extends Error {
 	readonly atom?: number;
 	/** 1-based SDF record, when the text held several. */
 	readonly record?: number;
+	/** For `too_large`: which limit of STRUCTURE_LIMITS was passed, its value and what was found. */
+	readonly limit?: StructureLimitPassed;
 
-	constructor(code: StructureErrorCode, message: string, where: { position?: number; atom?: number; record?: number } = {}) {
+	constructor(
+		code: StructureErrorCode,
+		message: string,
+		where: { position?: number; atom?: number; record?: number; limit?: StructureLimitPassed } = {}
+	) {
 		super(message);
 		this.name = 'StructureError';
 		this.code = code;
 		if (where.position !== undefined) this.position = where.position;
 		if (where.atom !== undefined) this.atom = where.atom;
 		if (where.record !== undefined) this.record = where.record;
+		if (where.limit !== undefined) this.limit = where.limit;
 	}
 }
 

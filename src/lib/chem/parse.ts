@@ -6,6 +6,7 @@ import { StructureError, toolkitMessage } from './errors';
 import { detectFormat, type StructureFormat } from './format';
 import { splitSdf } from './sdf';
 import { smilesAtoms } from './smiles-atoms';
+import { molfileSize, smilesSize } from './structure-size';
 import { validateMolecule } from './validate';
 
 export type ReadOptions = {
@@ -57,6 +58,8 @@ function readSmiles(text: string, options: ReadOptions): ParsedStructure {
 	// SMILES may carry a title after whitespace; the structure is the first word.
 	const smiles = text.trim().split(/\s+/)[0]!;
 	checkSmilesLexically(smiles, offset);
+	// Atom counts and symbols before openchemlib: a 10,000-atom SMILES takes it minutes.
+	smilesSize(smiles, offset);
 	let molecule: Molecule;
 	try {
 		molecule = options.coordinates
@@ -70,7 +73,9 @@ function readSmiles(text: string, options: ReadOptions): ParsedStructure {
 	const warnings = validateMolecule(molecule, {
 		describeAtom: (atom) => {
 			const token = tokens[atom];
-			return token ? `atom ${atom + 1} (${token.symbol}, at character ${offset + token.position + 1})` : `atom ${atom + 1}`;
+			return token
+				? `atom ${atom + 1} (${token.symbol}, at character ${offset + token.position + 1})`
+				: `atom ${atom + 1}`;
 		},
 		positionOf: (atom) => (tokens[atom] ? offset + tokens[atom]!.position : undefined),
 		wasWrittenAromatic: (atom) => tokens[atom]?.aromatic ?? false,
@@ -85,12 +90,18 @@ function readSmiles(text: string, options: ReadOptions): ParsedStructure {
  */
 function checkSmilesLexically(smiles: string, offset: number): void {
 	const at = (i: number, what: string) =>
-		new StructureError('smiles_syntax', `The SMILES cannot be read: ${what} at character ${offset + i + 1}.`, { position: offset + i });
+		new StructureError(
+			'smiles_syntax',
+			`The SMILES cannot be read: ${what} at character ${offset + i + 1}.`,
+			{ position: offset + i }
+		);
 	const open: number[] = [];
 	for (let i = 0; i < smiles.length; i++) {
 		const ch = smiles[i]!;
-		if (!/[A-Za-z0-9@+\-[\]()=#$:/\\.%*~]/.test(ch)) throw at(i, `unexpected character ${JSON.stringify(ch)}`);
-		if (ch === '%' && !/^%\d\d/.test(smiles.slice(i))) throw at(i, 'a "%" ring bond needs two digits');
+		if (!/[A-Za-z0-9@+\-[\]()=#$:/\\.%*~]/.test(ch))
+			throw at(i, `unexpected character ${JSON.stringify(ch)}`);
+		if (ch === '%' && !/^%\d\d/.test(smiles.slice(i)))
+			throw at(i, 'a "%" ring bond needs two digits');
 		if (ch === '(') open.push(i);
 		if (ch === ')' && open.pop() === undefined) throw at(i, 'a ")" without its "("');
 	}
@@ -104,23 +115,45 @@ function smilesError(caught: unknown, offset: number): StructureError {
 	const where = position === undefined ? '' : ` at character ${position + 1}`;
 	const what = message.replace(/[;,.]?\s*position\s*:?\s*\d+\.?/i, '').trim();
 	if (/ring closure/i.test(what)) {
-		return new StructureError('unclosed_ring', `The SMILES has a ring bond that is never closed (${what})${where}.`, { position });
+		return new StructureError(
+			'unclosed_ring',
+			`The SMILES has a ring bond that is never closed (${what})${where}.`,
+			{ position }
+		);
 	}
-	return new StructureError('smiles_syntax', `The SMILES cannot be read: ${what}${where}.`, { position });
+	return new StructureError('smiles_syntax', `The SMILES cannot be read: ${what}${where}.`, {
+		position
+	});
 }
 
-function readMolfile(text: string, format: StructureFormat, record?: number, options: ReadOptions = {}): ParsedStructure {
+function readMolfile(
+	text: string,
+	format: StructureFormat,
+	record?: number,
+	options: ReadOptions = {}
+): ParsedStructure {
 	const inRecord = record === undefined ? '' : ` (SDF record ${record})`;
 	const declared = declaredAtomCount(text);
 	if (declared === null) {
-		throw new StructureError('molfile_syntax', `The molfile counts line is missing or malformed${inRecord}.`, { record });
+		throw new StructureError(
+			'molfile_syntax',
+			`The molfile counts line is missing or malformed${inRecord}.`,
+			{ record }
+		);
 	}
-	if (declared === 0) throw new StructureError('empty', `The molfile holds no atoms${inRecord}.`, { record });
+	if (declared === 0)
+		throw new StructureError('empty', `The molfile holds no atoms${inRecord}.`, { record });
+	// Declared and actual counts before openchemlib, which allocates whatever the counts line says.
+	molfileSize(text, { record });
 	let molecule: Molecule;
 	try {
 		molecule = Molecule.fromMolfile(text);
 	} catch (caught) {
-		throw new StructureError('molfile_syntax', `The molfile cannot be read${inRecord}: ${toolkitMessage(caught)}.`, { record });
+		throw new StructureError(
+			'molfile_syntax',
+			`The molfile cannot be read${inRecord}: ${toolkitMessage(caught)}.`,
+			{ record }
+		);
 	}
 	if (molecule.getAllAtoms() !== declared) {
 		throw new StructureError(

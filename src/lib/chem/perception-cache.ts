@@ -2,8 +2,9 @@
 //   - the canonical key (ID code), where it is computed anyway (the API returns it): the same
 //     molecule written another way hits, and atom indices are translated through the canonical
 //     numbering, so each caller gets indices of its own input;
-//   - the exact text, for callers that re-perceive the same intermediates again and again (the
-//     route map re-checks every structure on each edit): a hit costs a map lookup, with no parse.
+//   - the text, for callers that re-perceive the same intermediates again and again (the route
+//     map re-checks every structure on each edit): a hit costs a digest and a lookup, no parse.
+// Both are keyed by a SHA-256 digest and bounded by bytes (cache.ts, CACHE_BYTES).
 
 import type { Molecule } from 'openchemlib';
 import { LruCache } from './cache';
@@ -11,9 +12,8 @@ import { readStructure } from './parse';
 import { perceive, type Perception } from './perceive';
 import type { CanonicalForm } from './properties';
 
-const CAPACITY = 2000;
-const byCanonicalKey = new LruCache<string, Perception>(CAPACITY);
-const byText = new LruCache<string, Perception>(CAPACITY);
+const byCanonicalKey = new LruCache<Perception>('perceptionByKey');
+const byText = new LruCache<Perception>('perceptionByText');
 
 /** Perception via the canonical-key cache, e.g. `perceiveWithKey(mol, canonicalForm(mol))`. */
 export function perceiveWithKey(molecule: Molecule, form: CanonicalForm): Perception {
@@ -32,6 +32,14 @@ export function perceiveText(text: string): Perception {
 	const fresh = perceive(readStructure(text, { warnings: false }).molecule);
 	byText.set(text, fresh);
 	return fresh;
+}
+
+/** Entries and bytes held by the two caches (tests and benchmarks), e.g. `perceptionCacheUse().byText.bytes`. */
+export function perceptionCacheUse() {
+	return {
+		byText: { entries: byText.size, bytes: byText.bytes },
+		byKey: { entries: byCanonicalKey.size, bytes: byCanonicalKey.bytes }
+	};
 }
 
 /** Empties both caches (tests and benchmarks measure cold runs with it), e.g. `clearPerceptionCache()`. */

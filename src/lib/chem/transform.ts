@@ -22,7 +22,8 @@ type Compiled = { reactant: Molecule; mapped: number[]; maxMapNo: number; parts:
 
 const smartsParser = new SmilesParser({ smartsMode: 'smarts', createSmartsWarnings: true });
 const compiledCache = new Map<string, Compiled>();
-const reactionCache = new LruCache<string, Reaction>(200);
+// A Reaction is an openchemlib object (no JSON); the SMARTS of a PG install are small.
+const reactionCache = new LruCache<Reaction>('combinedReactions', undefined, () => 16 * 1024);
 
 /** Parses one reaction SMARTS and checks its shape, e.g. `compileTransform('[C:1]=O>>[C:1]1OCCO1')`. */
 export function compileTransform(smarts: string): Compiled {

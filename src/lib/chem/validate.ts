@@ -4,6 +4,7 @@
 // charge (a salt drawn without its counter-ion) and atoms too close in a drawing are warnings.
 
 import { Molecule } from 'openchemlib';
+import { isPlausibleMassNumber } from './elements';
 import { StructureError, toolkitMessage } from './errors';
 
 export type AtomDescriber = {
@@ -27,6 +28,14 @@ export function validateMolecule(molecule: Molecule, where: AtomDescriber): stri
 				{ atom, position: where.positionOf(atom), record: where.record }
 			);
 		}
+		const massNumber = molecule.getAtomMass(atom);
+		if (massNumber !== 0 && !isPlausibleMassNumber(molecule.getAtomicNo(atom), massNumber)) {
+			throw new StructureError(
+				'bad_isotope',
+				`The mass number ${massNumber} at ${where.describeAtom(atom)} is not one an isotope of ${molecule.getAtomLabel(atom)} can have.`,
+				{ atom, position: where.positionOf(atom), record: where.record }
+			);
+		}
 		// openchemlib leaves a radical where it could not place alternating double bonds.
 		if (where.wasWrittenAromatic(atom) && molecule.getAtomRadical(atom) !== 0) {
 			throw new StructureError(
@@ -45,7 +54,11 @@ export function validateMolecule(molecule: Molecule, where: AtomDescriber): stri
 	} catch (caught) {
 		const message = toolkitMessage(caught);
 		if (/valence/i.test(message)) {
-			throw new StructureError('bad_valence', `The structure has an atom with too many bonds (${message}).`, { record: where.record });
+			throw new StructureError(
+				'bad_valence',
+				`The structure has an atom with too many bonds (${message}).`,
+				{ record: where.record }
+			);
 		}
 		warnings.push(message);
 	}

@@ -2,19 +2,14 @@
 // message for its failures (a toast) except where the page shows the failure in place: a save
 // conflict (the conflict notice) and an unreadable structure (the field's error).
 
+import type { Analysis } from '$lib/chem/analyze';
 import type { RouteDocument } from '$lib/route/document';
 import type { CheckedPlanAnswer as PlanAnswer } from '$lib/rules/plan';
 import { callApi, jsonBody, type ApiResult } from './api';
 import type { Toasts } from './toasts.svelte';
 
-export type Analysis = {
-	formula: string;
-	mass: number;
-	canonical: string;
-	groups: { id: string; atoms: number[] }[];
-	protectingGroups: { id: string; atoms: number[]; masks: string }[];
-	svg?: string;
-};
+// The /api/analyze answer, as the chemistry core defines it (a type only: no chemistry code ships).
+export type { Analysis };
 
 export type Clash = {
 	severity: 'clash' | 'caution';

@@ -1,11 +1,12 @@
 import { z } from 'zod';
+import { STRUCTURE_LIMITS } from '../chem/limits';
 
 /**
  * The route document: the one exchange form of a route (import, export, API, planner).
  * Ids are strings chosen by the client and only need to be unique within their list.
  */
 export const MAX_ROUTE_NODES = 500;
-export const MAX_STRUCTURE_CHARS = 1024 * 1024;
+export const MAX_STRUCTURE_CHARS = STRUCTURE_LIMITS.maxTextBytes;
 
 const clientId = z
 	.string()

@@ -28,6 +28,23 @@ export function apiError(status: number, code: string, message: string, details?
 }
 
 /**
+ * An answer decided below the handler (a refused structure, a busy chemistry pool), thrown so
+ * services need not know about responses; `apiHandler` sends it in the API error shape.
+ */
+export class ApiFailure extends Error {
+	constructor(
+		readonly status: number,
+		readonly code: string,
+		message: string,
+		readonly details?: unknown,
+		readonly headers: Record<string, string> = {}
+	) {
+		super(message);
+		this.name = 'ApiFailure';
+	}
+}
+
+/**
  * Wraps a `+server.ts` handler so guards' `error()` throws, invalid bodies and surprises all
  * leave as the API error shape. Unknown errors are logged here and never echoed to the client.
  */
@@ -41,6 +58,11 @@ export function apiHandler<E extends RequestEvent = RequestEvent>(
 			if (isHttpError(caught)) {
 				const { status, body } = caught;
 				return apiError(status, body.code ?? codeForStatus(status), body.message, body.details);
+			}
+			if (caught instanceof ApiFailure) {
+				const response = apiError(caught.status, caught.code, caught.message, caught.details);
+				for (const [name, value] of Object.entries(caught.headers)) response.headers.set(name, value);
+				return response;
 			}
 			if (caught instanceof ZodError) {
 				return apiError(400, 'invalid_body', 'The request body does not have the expected fields.', caught.issues);

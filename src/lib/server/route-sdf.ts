@@ -16,7 +16,9 @@ export class RouteFileError extends Error {
 	constructor(
 		message: string,
 		readonly record?: number,
-		readonly details?: unknown
+		readonly details?: unknown,
+		/** Why a structure was refused (a StructureErrorCode such as `too_large`), when one was. */
+		readonly reason?: string
 	) {
 		super(message);
 		this.name = 'RouteFileError';
@@ -120,7 +122,7 @@ export function routeFromSdf(text: string, name: string): RouteDocument {
 		records = splitSdf(text);
 	} catch (caught) {
 		if (!isStructureError(caught)) throw caught;
-		throw new RouteFileError(caught.message, caught.record);
+		throw new RouteFileError(caught.message, caught.record, undefined, caught.code);
 	}
 	const intermediates: RouteIntermediate[] = [];
 	const steps: RouteStep[] = [];
@@ -135,7 +137,12 @@ export function routeFromSdf(text: string, name: string): RouteDocument {
 			readStructure(record.molfile);
 		} catch (caught) {
 			if (!isStructureError(caught)) throw caught;
-			throw new RouteFileError(`Record ${n} (“${id}”) cannot be read: ${caught.message}`, n);
+			throw new RouteFileError(
+				`Record ${n} (“${id}”) cannot be read: ${caught.message}`,
+				n,
+				undefined,
+				caught.code
+			);
 		}
 		if (seen.has(id))
 			throw new RouteFileError(
@@ -191,7 +198,9 @@ export function routeFromJson(text: string, fallbackName: string): RouteDocument
 			if (!isStructureError(caught)) throw caught;
 			throw new RouteFileError(
 				`Intermediate ${index + 1} (“${node.id}”) cannot be read: ${caught.message}`,
-				index + 1
+				index + 1,
+				undefined,
+				caught.code
 			);
 		}
 	});

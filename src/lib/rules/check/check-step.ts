@@ -22,12 +22,16 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	const explicit = step.conditions ?? [];
 	const unknown = explicit.filter((id) => !rules.conditionIds.includes(id));
 	if (unknown.length) throw new UnknownConditionError(step.id, unknown, rules.conditionIds);
-	const classified = step.reagents?.trim() ? rules.classify(step.reagents) : { conditions: [], matched: [], hazards: [] };
+	const classified = step.reagents?.trim()
+		? rules.classify(step.reagents)
+		: { conditions: [], matched: [], hazards: [] };
 	const conditions = [...new Set([...explicit, ...classified.conditions])];
 
 	const origins = new Map<string, Origin>();
 	for (const id of conditions) {
-		const reagents = classified.matched.filter((m) => m.conditions.includes(id)).map((m) => m.reagent);
+		const reagents = classified.matched
+			.filter((m) => m.conditions.includes(id))
+			.map((m) => m.reagent);
 		origins.set(id, { reagents: [...new Set(reagents)], explicit: explicit.includes(id) });
 	}
 
@@ -46,7 +50,13 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 				subject: pg.id,
 				condition,
 				atoms: pg.atoms,
-				message: protectingGroupMessage(rules, pg.id, condition, { ...answer, rating: answer.rating }, origin)
+				message: protectingGroupMessage(
+					rules,
+					pg.id,
+					condition,
+					{ ...answer, rating: answer.rating },
+					origin
+				)
 			});
 		}
 		for (const group of change.freeGroups.filter(standsBy)) {
@@ -69,8 +79,12 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 const standsBy = (site: Site) => site.survives;
 
 function readTransformation(stepId: string, substrates: string[], product: string) {
-	for (const [role, texts] of [['substrate', substrates], ['product', [product]]] as const) {
-		if (texts.length === 0 || texts.some((t) => !t.trim())) throw new StepStructureError(stepId, role, 'it is empty.');
+	for (const [role, texts] of [
+		['substrate', substrates],
+		['product', [product]]
+	] as const) {
+		if (texts.length === 0 || texts.some((t) => !t.trim()))
+			throw new StepStructureError(stepId, role, 'it is empty.');
 	}
 	try {
 		return transformation(substrates, product);
@@ -78,7 +92,7 @@ function readTransformation(stepId: string, substrates: string[], product: strin
 		if (!isStructureError(caught)) throw caught;
 		// Tell which side failed: the substrate texts are read first.
 		const role = substrates.some((text) => failsToRead(text)) ? 'substrate' : 'product';
-		throw new StepStructureError(stepId, role, caught.message);
+		throw new StepStructureError(stepId, role, caught.message, caught.code);
 	}
 }
 

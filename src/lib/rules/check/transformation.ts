@@ -12,7 +12,7 @@ import { perceiveText } from '../../chem/perception-cache';
 export type Site = { id: string; atoms: number[]; survives: boolean };
 export type Transformation = { protectingGroups: Site[]; freeGroups: Site[]; mapped: boolean };
 
-const cache = new LruCache<string, Transformation>(1000);
+const cache = new LruCache<Transformation>('transformations');
 // The texts were read and checked when perceived; mapping needs the atoms, not the warnings.
 const MAP_ONLY = { warnings: false } as const;
 
@@ -37,7 +37,10 @@ export function transformation(substrates: string[], product: string): Transform
 	// changed. Only when some but not all instances of an id vanish must the atoms be mapped
 	// (the maximum common substructure is the slow part) to tell which one reacted.
 	const map = ambiguous(before, after)
-		? mapAtoms(combined ?? readStructure(substrates[0]!, MAP_ONLY).molecule, readStructure(product, MAP_ONLY).molecule)
+		? mapAtoms(
+				combined ?? readStructure(substrates[0]!, MAP_ONLY).molecule,
+				readStructure(product, MAP_ONLY).molecule
+			)
 		: null;
 	const result = compare(before, after, map);
 	cache.set(key, result);
@@ -54,19 +57,30 @@ function ambiguous(before: Perception, after: Perception): boolean {
 		[counts(before.protectingGroups), counts(after.protectingGroups)],
 		[counts(before.groups), counts(after.groups)]
 	];
-	return pairs.some(([was, now]) => [...was].some(([id, n]) => (now.get(id) ?? 0) > 0 && (now.get(id) ?? 0) < n));
+	return pairs.some(([was, now]) =>
+		[...was].some(([id, n]) => (now.get(id) ?? 0) > 0 && (now.get(id) ?? 0) < n)
+	);
 }
 
 function compare(before: Perception, after: Perception, map: AtomMap | null): Transformation {
 	// A group whose key atom sits inside a protecting group is masked, not free.
-	const covered = new Set(before.protectingGroups.flatMap((pg) => [...pg.atoms, ...pg.maskedAtoms]));
+	const covered = new Set(
+		before.protectingGroups.flatMap((pg) => [...pg.atoms, ...pg.maskedAtoms])
+	);
 	const free = before.groups.filter((g) => !covered.has(g.key));
-	const survives = (id: string, atoms: number[], productSites: { id: string; atoms: number[] }[], countBefore: number) => {
+	const survives = (
+		id: string,
+		atoms: number[],
+		productSites: { id: string; atoms: number[] }[],
+		countBefore: number
+	) => {
 		if (!map) return productSites.filter((s) => s.id === id).length >= countBefore;
 		const mapped = atoms.map((a) => map.get(a));
 		if (mapped.some((a) => a === undefined)) return false;
 		const wanted = [...(mapped as number[])].sort((a, b) => a - b).join(',');
-		return productSites.some((s) => s.id === id && [...s.atoms].sort((a, b) => a - b).join(',') === wanted);
+		return productSites.some(
+			(s) => s.id === id && [...s.atoms].sort((a, b) => a - b).join(',') === wanted
+		);
 	};
 	const count = (sites: { id: string }[], id: string) => sites.filter((s) => s.id === id).length;
 	return {
@@ -74,7 +88,12 @@ function compare(before: Perception, after: Perception, map: AtomMap | null): Tr
 		protectingGroups: before.protectingGroups.map((pg) => ({
 			id: pg.id,
 			atoms: pg.atoms,
-			survives: survives(pg.id, pg.atoms, after.protectingGroups, count(before.protectingGroups, pg.id))
+			survives: survives(
+				pg.id,
+				pg.atoms,
+				after.protectingGroups,
+				count(before.protectingGroups, pg.id)
+			)
 		})),
 		freeGroups: free.map((g) => ({
 			id: g.id,

@@ -35,9 +35,16 @@ export type CheckRules = {
 	conditionIds: readonly string[];
 	conditionLabel(conditionId: string): string;
 	/** `reagents`: canonical names of the reagents that brought the condition (may refine the rating). */
-	stability(pgId: string, conditionId: string, reagents: readonly string[]): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string };
+	stability(
+		pgId: string,
+		conditionId: string,
+		reagents: readonly string[]
+	): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string };
 	protectingGroupLabel(pgId: string): string;
-	reactivity(groupId: string, conditionId: string): { rating: 'reacts' | 'caution'; reason: string; source: string } | null;
+	reactivity(
+		groupId: string,
+		conditionId: string
+	): { rating: 'reacts' | 'caution'; reason: string; source: string } | null;
 	groupLabel(groupId: string): string;
 	classify(reagents: string): { conditions: string[]; matched: ReagentMatch[]; hazards: Hazard[] };
 };
@@ -48,7 +55,9 @@ export class UnknownConditionError extends Error {
 		readonly unknown: string[],
 		valid: readonly string[]
 	) {
-		super(`Step "${stepId}" names unknown condition ${unknown.map((u) => `"${u}"`).join(', ')}; valid ids are: ${valid.join(', ')}.`);
+		super(
+			`Step "${stepId}" names unknown condition ${unknown.map((u) => `"${u}"`).join(', ')}; valid ids are: ${valid.join(', ')}.`
+		);
 	}
 }
 
@@ -56,7 +65,9 @@ export class StepStructureError extends Error {
 	constructor(
 		readonly stepId: string,
 		readonly role: 'substrate' | 'product',
-		detail: string
+		detail: string,
+		/** Why the structure was refused (a StructureErrorCode such as `too_large`), when known. */
+		readonly reason?: string
 	) {
 		super(`Step "${stepId}": the ${role} cannot be read — ${detail}`);
 	}

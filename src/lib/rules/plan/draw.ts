@@ -20,13 +20,16 @@ export function protectedStructure(structure: string, masks: Mask[]): string {
 	// (a newline means a molfile, which may carry stereo in its coordinates and wedges).
 	const stereo = /[@/\\\n]/.test(structure);
 	const molecule = readStructure(structure, { stereo, warnings: false }).molecule;
-	const smiles = applyTransforms(molecule, masks.map((m) => ({ smarts: m.transform, atoms: m.atoms }))).toIsomericSmiles();
+	const smiles = applyTransforms(
+		molecule,
+		masks.map((m) => ({ smarts: m.transform, atoms: m.atoms }))
+	).toIsomericSmiles();
 	drawn.set(cacheKey, smiles);
 	return smiles;
 }
 
 // The ranked plans share most of their protected intermediates; draw each one once.
-const drawn = new LruCache<string, string>(2000);
+const drawn = new LruCache<string>('drawnStructures');
 
 /** Forgets drawn structures (benchmarks, tests). */
 export function clearDrawCache(): void {

@@ -29,7 +29,9 @@ export function freeUnits(structure: string): Unit[] {
 		units.push({ id: diol.id, atoms: diol.atoms, members: [diol.id] });
 	}
 	for (const group of free.filter((g) => !DIOLS.includes(g.id))) {
-		const diol = units.find((u) => DIOLS.includes(u.id) && u.atoms.includes(group.key) && group.id.startsWith('alcohol'));
+		const diol = units.find(
+			(u) => DIOLS.includes(u.id) && u.atoms.includes(group.key) && group.id.startsWith('alcohol')
+		);
 		if (diol) diol.members.push(group.id);
 		else units.push({ id: group.id, atoms: group.atoms, members: [group.id] });
 	}
@@ -42,22 +44,36 @@ export function freeUnits(structure: string): Unit[] {
  * went where, and decides alone when some but not all instances of an id vanish. A convergent
  * step's substrates are read as one molecule, atoms numbered in the order of `substrates`.
  */
-function follow(before: Unit[], after: Unit[], substrates: string[], product: string): (number | undefined)[] {
+function follow(
+	before: Unit[],
+	after: Unit[],
+	substrates: string[],
+	product: string
+): (number | undefined)[] {
 	const cacheKey = `${substrates.join('\u0000')}\u0001${product}`;
 	const stored = followed.get(cacheKey);
 	if (stored) return stored;
 	const count = (list: Unit[], id: string) => list.filter((u) => u.id === id).length;
 	const ids = [...new Set(before.map((u) => u.id))];
-	const needsMap = ids.some((id) => count(after, id) > 0 && !(count(before, id) === 1 && count(after, id) === 1));
-	const substrate = () => (substrates.length === 1 ? readStructure(substrates[0]!, MAP_ONLY).molecule : combinedMolecule(substrates));
-	const map: AtomMap | null = needsMap ? mapAtoms(substrate(), readStructure(product, MAP_ONLY).molecule) : null;
+	const needsMap = ids.some(
+		(id) => count(after, id) > 0 && !(count(before, id) === 1 && count(after, id) === 1)
+	);
+	const substrate = () =>
+		substrates.length === 1
+			? readStructure(substrates[0]!, MAP_ONLY).molecule
+			: combinedMolecule(substrates);
+	const map: AtomMap | null = needsMap
+		? mapAtoms(substrate(), readStructure(product, MAP_ONLY).molecule)
+		: null;
 	const result: (number | undefined)[] = before.map(() => undefined);
 	const used = new Set<number>();
 	before.forEach((unit, i) => {
 		if (!map) return;
 		const mapped = unit.atoms.map((a) => map.get(a));
 		if (mapped.some((a) => a === undefined)) return;
-		const index = after.findIndex((u, j) => !used.has(j) && u.id === unit.id && key(u.atoms) === key(mapped as number[]));
+		const index = after.findIndex(
+			(u, j) => !used.has(j) && u.id === unit.id && key(u.atoms) === key(mapped as number[])
+		);
 		if (index >= 0) {
 			result[i] = index;
 			used.add(index);
@@ -80,7 +96,7 @@ function follow(before: Unit[], after: Unit[], substrates: string[], product: st
 }
 
 // Routes are planned again after every edit: keep the (slow) mappings of unchanged steps.
-const followed = new LruCache<string, (number | undefined)[]>(500);
+const followed = new LruCache<(number | undefined)[]>('followedSteps');
 
 /** Forgets cached step mappings (benchmarks, tests). */
 export function clearFollowCache(): void {
@@ -88,12 +104,21 @@ export function clearFollowCache(): void {
 }
 
 /** The free units of a step's substrates as one list, atoms numbered as in `combinedMolecule`. */
-function substrateUnits(tree: RouteTree, from: string[], units: Map<string, Unit[]>): { unit: Unit; node: string; index: number }[] {
+function substrateUnits(
+	tree: RouteTree,
+	from: string[],
+	units: Map<string, Unit[]>
+): { unit: Unit; node: string; index: number }[] {
 	let offset = 0;
 	return from.flatMap((node) => {
 		const shift = offset;
-		if (from.length > 1) offset += readStructure(tree.byId.get(node)!.structure, MAP_ONLY).molecule.getAllAtoms();
-		return units.get(node)!.map((unit, index) => ({ unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) }, node, index }));
+		if (from.length > 1)
+			offset += readStructure(tree.byId.get(node)!.structure, MAP_ONLY).molecule.getAllAtoms();
+		return units.get(node)!.map((unit, index) => ({
+			unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) },
+			node,
+			index
+		}));
 	});
 }
 
@@ -105,15 +130,30 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 	// The track each unit of an intermediate continues, by intermediate id.
 	const open = new Map<string, Track[]>();
 	const track = (node: string, unit: Unit): Track => {
-		const made: Track = { unit, path: [node], atomsAt: new Map([[node, unit.atoms]]), end: tree.target };
+		const made: Track = {
+			unit,
+			path: [node],
+			atomsAt: new Map([[node, unit.atoms]]),
+			end: tree.target
+		};
 		tracks.push(made);
 		return made;
 	};
-	for (const node of tree.nodes) if (!tree.made.has(node.id)) open.set(node.id, units.get(node.id)!.map((unit) => track(node.id, unit)));
+	for (const node of tree.nodes)
+		if (!tree.made.has(node.id))
+			open.set(
+				node.id,
+				units.get(node.id)!.map((unit) => track(node.id, unit))
+			);
 	for (const step of tree.steps) {
 		const before = substrateUnits(tree, step.from, units);
 		const after = units.get(step.to)!;
-		const next = follow(before.map((b) => b.unit), after, step.from.map((id) => tree.byId.get(id)!.structure), tree.byId.get(step.to)!.structure);
+		const next = follow(
+			before.map((b) => b.unit),
+			after,
+			step.from.map((id) => tree.byId.get(id)!.structure),
+			tree.byId.get(step.to)!.structure
+		);
 		const continued: (Track | undefined)[] = after.map(() => undefined);
 		next.forEach((target, i) => {
 			const followed = open.get(before[i]!.node)![before[i]!.index]!;
@@ -126,7 +166,10 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 			continued[target] = followed;
 		});
 		// Units the step makes (or that no substrate unit became) start their own tracks here.
-		open.set(step.to, after.map((unit, i) => continued[i] ?? track(step.to, unit)));
+		open.set(
+			step.to,
+			after.map((unit, i) => continued[i] ?? track(step.to, unit))
+		);
 	}
 	const needs: Need[] = [];
 	for (const track of tracks) {
@@ -136,7 +179,11 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 		track.path.forEach((node, i) => {
 			if (i >= track.path.indexOf(track.end)) return;
 			const step = tree.next.get(node)!;
-			const hit = tree.conditions.get(step.id)!.some((c) => track.unit.members.some((g) => rules.reactivity(g, c.id)?.rating === 'reacts'));
+			const hit = tree.conditions
+				.get(step.id)!
+				.some((c) =>
+					track.unit.members.some((g) => rules.reactivity(g, c.id)?.rating === 'reacts')
+				);
 			if (!hit) return;
 			attackedAt.push(step.id);
 			installAt ??= node;
@@ -144,7 +191,17 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 		});
 		if (!installAt) continue;
 		const path = track.path.slice(0, track.path.indexOf(track.end) + 1);
-		needs.push({ group: track.unit.id, members: track.unit.members, atoms: track.unit.atoms, path, atomsAt: track.atomsAt, installAt, freeAt: track.end, removableFrom, attackedAt });
+		needs.push({
+			group: track.unit.id,
+			members: track.unit.members,
+			atoms: track.unit.atoms,
+			path,
+			atomsAt: track.atomsAt,
+			installAt,
+			freeAt: track.end,
+			removableFrom,
+			attackedAt
+		});
 	}
 	return needs;
 }

@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { RouteDocument } from '../../route/document';
 import type { SessionUser } from '../../types';
 import { dbReady, Intermediate, PlannedRoute, Project, Route, Step } from '../db';
+import { assertRouteWithinLimits } from '../route-limits';
 import { recordActivity } from './activity';
 
 export type RouteSummary = { id: string; name: string; status: string; version: number; updatedAt: Date; archived: boolean };
@@ -70,6 +71,7 @@ export type PlanOrigin = { from: Route; rank: number };
 
 /** Creates a route from a validated route document; `origin` links a saved plan to its route. */
 export async function createRoute(actor: SessionUser, project: Project, doc: RouteDocument, origin?: PlanOrigin): Promise<Route> {
+	assertRouteWithinLimits(doc);
 	await dbReady();
 	return Route.sequelize!.transaction(async (transaction) => {
 		const route = await Route.create(
@@ -174,6 +176,7 @@ export async function saveRoute(
 	doc: RouteDocument,
 	teamId: string
 ): Promise<number> {
+	assertRouteWithinLimits(doc);
 	await dbReady();
 	return Route.sequelize!.transaction(async (transaction) => {
 		// The version test and the increment are one UPDATE, so two saves cannot both win.

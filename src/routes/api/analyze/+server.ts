@@ -1,9 +1,9 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
-import { apiError, apiHandler, readJson } from '$lib/server/api';
+import { apiHandler, readJson } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
-import { analyzeStructure, isStructureError } from '$lib/chem';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 
 const analyzeBodySchema = z.object({
 	structure: z.string(),
@@ -16,17 +16,14 @@ const analyzeBodySchema = z.object({
  * `POST /api/analyze` `{ structure, depict?, highlight? }` →
  * `200 { formula, mass, canonical, groups, protectingGroups, svg? }`; a structure that cannot be
  * read or is chemically impossible → 422 `invalid_structure` with the reason (and SMILES position)
- * in `details`; a highlight naming nothing in the structure → 422 `invalid_highlight`.
+ * in `details`; over a limit of STRUCTURE_LIMITS → 422 `structure_too_large`; a highlight naming
+ * nothing in the structure → 422 `invalid_highlight`. Runs on the chemistry pool (503 when it is
+ * busy or the time budget runs out). Over the drawing limit, `svg` is left out and
+ * `drawingSkipped` says why.
  */
 export const POST: RequestHandler = apiHandler(async (event) => {
 	requireUser(event);
 	const body = await readJson(event, analyzeBodySchema);
-	try {
-		return json(analyzeStructure(body.structure, { depict: body.depict, highlight: body.highlight }));
-	} catch (caught) {
-		if (!isStructureError(caught)) throw caught;
-		const code = caught.code === 'invalid_highlight' ? 'invalid_highlight' : 'invalid_structure';
-		const { position, atom, record } = caught;
-		return apiError(422, code, caught.message, { reason: caught.code, position, atom, record });
-	}
+	const options = { depict: body.depict, highlight: body.highlight };
+	return json(await runChemistry('analyze', { text: body.structure, options }));
 });

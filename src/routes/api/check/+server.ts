@@ -1,12 +1,12 @@
-import { error, json } from '@sveltejs/kit';
+import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
 import { apiHandler, readJson } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
-import { checkSteps } from '$lib/server/services/check';
-import { StepStructureError, UnknownConditionError } from '$lib/rules/check';
+import { STRUCTURE_LIMITS } from '$lib/chem/limits';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 
-const MAX_STRUCTURE = 1024 * 1024;
+const MAX_STRUCTURE = STRUCTURE_LIMITS.maxTextBytes;
 const checkBody = z.object({
 	steps: z
 		.array(
@@ -26,11 +26,6 @@ const checkBody = z.object({
 export const POST: RequestHandler = apiHandler(async (event) => {
 	requireUser(event);
 	const { steps } = await readJson(event, checkBody);
-	try {
-		return json({ steps: checkSteps(steps) });
-	} catch (caught) {
-		if (caught instanceof UnknownConditionError) error(422, { code: 'unknown_condition', message: caught.message });
-		if (caught instanceof StepStructureError) error(422, { code: 'invalid_structure', message: caught.message });
-		throw caught;
-	}
+	// Unknown condition ids and unreadable structures come back as 422 from the pool.
+	return json({ steps: await runChemistry('checkSteps', { steps }) });
 });

@@ -3,12 +3,12 @@ import { z } from 'zod';
 import type { RequestHandler } from './$types';
 import { apiHandler, readJson } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
-import { planRouteDocument } from '$lib/server/services/plan';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
 
 /** `POST /api/plan` with a route document → `{ plans: [...], unsolved? }`. */
 export const POST: RequestHandler = apiHandler(async (event) => {
 	requireUser(event);
 	const document = routeDocumentOr422(await readJson(event, z.unknown()));
-	return json(planRouteDocument(document));
+	return json(await runChemistry('plan', { document }));
 });

@@ -1,7 +1,10 @@
 import type { PageServerLoad } from './$types';
 import { can } from '$lib/policy';
-import { analyzeStructure, type Analysis } from '$lib/chem';
+import type { Analysis } from '$lib/chem';
+import { ApiFailure } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
+import { chemPoolConfig } from '$lib/server/chem-pool/config';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocument, routeLinks } from '$lib/server/services/routes';
 
 export const load: PageServerLoad = async (event) => {
@@ -11,16 +14,19 @@ export const load: PageServerLoad = async (event) => {
 		'project.read'
 	);
 	const [document, links] = await Promise.all([routeDocument(route), routeLinks(route)]);
-	// Depictions come with the page, so a reload shows the drawings without a request per node;
-	// a structure that cannot be read is left out and its node shows the reason instead.
-	const analyses: Record<string, Analysis> = {};
-	for (const node of document.intermediates) {
-		if (analyses[node.structure]) continue;
-		try {
-			analyses[node.structure] = analyzeStructure(node.structure, { depict: true });
-		} catch {
-			// The node asks /api/analyze itself and shows that answer's message.
-		}
+	// Depictions come with the page, so a reload shows the drawings without a request per node.
+	// They are drawn on the chemistry pool within the page budget; when it runs out (or the pool
+	// is busy) the page comes without them and each node asks /api/analyze itself, showing that
+	// answer (or its message). A structure that cannot be read is left out the same way.
+	let analyses: Record<string, Analysis> = {};
+	try {
+		analyses = await runChemistry(
+			'drawRoute',
+			{ structures: document.intermediates.map((node) => node.structure) },
+			{ budgetMs: chemPoolConfig().pageBudgetMs }
+		);
+	} catch (caught) {
+		if (!(caught instanceof ApiFailure)) throw caught;
 	}
 	return {
 		route: {

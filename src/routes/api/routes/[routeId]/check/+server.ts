@@ -2,11 +2,12 @@ import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { apiHandler } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
-import { checkRouteDocument } from '$lib/server/services/check';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocument } from '$lib/server/services/routes';
 
 /** `GET /api/routes/{id}/check` → the `/api/check` answer for every step of the stored route. */
 export const GET: RequestHandler = apiHandler(async (event) => {
 	const { route } = await requireRouteAction(event, event.params.routeId, 'project.read');
-	return json({ steps: checkRouteDocument(await routeDocument(route)) });
+	const document = await routeDocument(route);
+	return json({ steps: await runChemistry('checkRoute', { document }) });
 });

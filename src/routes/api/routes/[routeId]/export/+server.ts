@@ -1,7 +1,7 @@
 import type { RequestHandler } from './$types';
-import { apiError, apiHandler } from '$lib/server/api';
+import { ApiFailure, apiError, apiHandler } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
-import { RouteFileError, routeToSdf } from '$lib/server/route-sdf';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocument } from '$lib/server/services/routes';
 
 /** A file name from the route name: letters, digits and dashes only, so every OS accepts it. */
@@ -24,9 +24,15 @@ export const GET: RequestHandler = apiHandler(async (event) => {
 	const document = await routeDocument(route);
 	let body: string;
 	try {
-		body = format === 'sdf' ? routeToSdf(document) : JSON.stringify(document, null, 2);
+		body =
+			format === 'sdf'
+				? await runChemistry('exportSdf', { document })
+				: JSON.stringify(document, null, 2);
 	} catch (caught) {
-		if (caught instanceof RouteFileError) return apiError(422, 'unexportable', caught.message);
+		// A structure that cannot be written as SDF; a busy or slow pool keeps its own answer.
+		if (caught instanceof ApiFailure && caught.status === 422) {
+			return apiError(422, 'unexportable', caught.message);
+		}
 		throw caught;
 	}
 	return new Response(body, {

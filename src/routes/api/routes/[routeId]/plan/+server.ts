@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { apiHandler } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
-import { planRouteDocument } from '$lib/server/services/plan';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
 import { routeDocument } from '$lib/server/services/routes';
 
@@ -10,5 +10,6 @@ import { routeDocument } from '$lib/server/services/routes';
 export const POST: RequestHandler = apiHandler(async (event) => {
 	const { route } = await requireRouteAction(event, event.params.routeId, 'project.read');
 	// A stored route may be half drawn; it is validated like a posted one.
-	return json(planRouteDocument(routeDocumentOr422(await routeDocument(route))));
+	const document = routeDocumentOr422(await routeDocument(route));
+	return json(await runChemistry('plan', { document }));
 });

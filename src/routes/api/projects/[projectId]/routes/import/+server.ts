@@ -2,12 +2,8 @@ import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { apiError, apiHandler } from '$lib/server/api';
 import { requireProjectAction } from '$lib/server/auth/guards';
-import {
-	MAX_IMPORT_BYTES,
-	RouteFileError,
-	routeFromJson,
-	routeFromSdf
-} from '$lib/server/route-sdf';
+import { runChemistry } from '$lib/server/chem-pool/pool';
+import { MAX_IMPORT_BYTES } from '$lib/server/route-sdf';
 import { createRoute } from '$lib/server/services/routes';
 
 /** JSON by its name or its first character; SDF and molfiles by name or an `M  END` line. */
@@ -51,17 +47,11 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	}
 	const given = String(form?.get('name') ?? '').trim();
 	const name = (given || file.name.replace(/\.[^.]+$/, '') || 'Imported route').slice(0, 120);
-	try {
-		const document = kind === 'json' ? routeFromJson(text, name) : routeFromSdf(text, name);
-		const route = await createRoute(user, project, given ? { ...document, name } : document);
-		return json({ id: route.id }, { status: 201 });
-	} catch (caught) {
-		if (!(caught instanceof RouteFileError)) throw caught;
-		return apiError(422, 'invalid_import', caught.message, {
-			record: caught.record,
-			problems: caught.details
-		});
-	}
+	// Reading every structure is chemistry: it runs on the pool, and a refused file answers 422
+	// (`invalid_import`, or `structure_too_large` naming the record) with nothing stored.
+	const document = await runChemistry(kind === 'json' ? 'importJson' : 'importSdf', { text, name });
+	const route = await createRoute(user, project, given ? { ...document, name } : document);
+	return json({ id: route.id }, { status: 201 });
 });
 
 function tooLarge() {

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { RequestHandler } from './$types';
 import { apiError, apiHandler, readJson } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
-import { planRouteDocument } from '$lib/server/services/plan';
+import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
 import {
 	createRoute,
@@ -29,6 +29,13 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	);
 	const rank = /^[1-9][0-9]{0,2}$/.test(event.params.rank) ? Number(event.params.rank) : null;
 	const { version } = await readJson(event, body);
+	// A rank that cannot name a plan is answered before any planning work.
+	if (rank === null) {
+		error(404, {
+			code: 'no_such_plan',
+			message: `There is no plan “${event.params.rank}”: plans are numbered 1, 2, 3, …`
+		});
+	}
 	let stored;
 	try {
 		stored = await routeDocumentAt(route, version);
@@ -41,7 +48,7 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 			{ currentVersion: caught.currentVersion }
 		);
 	}
-	const answer = planRouteDocument(routeDocumentOr422(stored));
+	const answer = await runChemistry('plan', { document: routeDocumentOr422(stored) });
 	const plan = answer.plans.find((p) => p.rank === rank);
 	if (!plan) {
 		const why =

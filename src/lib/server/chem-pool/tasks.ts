@@ -1,0 +1,38 @@
+// Every chemistry call the server makes off the request thread, by name. The worker runs these;
+// the request side (pool.ts) only knows their types. Each is a pure function of its input.
+
+import { analyzeStructure, type Analysis, type AnalyzeOptions } from '../../chem/analyze';
+import type { StepToCheck } from '../../rules/check/types';
+import type { RouteDocument } from '../../route/document';
+import { routeFromJson, routeFromSdf, routeToSdf } from '../route-sdf';
+import { checkRouteDocument, checkSteps } from '../services/check';
+import { planRouteDocument } from '../services/plan';
+
+export const chemistryTasks = {
+	analyze: ({ text, options }: { text: string; options: AnalyzeOptions }) =>
+		analyzeStructure(text, options),
+	checkSteps: ({ steps }: { steps: StepToCheck[] }) => checkSteps(steps),
+	checkRoute: ({ document }: { document: RouteDocument }) => checkRouteDocument(document),
+	plan: ({ document }: { document: RouteDocument }) => planRouteDocument(document),
+	importSdf: ({ text, name }: { text: string; name: string }) => routeFromSdf(text, name),
+	importJson: ({ text, name }: { text: string; name: string }) => routeFromJson(text, name),
+	exportSdf: ({ document }: { document: RouteDocument }) => routeToSdf(document),
+	/** Drawings of a route's intermediates; an unreadable one is left out (its node asks itself). */
+	drawRoute: ({ structures }: { structures: string[] }) => {
+		const analyses: Record<string, Analysis> = {};
+		for (const structure of structures) {
+			if (analyses[structure]) continue;
+			try {
+				analyses[structure] = analyzeStructure(structure, { depict: true });
+			} catch {
+				// The node asks /api/analyze itself and shows that answer's message.
+			}
+		}
+		return analyses;
+	}
+};
+
+export type ChemistryTasks = typeof chemistryTasks;
+export type ChemistryTask = keyof ChemistryTasks;
+export type TaskInput<K extends ChemistryTask> = Parameters<ChemistryTasks[K]>[0];
+export type TaskOutput<K extends ChemistryTask> = ReturnType<ChemistryTasks[K]>;
