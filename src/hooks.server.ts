@@ -3,6 +3,7 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { codeForStatus } from '$lib/server/api';
 import { authHandle } from '$lib/server/auth/auth';
 import { dbReady } from '$lib/server/db';
+import { DatabaseBusy, isDatabaseBusy } from '$lib/server/db/write-queue';
 import { seedDemoIfEmpty } from '$lib/server/db/seed-demo';
 import { shapeApiErrors } from '$lib/server/hooks/api-errors';
 import { guardPages } from '$lib/server/hooks/guard-pages';
@@ -26,6 +27,8 @@ export const handle = sequence(
 );
 
 export const handleError: HandleServerError = ({ error, status, message }) => {
+	// Pages cannot change the status here; they at least say what happened and that it may pass.
+	if (isDatabaseBusy(error)) return { message: new DatabaseBusy().message, code: 'database-busy' };
 	if (status !== 404) console.error('[server]', error);
 	return { message: status === 404 ? 'Page not found.' : message, code: codeForStatus(status) };
 };
