@@ -6,6 +6,8 @@ import { dbReady } from '$lib/server/db';
 import { DatabaseBusy, isDatabaseBusy } from '$lib/server/db/write-queue';
 import { seedDemoIfEmpty } from '$lib/server/db/seed-demo';
 import { shapeApiErrors } from '$lib/server/hooks/api-errors';
+import { closeAfterUnreadBody } from '$lib/server/hooks/early-answers';
+import { checkFormOrigin } from '$lib/server/hooks/form-origin';
 import { guardPages } from '$lib/server/hooks/guard-pages';
 import { identify } from '$lib/server/hooks/identify';
 import { securityHeaders } from '$lib/server/hooks/security-headers';
@@ -18,7 +20,9 @@ export const init: ServerInit = async () => {
 
 // One handle per concern, in the order a request meets them; each lives in $lib/server/hooks.
 export const handle = sequence(
+	closeAfterUnreadBody,
 	securityHeaders,
+	checkFormOrigin,
 	limitScriptedSignIn,
 	authHandle,
 	identify,
