@@ -7,6 +7,7 @@ import { DatabaseBusy, isDatabaseBusy } from '$lib/server/db/write-queue';
 import { seedDemoIfEmpty } from '$lib/server/db/seed-demo';
 import { shapeApiErrors } from '$lib/server/hooks/api-errors';
 import { closeAfterUnreadBody } from '$lib/server/hooks/early-answers';
+import { requireFormBodies } from '$lib/server/hooks/form-bodies';
 import { checkFormOrigin } from '$lib/server/hooks/form-origin';
 import { guardPages } from '$lib/server/hooks/guard-pages';
 import { identify } from '$lib/server/hooks/identify';
@@ -23,6 +24,7 @@ export const handle = sequence(
 	closeAfterUnreadBody,
 	securityHeaders,
 	checkFormOrigin,
+	requireFormBodies,
 	limitScriptedSignIn,
 	authHandle,
 	identify,

@@ -56,7 +56,11 @@ describe('lock errors at the API', () => {
 	it('recognises lock errors of both dialects', () => {
 		expect(isDatabaseBusy(new DatabaseBusy())).toBe(true);
 		expect(
-			isDatabaseBusy(new TimeoutError(Object.assign(new Error('busy'), { code: 'SQLITE_BUSY' })))
+			isDatabaseBusy(
+				new TimeoutError(
+					Object.assign(new Error('busy'), { code: 'SQLITE_BUSY', sql: 'BEGIN IMMEDIATE' })
+				)
+			)
 		).toBe(true);
 		expect(isDatabaseBusy({ original: { code: '40P01' } })).toBe(true);
 		expect(isDatabaseBusy(new Error('other'))).toBe(false);
@@ -65,7 +69,10 @@ describe('lock errors at the API', () => {
 	it('answers 503 with retry-after and a message, never 500', async () => {
 		const handler = apiHandler(async () => {
 			throw new TimeoutError(
-				Object.assign(new Error('SQLITE_BUSY: database is locked'), { code: 'SQLITE_BUSY' })
+				Object.assign(new Error('SQLITE_BUSY: database is locked'), {
+					code: 'SQLITE_BUSY',
+					sql: 'BEGIN IMMEDIATE'
+				})
 			);
 		});
 		const response = await handler(fakeEvent({ path: '/api/x' }));

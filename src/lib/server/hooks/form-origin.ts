@@ -10,6 +10,12 @@ const FORM_CONTENT_TYPES = [
 ];
 const UNSAFE_METHODS = ['POST', 'PUT', 'PATCH', 'DELETE'];
 
+/** The request's media type without parameters, e.g. `multipart/form-data`; '' when absent. */
+export function mediaType(request: Request): string {
+	const [type = ''] = (request.headers.get('content-type') ?? '').split(';');
+	return type.trim().toLowerCase();
+}
+
 function isBearer(event: RequestEvent): boolean {
 	return /^bearer\s/i.test(event.request.headers.get('authorization') ?? '');
 }
@@ -17,8 +23,7 @@ function isBearer(event: RequestEvent): boolean {
 /** True when the request could be a cross-site form post riding on the session cookie. */
 export function needsSameOrigin(event: RequestEvent): boolean {
 	if (!UNSAFE_METHODS.includes(event.request.method) || isBearer(event)) return false;
-	const type = (event.request.headers.get('content-type') ?? '').split(';')[0].trim().toLowerCase();
-	return FORM_CONTENT_TYPES.includes(type);
+	return FORM_CONTENT_TYPES.includes(mediaType(event.request));
 }
 
 /**

@@ -35,7 +35,7 @@ export const SECURITY_HEADERS: Record<string, string> = {
 export const securityHeaders: Handle = async ({ event, resolve }) => {
 	const response = await resolve(event);
 	const private_ = Boolean(event.locals.user) || isApiPath(event.url);
-	const caching =
+	const caching: Record<string, string> =
 		private_ && !response.headers.has('cache-control') ? { 'cache-control': 'no-store' } : {};
 	return withHeaders(response, { ...SECURITY_HEADERS, ...caching });
 };
