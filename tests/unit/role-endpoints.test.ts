@@ -1,8 +1,12 @@
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join, relative, sep } from 'node:path';
 import { isHttpError, isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+import {
+	concrete,
+	discoverEndpoints,
+	routeModule,
+	type Endpoint as Entry
+} from '../factories/route-tree';
 import { createRoute } from '../../src/lib/server/services/routes';
 
 // Every endpoint method and form action in the route tree, run as every kind of caller. The list
@@ -71,43 +75,12 @@ const EXPECTED: Record<string, Expectation> = {
 	'action default /set-password/[token]': AUTH_JS
 };
 
-type Entry = { key: string; file: string; route: string; kind: 'method' | 'action'; name: string };
-const HTTP_EXPORTS = /export const (GET|POST|PUT|PATCH|DELETE|fallback)\b/g;
-
-function routeFiles(dir: string, out: string[] = []): string[] {
-	for (const name of readdirSync(dir)) {
-		const path = join(dir, name);
-		if (statSync(path).isDirectory()) routeFiles(path, out);
-		else if (name === '+server.ts' || name === '+page.server.ts') out.push(path);
-	}
-	return out;
-}
-
-async function discover(): Promise<Entry[]> {
-	const entries: Entry[] = [];
-	for (const file of routeFiles('src/routes')) {
-		const route = '/' + relative('src/routes', file).split(sep).slice(0, -1).join('/');
-		if (file.endsWith('+server.ts')) {
-			for (const [, name] of readFileSync(file, 'utf8').matchAll(HTTP_EXPORTS)) {
-				entries.push({ key: `${name} ${route}`, file, route, kind: 'method', name: name! });
-			}
-		} else {
-			const module = (await import(/* @vite-ignore */ '../../' + file.split(sep).join('/'))) as {
-				actions?: Record<string, unknown>;
-			};
-			for (const name of Object.keys(module.actions ?? {}))
-				entries.push({ key: `action ${name} ${route}`, file, route, kind: 'action', name });
-		}
-	}
-	return entries;
-}
-
 let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
 let entries: Entry[] = [];
 beforeAll(async () => {
 	await freshDatabase();
 	f = await makeTeamWithEveryRole();
-	entries = await discover();
+	entries = await discoverEndpoints();
 }, 120_000);
 
 async function outcomeOf(run: () => unknown): Promise<Outcome> {
@@ -144,16 +117,9 @@ async function call(entry: Entry, caller: Caller): Promise<Outcome> {
 		rank: '1',
 		token: 'x'
 	};
-	const params = Object.fromEntries(
-		[...entry.route.matchAll(/\[(\w+)(?:=\w+)?\]/g)].map(([, name]) => [name!, ids[name!] ?? 'x'])
-	);
+	const { params, path } = concrete(entry.route, ids);
 	const user = caller === 'anonymous' ? null : f.people[caller];
-	const module = (await import(
-		/* @vite-ignore */ '../../' + entry.file.split(sep).join('/')
-	)) as Record<string, unknown>;
-	const path = entry.route
-		.replace(/\[\.\.\.\w+\]/, 'nowhere')
-		.replace(/\[(\w+)(?:=\w+)?\]/g, (_, name: string) => params[name]!);
+	const module = await routeModule(entry.file);
 	if (entry.kind === 'method') {
 		const body =
 			entry.key === 'POST /api/projects'
