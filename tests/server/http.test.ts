@@ -1,6 +1,8 @@
+import { createHash, randomUUID } from 'node:crypto';
 import { Agent, request as httpRequest } from 'node:http';
 import path from 'node:path';
 import fs from 'node:fs';
+import sqlite3 from 'sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { freePort, signInCookie, startBuiltServer } from '../../scripts/built-server.js';
 
@@ -8,8 +10,8 @@ import { freePort, signInCookie, startBuiltServer } from '../../scripts/built-se
 type Server = Awaited<ReturnType<typeof startBuiltServer>>;
 let server: Server;
 let cookie = '';
+const dataDir = path.resolve('test-results/http-data');
 beforeAll(async () => {
-	const dataDir = path.resolve('test-results/http-data');
 	fs.rmSync(dataDir, { recursive: true, force: true });
 	server = await startBuiltServer({ dataDir, port: await freePort() });
 	cookie = await signInCookie(server.origin, 'chemist@example.com');
@@ -48,7 +50,60 @@ function send(
 	});
 }
 
+/** An API token for a demo person, written straight into the database (as the Account page would). */
+function insertApiToken(email: string): Promise<string> {
+	const token = `ogt_${randomUUID().replace(/-/g, '')}`;
+	const now = new Date().toISOString().replace('T', ' ').replace('Z', ' +00:00');
+	return new Promise((resolve, reject) => {
+		const db = new sqlite3.Database(path.join(dataDir, 'orthogon.db'), (err) => {
+			if (err) return reject(err);
+			db.run(
+				`INSERT INTO api_tokens (id, userId, label, tokenHash, prefix, createdAt, updatedAt)
+				 SELECT ?, id, 'server test', ?, ?, ?, ? FROM users WHERE email = ?`,
+				[
+					randomUUID(),
+					createHash('sha256').update(token).digest('hex'),
+					token.slice(0, 10),
+					now,
+					now,
+					email
+				],
+				(error) => {
+					db.close();
+					if (error) reject(error);
+					else resolve(token);
+				}
+			);
+		});
+	});
+}
+
 describe('the built server', () => {
+	it('takes a Bearer-token multipart import without Origin, and refuses the same post on a cookie', async () => {
+		const token = await insertApiToken('chemist@example.com');
+		const listed = await fetch(`${server.origin}/api/projects`, {
+			headers: { authorization: `Bearer ${token}` }
+		});
+		const projectId = (await listed.json()).projects[0].id;
+		const upload = () => {
+			const form = new FormData();
+			const doc = { name: 'Imported', intermediates: [{ id: 'a', structure: 'CCO' }], steps: [] };
+			form.set('file', new Blob([JSON.stringify(doc)], { type: 'application/json' }), 'route.json');
+			return form;
+		};
+		const url = `${server.origin}/api/projects/${projectId}/routes/import`;
+		// Node's fetch sends no Origin header, like curl or a script.
+		const byToken = await fetch(url, {
+			method: 'POST',
+			headers: { authorization: `Bearer ${token}` },
+			body: upload()
+		});
+		expect(byToken.status).toBe(201);
+		const byCookie = await fetch(url, { method: 'POST', headers: { cookie }, body: upload() });
+		expect(byCookie.status).toBe(403);
+		expect((await byCookie.json()).error.code).toBe('cross-site');
+	});
+
 	it('answers a 413 before reading a large body and the keep-alive client goes on working', async () => {
 		const agent = new Agent({ keepAlive: true, maxSockets: 1 });
 		const big = Buffer.alloc(3 * 1024 * 1024, 0x20);
