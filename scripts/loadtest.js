@@ -2,7 +2,7 @@
 // `npm run loadtest`: the built server on loopback with a fresh demo database, under load from
 // autocannon. Prints requests/s, p50/p99 latency and errors per kind of request; the p99 of a
 // cheap read while uncached checks run; and 20 parallel saves of different routes. Stops by
-// itself (about two minutes). LOADTEST_SECONDS shortens the main phase for a quick look.
+// itself (about two and a half minutes). LOADTEST_SECONDS shortens the main phase for a quick look.
 import autocannon from 'autocannon';
 import fs from 'node:fs';
 import path from 'node:path';
@@ -121,6 +121,10 @@ try {
 		`Orthogon load test on ${origin} (loopback, fresh demo database, Node ${process.version})`
 	);
 
+	console.log('\n0. The cheap read alone (5 connections, 10 s), for comparison');
+	const alone = await load({ ...base, path: '/api/projects', connections: 5, seconds: 10 });
+	console.table([row('read GET /api/projects, nothing else running', alone)]);
+
 	console.log(
 		`\n1. ${SECONDS} s at ${CONNECTIONS} connections: reads (30), uncached checks (10), plans (10)`
 	);
@@ -167,7 +171,27 @@ try {
 		`p99 of the cheap read: ${p99} ms (goal ≤ ${GOALS.cheapReadP99Ms} ms): ${p99 <= GOALS.cheapReadP99Ms ? 'met' : 'NOT met'}`
 	);
 
-	console.log('\n3. 20 parallel saves of 20 different routes');
+	console.log(
+		'\n3. The cheap read (5 connections) while routes are written (10 connections), 15 s'
+	);
+	const writeBody = () => JSON.stringify(routeDocument(`Load write ${++serial}`));
+	const [readDuringWrites, writes] = await Promise.all([
+		load({ ...base, path: '/api/projects', connections: 5, seconds: 15 }),
+		load({
+			...base,
+			path: `/api/projects/${projectId}/routes`,
+			method: 'POST',
+			body: writeBody,
+			connections: 10,
+			seconds: 15
+		})
+	]);
+	console.table([
+		row('read while writes run', readDuringWrites),
+		row('route creates meanwhile', writes)
+	]);
+
+	console.log('\n4. 20 parallel saves of 20 different routes');
 	const saves = await parallelSaves(origin, cookie, projectId);
 	const ok = saves.statuses.filter((s) => s === 200).length;
 	const met = ok === 20 && saves.ms <= GOALS.parallelSavesMs;
