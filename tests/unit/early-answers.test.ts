@@ -3,7 +3,7 @@ import type { AddressInfo } from 'node:net';
 import type { Handle, RequestEvent } from '@sveltejs/kit';
 import { getRequest, setResponse } from '@sveltejs/kit/node';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeAfterUnreadBody } from '../../src/lib/server/hooks/early-answers';
+import { closeAfterUnreadBody, markBodyRead } from '../../src/lib/server/hooks/early-answers';
 
 // A real Node server with keep-alive, reading requests the way adapter-node does, whose endpoint
 // refuses uploads from their Content-Length alone, like readJson's 413, without reading them.
@@ -72,6 +72,26 @@ describe('early answers on a keep-alive connection', () => {
 		expect(refused).toEqual({ status: 413, connection: 'close' });
 		expect(await send(port, agent, 'GET')).toEqual({ status: 200, connection: 'keep-alive' });
 		agent.destroy();
+	});
+
+	it('keeps the connection open for a body read in full through a clone (the form-body check)', async () => {
+		const readViaClone: Handle = (input) =>
+			closeAfterUnreadBody({
+				...input,
+				resolve: async (event) => {
+					await event.request.clone().text();
+					markBodyRead(event.request);
+					return Response.json({ ok: true });
+				}
+			});
+		const cloneServer = serve(readViaClone);
+		await new Promise<void>((resolve) => cloneServer.listen(0, '127.0.0.1', resolve));
+		const clonePort = (cloneServer.address() as AddressInfo).port;
+		const agent = new Agent({ keepAlive: true, maxSockets: 1 });
+		const answer = await send(clonePort, agent, 'POST', Buffer.from('name=Kittiwake'));
+		expect(answer).toEqual({ status: 200, connection: 'keep-alive' });
+		agent.destroy();
+		await new Promise<void>((resolve) => cloneServer.close(() => resolve()));
 	});
 
 	it('keeps the connection open when nothing was left unread', async () => {

@@ -1,6 +1,14 @@
 import type { Handle } from '@sveltejs/kit';
 import { withHeaders } from './response-headers';
 
+/** Requests whose body a hook read through a clone: the connection holds nothing more of them. */
+const readThroughClone = new WeakSet<Request>();
+
+/** Marks a request whose body was read in full through `request.clone()`. */
+export function markBodyRead(request: Request): void {
+	readThroughClone.add(request);
+}
+
 function hasBody(request: Request): boolean {
 	const length = request.headers.get('content-length');
 	return request.body !== null && (length === null || Number(length) > 0);
@@ -15,8 +23,9 @@ function hasBody(request: Request): boolean {
  */
 export const closeAfterUnreadBody: Handle = async ({ event, resolve }) => {
 	const response = await resolve(event);
-	const unread = hasBody(event.request) && !event.request.bodyUsed;
+	const { request } = event;
+	const unread = hasBody(request) && !request.bodyUsed && !readThroughClone.has(request);
 	// A 413 raised while reading (BODY_SIZE_LIMIT) also stops mid-body.
-	if (!unread && !(response.status === 413 && hasBody(event.request))) return response;
+	if (!unread && !(response.status === 413 && hasBody(request))) return response;
 	return withHeaders(response, { connection: 'close' });
 };

@@ -1,5 +1,6 @@
 import type { Handle } from '@sveltejs/kit';
 import { isApiPath } from '../auth/guards';
+import { markBodyRead } from './early-answers';
 import { mediaType } from './form-origin';
 
 /** What a page's form action (and Auth.js's form endpoints) can read. */
@@ -32,7 +33,10 @@ export const requireFormBodies: Handle = async ({ event, resolve }) => {
 	const problem = await request
 		.clone()
 		.formData()
-		.then(() => null)
+		.then(() => {
+			markBodyRead(request);
+			return null;
+		})
 		.catch((caught: unknown) =>
 			(caught as { status?: number })?.status === 413
 				? plain(413, 'The form is larger than the server accepts; nothing was changed.')
