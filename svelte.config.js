@@ -23,6 +23,9 @@ const config = {
 				'frame-ancestors': ['none']
 			}
 		},
+		// Kit's origin check also refused Bearer-token API scripts (no Origin header); the same
+		// check, for cookie sessions only, is src/lib/server/hooks/form-origin.ts.
+		csrf: { trustedOrigins: ['*'] },
 		alias: { $rules: 'rules' }
 	}
 };

@@ -1,5 +1,6 @@
 #!/usr/bin/env node
-// `npm test`: type checks, unit and reference tests, then browser tests against the built app.
+// `npm test`: type checks, unit and reference tests, then tests against the built server (crash
+// safety) and browser tests against the built app.
 // Every stage runs even when an earlier one fails, and the last line sums up all of them.
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
@@ -61,6 +62,14 @@ if (!postgres.url) {
 	if (twoServers.failed) failures.push('two-server test');
 }
 postgres.stop?.();
+
+console.log('\n▶ Built-server tests (crash safety: SIGKILL during writes)');
+const serverReport = `${REPORTS}/server-tests.json`;
+fs.rmSync(serverReport, { force: true });
+if (!run('npx', ['vitest', 'run', '-c', 'tests/server/vitest.config.ts', '--reporter=default', '--reporter=json', `--outputFile.json=${serverReport}`])) {
+	failures.push('built-server tests');
+}
+count(serverReport, (r) => [r.numPassedTests, r.numFailedTests + (r.numFailedTestSuites ?? 0)]);
 
 console.log('\n▶ Browser tests (Playwright on Debian Chromium)');
 const e2eReport = path.resolve(REPORTS, 'playwright.json');

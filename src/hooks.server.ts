@@ -3,8 +3,12 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { codeForStatus } from '$lib/server/api';
 import { authHandle } from '$lib/server/auth/auth';
 import { dbReady } from '$lib/server/db';
+import { DatabaseBusy, isDatabaseBusy } from '$lib/server/db/write-queue';
 import { seedDemoIfEmpty } from '$lib/server/db/seed-demo';
 import { shapeApiErrors } from '$lib/server/hooks/api-errors';
+import { closeAfterUnreadBody } from '$lib/server/hooks/early-answers';
+import { requireFormBodies } from '$lib/server/hooks/form-bodies';
+import { checkFormOrigin } from '$lib/server/hooks/form-origin';
 import { guardPages } from '$lib/server/hooks/guard-pages';
 import { identify } from '$lib/server/hooks/identify';
 import { securityHeaders } from '$lib/server/hooks/security-headers';
@@ -17,7 +21,10 @@ export const init: ServerInit = async () => {
 
 // One handle per concern, in the order a request meets them; each lives in $lib/server/hooks.
 export const handle = sequence(
+	closeAfterUnreadBody,
 	securityHeaders,
+	checkFormOrigin,
+	requireFormBodies,
 	limitScriptedSignIn,
 	authHandle,
 	identify,
@@ -26,6 +33,8 @@ export const handle = sequence(
 );
 
 export const handleError: HandleServerError = ({ error, status, message }) => {
+	// Pages cannot change the status here; they at least say what happened and that it may pass.
+	if (isDatabaseBusy(error)) return { message: new DatabaseBusy().message, code: 'database-busy' };
 	if (status !== 404) console.error('[server]', error);
 	return { message: status === 404 ? 'Page not found.' : message, code: codeForStatus(status) };
 };

@@ -3,14 +3,14 @@
 // layout and leaf nodes, and every chunk they import statically — gzip-compressed, as a browser
 // receives it. Dynamic imports (the structure editor, dagre) are listed apart, since they load later.
 //
-//   node scripts/start.js --build-only && node scripts/bench/bundle-size.js [/routes/[routeId]] [--max-kb 300]
+//   node scripts/start.js --build-only && node scripts/bench/bundle-size.js [/routes/[routeId=uuid]] [--max-kb 300]
 
 import fs from 'node:fs';
 import path from 'node:path';
 import zlib from 'node:zlib';
 
 const args = process.argv.slice(2);
-const routeId = args.find((a) => a.startsWith('/')) ?? '/routes/[routeId]';
+const routeId = args.find((a) => a.startsWith('/')) ?? '/routes/[routeId=uuid]';
 const maxAt = args.indexOf('--max-kb');
 const maxKb = maxAt >= 0 ? Number(args[maxAt + 1]) : 300;
 

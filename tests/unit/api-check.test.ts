@@ -1,8 +1,8 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { POST as checkPost } from '../../src/routes/api/check/+server';
-import { GET as routeCheck } from '../../src/routes/api/routes/[routeId]/check/+server';
-import { POST as createRoute } from '../../src/routes/api/projects/[projectId]/routes/+server';
+import { GET as routeCheck } from '../../src/routes/api/routes/[routeId=uuid]/check/+server';
+import { POST as createRoute } from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;

@@ -1,9 +1,9 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { POST as savePlan } from '../../src/routes/api/routes/[routeId]/plan/[rank]/save/+server';
-import { POST as createOne } from '../../src/routes/api/projects/[projectId]/routes/+server';
-import { GET as getRoute } from '../../src/routes/api/routes/[routeId]/+server';
-import { load } from '../../src/routes/routes/[routeId]/+page.server';
+import { POST as savePlan } from '../../src/routes/api/routes/[routeId=uuid]/plan/[rank=rank]/save/+server';
+import { POST as createOne } from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
+import { GET as getRoute } from '../../src/routes/api/routes/[routeId=uuid]/+server';
+import { load } from '../../src/routes/routes/[routeId=uuid]/+page.server';
 import { ActivityEvent, PlannedRoute, Route, type Project } from '../../src/lib/server/db';
 import {
 	createRoute,
@@ -173,6 +173,18 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 		const answer = await call(savePlan, 'chemist', { routeId, rank: '1' }, { version: 1 });
 		expect(answer.status).toBe(404);
 		expect(answer.body.error.message).toMatch(/^There is no plan 1 for this route\. .*step "s1"/);
+	});
+
+	it('refuses a rank that is not a number before planning the route (404, not the planner\'s 422)', async () => {
+		const broken = await createRoute(f.people.chemist, project, {
+			...grignard(),
+			steps: [{ id: 's1', from: ['i0'], to: 'gone' }]
+		});
+		for (const rank of ['first', '0', '1e9']) {
+			const answer = await call(savePlan, 'chemist', { routeId: broken.id, rank }, { version: 1 });
+			expect(answer.status, rank).toBe(404);
+			expect(answer.body.error.code).toBe('no_such_plan');
+		}
 	});
 
 	it('answers 422 naming the problem when the stored route is not a valid route document', async () => {

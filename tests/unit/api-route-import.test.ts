@@ -1,8 +1,8 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
-import * as importRoute from '../../src/routes/api/projects/[projectId]/routes/import/+server';
-import * as exportRoute from '../../src/routes/api/routes/[routeId]/export/+server';
-import * as oneRoute from '../../src/routes/api/routes/[routeId]/+server';
+import * as importRoute from '../../src/routes/api/projects/[projectId=uuid]/routes/import/+server';
+import * as exportRoute from '../../src/routes/api/routes/[routeId=uuid]/export/+server';
+import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import { Intermediate, Route, type Project } from '../../src/lib/server/db';
 import { splitSdf } from '../../src/lib/chem';
 import { duplicateRoute, setRouteArchived, listRoutes } from '../../src/lib/server/services/routes';

@@ -1,7 +1,7 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
-import * as routeList from '../../src/routes/api/projects/[projectId]/routes/+server';
-import * as oneRoute from '../../src/routes/api/routes/[routeId]/+server';
+import * as routeList from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
+import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import { ActivityEvent, Intermediate } from '../../src/lib/server/db';
 import type { Project } from '../../src/lib/server/db';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';

@@ -1,8 +1,8 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { POST as planPost } from '../../src/routes/api/plan/+server';
-import { POST as routePlan } from '../../src/routes/api/routes/[routeId]/plan/+server';
-import { POST as createRoute } from '../../src/routes/api/projects/[projectId]/routes/+server';
+import { POST as routePlan } from '../../src/routes/api/routes/[routeId=uuid]/plan/+server';
+import { POST as createRoute } from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 import { line } from '../factories/plan-routes';
 

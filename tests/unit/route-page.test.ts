@@ -1,6 +1,6 @@
 import { isHttpError, isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { load } from '../../src/routes/routes/[routeId]/+page.server';
+import { load } from '../../src/routes/routes/[routeId=uuid]/+page.server';
 import { readFileSync } from 'node:fs';
 import { createRoute } from '../../src/lib/server/services/routes';
 import { Intermediate, Route, type Project } from '../../src/lib/server/db';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { STRUCTURE_LIMITS } from '../chem/limits';
+import { text } from '../schemas/text';
 
 /**
  * The route document: the one exchange form of a route (import, export, API, planner).
@@ -8,8 +9,7 @@ import { STRUCTURE_LIMITS } from '../chem/limits';
 export const MAX_ROUTE_NODES = 500;
 export const MAX_STRUCTURE_CHARS = STRUCTURE_LIMITS.maxTextBytes;
 
-const clientId = z
-	.string()
+const clientId = text()
 	.trim()
 	.min(1, 'An id cannot be empty.')
 	.max(64, 'Keep ids under 64 characters.');
@@ -19,8 +19,8 @@ export type StepIntent = (typeof STEP_INTENTS)[number];
 
 export const intermediateSchema = z.object({
 	id: clientId,
-	label: z.string().trim().max(120).optional(),
-	structure: z.string().max(MAX_STRUCTURE_CHARS, 'A structure is limited to 1 MB of text.'),
+	label: text().trim().max(120).optional(),
+	structure: text().max(MAX_STRUCTURE_CHARS, 'A structure is limited to 1 MB of text.'),
 	position: z.object({ x: z.number().finite(), y: z.number().finite() }).optional()
 });
 
@@ -28,14 +28,14 @@ export const stepSchema = z.object({
 	id: clientId,
 	from: z.array(clientId).min(1, 'A step needs at least one starting intermediate.').max(8),
 	to: clientId,
-	reagents: z.string().max(2000).optional(),
-	conditions: z.array(z.string().max(64)).max(30).optional(),
-	notes: z.string().max(10_000).optional(),
+	reagents: text().max(2000).optional(),
+	conditions: z.array(text().max(64)).max(30).optional(),
+	notes: text().max(10_000).optional(),
 	intent: z.enum(STEP_INTENTS).optional()
 });
 
 export const routeDocumentShape = z.object({
-	name: z.string().trim().min(1, 'Give the route a name.').max(120),
+	name: text().trim().min(1, 'Give the route a name.').max(120),
 	intermediates: z.array(intermediateSchema).max(MAX_ROUTE_NODES),
 	steps: z.array(stepSchema).max(MAX_ROUTE_NODES)
 });

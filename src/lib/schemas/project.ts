@@ -1,13 +1,12 @@
 import { z } from 'zod';
+import { text } from './text';
 
-export const projectName = z
-	.string()
+export const projectName = text()
 	.trim()
 	.min(2, 'Give the project a name of at least 2 characters.')
 	.max(120, 'Keep the name under 120 characters.');
 
-export const projectDescription = z
-	.string()
+export const projectDescription = text()
 	.trim()
 	.max(4000, 'Keep the target description under 4000 characters.');
 

@@ -1,5 +1,6 @@
 import { error, isHttpError, json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
+import { DatabaseBusy, isDatabaseBusy } from './db/write-queue';
 
 /** The one error shape every `/api` response uses: `{ error: { code, message, details? } }`. */
 export type ApiErrorBody = { error: { code: string; message: string; details?: unknown } };
@@ -15,7 +16,8 @@ const CODES_BY_STATUS: Record<number, string> = {
 	415: 'unsupported_media_type',
 	422: 'invalid',
 	429: 'rate_limited',
-	500: 'internal'
+	500: 'internal',
+	503: 'unavailable'
 };
 
 export function codeForStatus(status: number): string {
@@ -67,10 +69,19 @@ export function apiHandler<E extends RequestEvent = RequestEvent>(
 			if (caught instanceof ZodError) {
 				return apiError(400, 'invalid_body', 'The request body does not have the expected fields.', caught.issues);
 			}
+			if (isDatabaseBusy(caught)) return databaseBusy();
 			console.error('[api]', event.request.method, event.url.pathname, caught);
 			return apiError(500, 'internal', 'Something went wrong on the server; nothing was changed.');
 		}
 	};
+}
+
+/** The last resort when a write could not get the lock: 503 with retry-after, never a 500. */
+function databaseBusy(): Response {
+	const busy = new DatabaseBusy();
+	const response = apiError(503, 'database-busy', busy.message);
+	response.headers.set('retry-after', String(busy.retryAfterSeconds));
+	return response;
 }
 
 /** The largest JSON body an endpoint reads (structures up to 1 MB fit with room to spare). */

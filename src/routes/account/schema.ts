@@ -1,8 +1,9 @@
 import { z } from 'zod';
 import { MIN_PASSWORD_LENGTH } from '$lib/schemas/password';
+import { text } from '$lib/schemas/text';
 
 export const createTokenSchema = z.object({
-	label: z.string().trim().min(2, 'Name the token after what will use it.').max(80)
+	label: text().trim().min(2, 'Name the token after what will use it.').max(80)
 });
 
 export const changePasswordSchema = z

@@ -1,5 +1,6 @@
-import { Sequelize } from 'sequelize';
+import { Sequelize, Transaction } from 'sequelize';
 import sqlite3 from 'sqlite3';
+import { serialiseWrites } from './write-queue';
 
 export const DEFAULT_DATABASE_URL = 'sqlite:data/orthogon.db';
 const BUSY_TIMEOUT_MS = 5000;
@@ -34,15 +35,23 @@ export function sqliteStorage(url: string): string | null {
 export function createSequelize(url: string = DEFAULT_DATABASE_URL): Sequelize {
 	const storage = sqliteStorage(url);
 	if (storage) {
-		return new Sequelize({
+		const sequelize = new Sequelize({
 			dialect: 'sqlite',
 			storage,
 			dialectModule: tunedSqlite,
-			logging: false
+			logging: false,
+			// A deferred transaction that reads, then writes, fails at once with SQLITE_BUSY when
+			// another connection wrote meanwhile (no busy wait can help it); IMMEDIATE takes the
+			// write lock at BEGIN, where the busy timeout applies (other processes on the file).
+			transactionType: Transaction.TYPES.IMMEDIATE
 		});
+		serialiseWrites(sequelize);
+		return sequelize;
 	}
 	if (/^postgres(ql)?:\/\//.test(url)) {
 		return new Sequelize(url, { dialect: 'postgres', logging: false });
 	}
-	throw new Error(`DATABASE_URL must start with sqlite: or postgres:// (got "${url.split(':')[0]}:…")`);
+	throw new Error(
+		`DATABASE_URL must start with sqlite: or postgres:// (got "${url.split(':')[0]}:…")`
+	);
 }

@@ -5,12 +5,17 @@ import { apiError, apiHandler, readJson } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
+import { isPlanRank } from '$lib/route/plan-rank';
 import {
 	createRoute,
 	plannedRouteName,
 	routeDocumentAt,
 	VersionConflict
 } from '$lib/server/services/routes';
+
+function noSuchPlan(rank: string, why: string): never {
+	error(404, { code: 'no_such_plan', message: `There is no plan ${rank} for this route. ${why}` });
+}
 
 const body = z.object({ version: z.number().int().positive() });
 
@@ -27,7 +32,10 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		event.params.routeId,
 		'route.edit'
 	);
-	const rank = /^[1-9][0-9]{0,2}$/.test(event.params.rank) ? Number(event.params.rank) : null;
+	// The matcher already refuses other ranks; checked again so no call can plan for nothing.
+	if (!isPlanRank(event.params.rank))
+		noSuchPlan(event.params.rank, 'Plans are numbered 1, 2, 3 ….');
+	const rank = Number(event.params.rank);
 	const { version } = await readJson(event, body);
 	// A rank that cannot name a plan is answered before any planning work.
 	if (rank === null) {
@@ -54,10 +62,7 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		const why =
 			answer.unsolved?.map((u) => u.reason).join(' ') ??
 			`The planner found ${answer.plans.length} plan(s).`;
-		error(404, {
-			code: 'no_such_plan',
-			message: `There is no plan ${event.params.rank} for this route. ${why}`
-		});
+		noSuchPlan(event.params.rank, why);
 	}
 	const document = routeDocumentOr422({
 		...plan.route,

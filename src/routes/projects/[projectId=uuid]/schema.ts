@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from '$lib/schemas/text';
 import { projectDescription, projectName } from '$lib/schemas/project';
 
 export const editProjectSchema = z.object({
@@ -7,5 +8,5 @@ export const editProjectSchema = z.object({
 });
 
 export const newRouteSchema = z.object({
-	name: z.string().trim().min(1, 'Give the route a name.').max(120, 'Keep the name under 120 characters.')
+	name: text().trim().min(1, 'Give the route a name.').max(120, 'Keep the name under 120 characters.')
 });

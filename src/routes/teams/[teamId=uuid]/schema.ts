@@ -1,9 +1,10 @@
 import { z } from 'zod';
+import { text } from '$lib/schemas/text';
 import { ROLES } from '$lib/policy';
 
 export const addMemberSchema = z.object({
 	email: z.email('Enter their e-mail address.'),
-	name: z.string().trim().max(120).default(''),
+	name: text().trim().max(120).default(''),
 	role: z.enum(ROLES).default('chemist')
 });
 
