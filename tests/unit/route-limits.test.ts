@@ -5,9 +5,9 @@
 import { readFileSync } from 'node:fs';
 import type { RequestEvent } from '@sveltejs/kit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import * as routeList from '../../src/routes/api/projects/[projectId]/routes/+server';
-import * as importRoute from '../../src/routes/api/projects/[projectId]/routes/import/+server';
-import * as oneRoute from '../../src/routes/api/routes/[routeId]/+server';
+import * as routeList from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
+import * as importRoute from '../../src/routes/api/projects/[projectId=uuid]/routes/import/+server';
+import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import { Intermediate, Route, type Project } from '../../src/lib/server/db';
 import { STRUCTURE_LIMITS } from '../../src/lib/chem/limits';
 import { closeChemistryPool } from '../../src/lib/server/chem-pool/pool';
