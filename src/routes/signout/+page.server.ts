@@ -5,8 +5,9 @@ import { signOut } from '$lib/server/auth/auth';
 
 export const load: PageServerLoad = () => redirect(303, paths.projects());
 
-// Auth.js reads a form body; a sign-out needs nothing from the client's body, so whatever it sent
-// (a form, text/plain, nothing) Auth.js gets a well-formed one. Its `signOut` event ends the
+// Auth.js reads a form body; a sign-out needs nothing from the client's body, so whatever form it
+// sent (hooks/form-bodies.ts has already refused bodies that are not forms) Auth.js gets a
+// well-formed one. Its `signOut` event ends the
 // session on the server (auth/sessions.ts), then it clears the cookie and goes to sign-in.
 export const actions: Actions = {
 	default: (event) => {
