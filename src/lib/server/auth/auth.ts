@@ -2,6 +2,7 @@ import { SvelteKitAuth } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import { safeRedirectTarget } from '../../paths';
 import { cookiePolicy } from './cookie-policy';
+import { decodeSessionToken, encodeSessionToken } from './session-token-cache';
 import { endSession, SESSION_MAX_AGE_SECONDS, startSession } from './sessions';
 import { authorizeSignIn } from './sign-in';
 
@@ -26,6 +27,7 @@ export const {
 		})
 	],
 	session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE_SECONDS },
+	jwt: { encode: encodeSessionToken, decode: decodeSessionToken },
 	useSecureCookies: cookiePolicy.useSecureCookies,
 	pages: { signIn: '/signin', error: '/signin' },
 	trustHost: true,
