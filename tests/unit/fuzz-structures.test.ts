@@ -9,10 +9,10 @@ import { POST as analyze } from '../../src/routes/api/analyze/+server';
 import { POST as check } from '../../src/routes/api/check/+server';
 import { POST as plan } from '../../src/routes/api/plan/+server';
 import * as routeList from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
-import * as importRoute from '../../src/routes/api/projects/[projectId=uuid]/routes/import/+server';
 import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import type { Project } from '../../src/lib/server/db';
 import { closeChemistryPool } from '../../src/lib/server/chem-pool/pool';
+import { uploadRouteFile } from '../factories/route-upload';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 import { makeMalformedStructures } from '../factories/malformed-structures';
 
@@ -44,20 +44,12 @@ async function call(
 }
 
 async function upload(text: string): Promise<Answer> {
-	const form = new FormData();
-	form.set('file', new File([text], 'fuzz.sdf'));
-	const request = new Request('http://localhost/api/projects/x/routes/import', {
-		method: 'POST',
-		body: form
-	});
-	const event = {
-		url: new URL(request.url),
-		request,
-		locals: { user: f.people.chemist, via: 'session' },
-		params: { projectId: project.id }
-	};
-	const response = await (importRoute.POST as unknown as (e: unknown) => Promise<Response>)(event);
-	return { status: response.status, body: await response.json() };
+	return (await uploadRouteFile({
+		user: f.people.chemist,
+		projectId: project.id,
+		name: 'fuzz.sdf',
+		text
+	})) as Answer;
 }
 
 const routeWith = (structure: string) => ({

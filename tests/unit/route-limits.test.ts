@@ -6,11 +6,11 @@ import { readFileSync } from 'node:fs';
 import type { RequestEvent } from '@sveltejs/kit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as routeList from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
-import * as importRoute from '../../src/routes/api/projects/[projectId=uuid]/routes/import/+server';
 import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import { Intermediate, Route, type Project } from '../../src/lib/server/db';
 import { STRUCTURE_LIMITS } from '../../src/lib/chem/limits';
 import { closeChemistryPool } from '../../src/lib/server/chem-pool/pool';
+import { uploadRouteFile } from '../factories/route-upload';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 const killer = readFileSync(
@@ -51,20 +51,10 @@ async function call(
 }
 
 async function upload(name: string, text: string) {
-	const form = new FormData();
-	form.set('file', new File([text], name));
-	const request = new Request('http://localhost/api/projects/x/routes/import', {
-		method: 'POST',
-		body: form
-	});
-	const event = {
-		url: new URL(request.url),
-		request,
-		locals: { user: f.people.chemist, via: 'session' },
-		params: { projectId: project.id }
+	return (await uploadRouteFile({ user: f.people.chemist, projectId: project.id, name, text })) as {
+		status: number;
+		body: { error: { code: string; message: string } };
 	};
-	const response = await (importRoute.POST as unknown as (e: unknown) => Promise<Response>)(event);
-	return { status: response.status, body: await response.json() };
 }
 
 const counts = async () => [await Route.count(), await Intermediate.count()];
