@@ -24,7 +24,7 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	if (unknown.length) throw new UnknownConditionError(step.id, unknown, rules.conditionIds);
 	const classified = step.reagents?.trim()
 		? rules.classify(step.reagents)
-		: { conditions: [], matched: [], hazards: [] };
+		: { conditions: [], matched: [], hazards: [], unknown: [] };
 	const conditions = [...new Set([...explicit, ...classified.conditions])];
 
 	const origins = new Map<string, Origin>();
@@ -73,7 +73,15 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		}
 	}
 	clashes.sort((a, b) => (a.severity === b.severity ? 0 : a.severity === 'clash' ? -1 : 1));
-	return { id: step.id, conditions, hazards: classified.hazards, clashes };
+	// Unrecognised reagent text is part of the answer: a step must not read clean because the
+	// table did not know what was in the flask.
+	return {
+		id: step.id,
+		conditions,
+		hazards: classified.hazards,
+		clashes,
+		unrecognized: classified.unknown
+	};
 }
 
 const standsBy = (site: Site) => site.survives;

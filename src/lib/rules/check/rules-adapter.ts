@@ -15,17 +15,25 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 	return {
 		conditionIds,
 		conditionLabel: (id) => table.condition(id as ConditionId).label,
-		stability: (pg, condition, reagents) => table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId, reagents),
+		stability: (pg, condition, reagents) =>
+			table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId, reagents),
 		protectingGroupLabel: (pg) => pgLabels.get(pg) ?? pg,
 		reactivity: (group, condition) => {
 			// Perception may know groups the reactivity table has no row for: no row, no problem known.
 			const answer = table.reactivityOf(group as FreeGroupId, condition as ConditionId);
-			return answer ? { rating: answer.rating, reason: answer.reason, source: answer.source } : null;
+			return answer
+				? { rating: answer.rating, reason: answer.reason, source: answer.source }
+				: null;
 		},
 		groupLabel: (group) => (groupLabels.get(group) ?? group).toLowerCase(),
 		classify: (text) => {
 			const result = table.conditionsForReagents(text);
-			return { conditions: result.conditions, matched: result.matched, hazards: result.hazards };
+			return {
+				conditions: result.conditions,
+				matched: result.matched,
+				hazards: result.hazards,
+				unknown: result.unknown
+			};
 		}
 	};
 }

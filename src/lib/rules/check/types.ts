@@ -26,7 +26,29 @@ export type StepToCheck = {
 	reagents?: string;
 };
 
-export type StepCheck = { id: string; conditions: string[]; hazards: Hazard[]; clashes: Clash[] };
+/**
+ * Why a step could not be checked, in the API's error terms: `invalid_structure` or
+ * `structure_too_large` (a structure cannot be read) or `unknown_condition` (an unknown class id).
+ */
+export type StepCheckError = { code: string; message: string };
+
+/**
+ * One step's check answer, the type `POST /api/check` and `GET /api/routes/{id}/check` answer
+ * and the browser reads (it imports this type; there is no copy to drift).
+ */
+export type StepCheck = {
+	id: string;
+	conditions: string[];
+	hazards: Hazard[];
+	clashes: Clash[];
+	/** Reagent text the table does not know, as typed (e.g. `['Grubbs II']`): its effect is not checked. */
+	unrecognized: string[];
+	/** Present when the step could not be checked at all: then `clashes` is empty but means nothing. */
+	error?: StepCheckError;
+};
+
+/** The body of both check endpoints. */
+export type CheckAnswer = { steps: StepCheck[] };
 
 export type ReagentMatch = { reagent: string; conditions: string[] };
 
@@ -46,18 +68,26 @@ export type CheckRules = {
 		conditionId: string
 	): { rating: 'reacts' | 'caution'; reason: string; source: string } | null;
 	groupLabel(groupId: string): string;
-	classify(reagents: string): { conditions: string[]; matched: ReagentMatch[]; hazards: Hazard[] };
+	classify(reagents: string): {
+		conditions: string[];
+		matched: ReagentMatch[];
+		hazards: Hazard[];
+		/** Fragments of the text that name nothing in the table, as typed. */
+		unknown: string[];
+	};
 };
 
 export class UnknownConditionError extends Error {
+	/** The problem without the step's name, for an answer that already belongs to the step. */
+	readonly problem: string;
 	constructor(
 		readonly stepId: string,
 		readonly unknown: string[],
 		valid: readonly string[]
 	) {
-		super(
-			`Step "${stepId}" names unknown condition ${unknown.map((u) => `"${u}"`).join(', ')}; valid ids are: ${valid.join(', ')}.`
-		);
+		const names = `unknown condition ${unknown.map((u) => `"${u}"`).join(', ')}; valid ids are: ${valid.join(', ')}.`;
+		super(`Step "${stepId}" names ${names}`);
+		this.problem = `It names ${names}`;
 	}
 }
 
@@ -70,5 +100,8 @@ export class StepStructureError extends Error {
 		readonly reason?: string
 	) {
 		super(`Step "${stepId}": the ${role} cannot be read — ${detail}`);
+		this.problem = `The ${role} cannot be read — ${detail}`;
 	}
+	/** The problem without the step's name, for an answer that already belongs to the step. */
+	readonly problem: string;
 }

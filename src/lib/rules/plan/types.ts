@@ -68,6 +68,11 @@ export type PlanSafety = {
 	hazards: { step: string; reagent: string; note: string }[];
 	/** `caution` items the re-check found anywhere in the protected route. */
 	cautions: { step: string; message: string }[];
+	/**
+	 * Reagent text the re-check did not recognise, per step of the protected route (the plan's
+	 * own steps and the ones it passes through): the plan is silent on what those reagents do.
+	 */
+	unrecognized: { step: string; text: string[] }[];
 };
 export type CheckedPlan = Plan & PlanSafety;
 export type CheckedPlanAnswer = { plans: CheckedPlan[]; unsolved?: Unsolved[] };

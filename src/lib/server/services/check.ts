@@ -1,6 +1,14 @@
-import { checkStep, StepStructureError, UnknownConditionError, type CheckRules, type StepCheck, type StepToCheck } from '../../rules/check';
+import {
+	checkStep,
+	StepStructureError,
+	UnknownConditionError,
+	type CheckRules,
+	type StepCheck,
+	type StepToCheck
+} from '../../rules/check';
 import { checkRulesFrom } from '../../rules/check/rules-adapter';
 import type { RouteDocument } from '../../route/document';
+import { codeForStructure } from '../chem-pool/refusals';
 
 let defaults: CheckRules | null = null;
 
@@ -15,13 +23,18 @@ export function checkSteps(steps: StepToCheck[], rules = defaultCheckRules()): S
 	return steps.map((step) => checkStep(rules, step));
 }
 
-export type RouteStepCheck = StepCheck & { error?: { code: string; message: string } };
+/** A route step's answer: the same type as `/api/check`'s, whose `error` a route step may carry. */
+export type RouteStepCheck = StepCheck;
 
 /**
  * Checks every step of a route document. A step that cannot be checked (an empty or unreadable
- * structure while the chemist is still drawing) reports its problem instead of failing the route.
+ * structure while the chemist is still drawing) reports its problem instead of failing the route,
+ * and still lists the reagent text nobody recognised: that does not depend on the structures.
  */
-export function checkRouteDocument(document: RouteDocument, rules = defaultCheckRules()): RouteStepCheck[] {
+export function checkRouteDocument(
+	document: RouteDocument,
+	rules = defaultCheckRules()
+): RouteStepCheck[] {
 	const structures = new Map(document.intermediates.map((node) => [node.id, node.structure]));
 	return document.steps.map((step) => {
 		try {
@@ -33,11 +46,26 @@ export function checkRouteDocument(document: RouteDocument, rules = defaultCheck
 				reagents: step.reagents
 			});
 		} catch (caught) {
-			if (caught instanceof StepStructureError || caught instanceof UnknownConditionError) {
-				const code = caught instanceof StepStructureError ? 'invalid_structure' : 'unknown_condition';
-				return { id: step.id, conditions: step.conditions ?? [], hazards: [], clashes: [], error: { code, message: caught.message } };
-			}
-			throw caught;
+			const error = stepErrorOf(caught);
+			if (!error) throw caught;
+			const classified = step.reagents?.trim() ? rules.classify(step.reagents) : null;
+			return {
+				id: step.id,
+				conditions: step.conditions ?? [],
+				hazards: classified?.hazards ?? [],
+				clashes: [],
+				unrecognized: classified?.unknown ?? [],
+				error
+			};
 		}
 	});
+}
+
+/** The per-step `error` for a step the check refused, or null for a bug (which is thrown on). */
+function stepErrorOf(caught: unknown): StepCheck['error'] | null {
+	if (caught instanceof StepStructureError)
+		return { code: codeForStructure(caught.reason), message: caught.problem };
+	if (caught instanceof UnknownConditionError)
+		return { code: 'unknown_condition', message: caught.problem };
+	return null;
 }

@@ -18,7 +18,8 @@ function firstClashIn(checks: RouteStepCheck[]): string | null {
 
 /**
  * Plans a route with the default rule table, every plan re-checked through `checkRouteDocument`,
- * and says for each plan which hazards its added steps bring and which cautions remain.
+ * and says for each plan which hazards its added steps bring, which cautions remain and which
+ * reagent text it could not judge.
  */
 export function planRouteDocument(document: RouteDocument): CheckedPlanAnswer {
 	// The re-check that admits each plan also gives its hazards and cautions: keep it, by route.
@@ -52,6 +53,9 @@ function safetyOf(plan: Plan, checks: RouteStepCheck[]): PlanSafety {
 			c.clashes
 				.filter((x) => x.severity === 'caution')
 				.map((x) => ({ step: c.id, message: x.message }))
-		)
+		),
+		unrecognized: checks
+			.filter((c) => c.unrecognized.length)
+			.map((c) => ({ step: c.id, text: c.unrecognized }))
 	};
 }

@@ -5,6 +5,7 @@ import { apiHandler, readJson } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
 import { STRUCTURE_LIMITS } from '$lib/chem/limits';
 import { runChemistry } from '$lib/server/chem-pool/pool';
+import type { CheckAnswer } from '$lib/rules/check/types';
 
 const MAX_STRUCTURE = STRUCTURE_LIMITS.maxTextBytes;
 const checkBody = z.object({
@@ -27,5 +28,6 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	requireUser(event);
 	const { steps } = await readJson(event, checkBody);
 	// Unknown condition ids and unreadable structures come back as 422 from the pool.
-	return json({ steps: await runChemistry('checkSteps', { steps }) });
+	const answer: CheckAnswer = { steps: await runChemistry('checkSteps', { steps }) };
+	return json(answer);
 });
