@@ -4,6 +4,7 @@
 
 import type { Analysis } from '$lib/chem/analyze';
 import type { RouteDocument } from '$lib/route/document';
+import type { CheckAnswer, Clash, StepCheck } from '$lib/rules/check/types';
 import type { CheckedPlanAnswer as PlanAnswer } from '$lib/rules/plan';
 import { callApi, jsonBody, type ApiResult } from './api';
 import type { Toasts } from './toasts.svelte';
@@ -11,20 +12,8 @@ import type { Toasts } from './toasts.svelte';
 // The /api/analyze answer, as the chemistry core defines it (a type only: no chemistry code ships).
 export type { Analysis };
 
-export type Clash = {
-	severity: 'clash' | 'caution';
-	kind: 'removes-protecting-group' | 'attacks-free-group';
-	subject: string;
-	condition: string;
-	atoms: number[];
-	message: string;
-};
-export type StepCheck = {
-	id: string;
-	conditions: string[];
-	hazards: { reagent: string; note: string }[];
-	clashes: Clash[];
-};
+// The check answer as the chemistry core defines it and the endpoints send it (types only).
+export type { Clash, StepCheck };
 export type RouteAnswer = {
 	id: string;
 	projectId: string;
@@ -75,11 +64,7 @@ export class RouteClient {
 
 	/** The clash check of the stored route; `'unavailable'` while the server has no check endpoint. */
 	async check(routeId: string): Promise<Map<string, StepCheck> | 'unavailable' | null> {
-		const result = await callApi<{ steps: StepCheck[] }>(
-			`/api/routes/${routeId}/check`,
-			{},
-			this.fetcher
-		);
+		const result = await callApi<CheckAnswer>(`/api/routes/${routeId}/check`, {}, this.fetcher);
 		if (!result.ok) {
 			if (result.status === 404) return 'unavailable';
 			this.toasts.show(`The clash check failed: ${result.message}`, 'problem');

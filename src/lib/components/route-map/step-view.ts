@@ -3,10 +3,15 @@
 import type { Clash, ConditionLabel, StepCheck } from '$lib/client/route-client';
 import type { RouteStep } from '$lib/route/document';
 
-export type Verdict = { tone: 'clash' | 'caution' | 'fine'; label: string };
+export type Verdict = { tone: 'clash' | 'caution' | 'unchecked' | 'fine'; label: string };
 
-/** E.g. two clashes and a caution → `{ tone: 'clash', label: '2 clashes, 1 caution' }`. */
+/**
+ * E.g. two clashes and a caution → `{ tone: 'clash', label: '2 clashes, 1 caution' }`; a step
+ * the check refused → `{ tone: 'unchecked', label: 'Not checked: The product cannot be read — …' }`,
+ * never `fine`: an empty clash list from a step that was not checked means nothing.
+ */
 export function verdictOf(check: StepCheck | undefined): Verdict {
+	if (check?.error) return { tone: 'unchecked', label: notCheckedText(check.error) };
 	const clashes = check?.clashes.filter((c) => c.severity === 'clash').length ?? 0;
 	const cautions = (check?.clashes.length ?? 0) - clashes;
 	const parts = [
@@ -14,6 +19,21 @@ export function verdictOf(check: StepCheck | undefined): Verdict {
 		cautions ? `${cautions} ${cautions === 1 ? 'caution' : 'cautions'}` : ''
 	].filter(Boolean);
 	return { tone: clashes ? 'clash' : cautions ? 'caution' : 'fine', label: parts.join(', ') };
+}
+
+/** E.g. `Not checked: The product cannot be read — it is empty.` */
+export function notCheckedText(error: NonNullable<StepCheck['error']>): string {
+	return `Not checked: ${error.message}`;
+}
+
+/**
+ * The plain notice for reagent text the table did not know, or null when it knew every word, e.g.
+ * `['Grubbs II']` → 'Not recognised: Grubbs II — its effect is not checked.'
+ */
+export function unrecognizedText(unrecognized: readonly string[] | undefined): string | null {
+	if (!unrecognized?.length) return null;
+	const effect = unrecognized.length === 1 ? 'its effect is' : 'their effects are';
+	return `Not recognised: ${unrecognized.join(', ')} — ${effect} not checked.`;
 }
 
 /** The label of a condition class, or its id while the rule list is not available. */
