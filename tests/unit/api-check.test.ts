@@ -30,8 +30,10 @@ describe('POST /api/check', () => {
 		expect(status).toBe(200);
 		expect(body.steps).toHaveLength(1);
 		const [step] = body.steps;
-		expect(Object.keys(step).sort()).toEqual(['clashes', 'conditions', 'hazards', 'id']);
+		expect(Object.keys(step).sort()).toEqual(['clashes', 'conditions', 'hazards', 'id', 'unrecognized']);
 		expect(step.id).toBe('add-MeMgBr');
+		// Every word of 'MeMgBr, THF' is known: the list is there, and empty.
+		expect(step.unrecognized).toEqual([]);
 		expect(step.conditions).toContain('organometallic');
 		expect(step.clashes[0]).toEqual({
 			severity: 'clash',
@@ -42,6 +44,20 @@ describe('POST /api/check', () => {
 			message: expect.stringContaining('ketone')
 		});
 		expect(step.hazards.every((h: { reagent: string; note: string }) => h.reagent && h.note)).toBe(true);
+	});
+
+	it('lists the reagent text it did not recognise, as typed, beside what it did', async () => {
+		// A house catalyst code no reagent table lists, next to a known solvent (a step that would
+		// have read clean before, since unknown text was dropped without a word).
+		const steps = [
+			{ ...grignard, id: 'house-cat', reagents: 'MeMgBr, OG-Cat 17, THF' },
+			{ ...grignard, id: 'two-unknown', reagents: 'Zq-ligand 5; CH2Cl2 then OG-Cat 17' }
+		];
+		const { status, body } = await call(checkPost, 'chemist', { body: { steps } });
+		expect(status).toBe(200);
+		expect(body.steps[0].unrecognized).toEqual(['OG-Cat 17']);
+		expect(body.steps[0].conditions).toContain('organometallic');
+		expect(body.steps[1].unrecognized).toEqual(['Zq-ligand 5', 'OG-Cat 17']);
 	});
 
 	it('answers 422 naming the step for an unknown condition or an unreadable structure', async () => {
@@ -72,20 +88,31 @@ describe('GET /api/routes/{id}/check', () => {
 				intermediates: [
 					{ id: 'a', structure: grignard.substrate },
 					{ id: 'b', structure: grignard.product },
-					{ id: 'c', structure: '' }
+					{ id: 'c', structure: '' },
+					{ id: 'd', structure: 'C1CC(' },
+					{ id: 'e', structure: 'CCO' }
 				],
 				steps: [
 					{ id: 's1', from: ['a'], to: 'b', reagents: grignard.reagents },
-					{ id: 's2', from: ['b'], to: 'c', reagents: 'NaBH4, MeOH' }
+					{ id: 's2', from: ['b'], to: 'c', reagents: 'NaBH4, MeOH' },
+					{ id: 's3', from: ['d'], to: 'e', reagents: 'OG-Cat 17, CH2Cl2' }
 				]
 			}
 		});
 		expect(created.status).toBe(201);
 		const { status, body } = await call(routeCheck, 'reviewer', { method: 'GET', params: { routeId: created.body.id } });
 		expect(status).toBe(200);
-		expect(body.steps.map((s: { id: string }) => s.id)).toEqual(['s1', 's2']);
+		expect(body.steps.map((s: { id: string }) => s.id)).toEqual(['s1', 's2', 's3']);
 		expect(body.steps[0].clashes.map((c: { subject: string }) => c.subject)).toEqual(['ketone']);
 		expect(body.steps[1].error.code).toBe('invalid_structure');
+		// Not checked is not clean: the error stays, with the problem and no step id in front of it,
+		// and the unrecognised text is still listed (it does not depend on the structures).
+		expect(body.steps[1].error.message).toBe('The product cannot be read — it is empty.');
+		expect(body.steps[1].unrecognized).toEqual([]);
+		expect(body.steps[2]).toMatchObject({ id: 's3', clashes: [], unrecognized: ['OG-Cat 17'] });
+		expect(body.steps[2].error).toMatchObject({ code: 'invalid_structure', message: expect.stringContaining('substrate') });
+		expect(body.steps[0].unrecognized).toEqual([]);
+		expect(body.steps[0].error).toBeUndefined();
 		expect((await call(routeCheck, 'outsider', { method: 'GET', params: { routeId: created.body.id } })).status).toBe(404);
 	});
 });

@@ -32,7 +32,9 @@ describe('POST /api/plan', () => {
 		expect(body.unsolved).toBeUndefined();
 		const [plan] = body.plans;
 		// The fields, plus what the plan asks of the people who run it.
-		expect(Object.keys(plan).sort()).toEqual(['addedSteps', 'cautions', 'hazards', 'protections', 'rank', 'rationale', 'route', 'score']);
+		expect(Object.keys(plan).sort()).toEqual(['addedSteps', 'cautions', 'hazards', 'protections', 'rank', 'rationale', 'route', 'score', 'unrecognized']);
+		// Every reagent of the route and of the steps the plan adds is known.
+		expect(plan.unrecognized).toEqual([]);
 		expect(Object.keys(plan.protections[0]).sort()).toEqual(['atoms', 'group', 'install', 'intermediate', 'protectingGroup', 'removal']);
 		expect(plan.protections[0]).toMatchObject({ group: 'ketone', install: { before: 's1' }, removal: { after: 'end' } });
 		expect(plan.route.steps.map((s: { intent?: string }) => s.intent ?? 'transform')).toEqual(['protect', 'transform', 'deprotect']);
@@ -48,6 +50,15 @@ describe('POST /api/plan', () => {
 		}
 		// The Grignard step is the chemist's own: its hazards are not the plan's to list.
 		expect(body.plans[0].hazards.map((h: { reagent: string }) => h.reagent)).not.toContain('MeMgBr');
+	});
+
+	it('names the reagent text its re-check did not recognise, on the step the plan passes through', async () => {
+		// A house additive code beside the Grignard: the plan cannot say what it does, and says so.
+		const withAdditive = line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, OG-Cat 17, THF'], 'OG-2031 additive');
+		const { status, body } = await call(planPost, 'viewer', { body: withAdditive });
+		expect(status).toBe(200);
+		expect(body.plans.length).toBeGreaterThan(0);
+		for (const plan of body.plans) expect(plan.unrecognized).toEqual([{ step: 's1', text: ['OG-Cat 17'] }]);
 	});
 
 	it('answers 422 for a bad route document and 401 without a user', async () => {

@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import * as ops from '../../src/lib/components/route-map/document-ops';
-import { heavyAtomCount, substrateHighlight } from '../../src/lib/components/route-map/step-view';
+import {
+	heavyAtomCount,
+	substrateHighlight,
+	unrecognizedText,
+	verdictOf
+} from '../../src/lib/components/route-map/step-view';
+import type { StepCheck } from '../../src/lib/rules/check/types';
 import { validateRouteDocument, type RouteDocument } from '../../src/lib/route/document';
 
 const base: RouteDocument = {
@@ -92,5 +98,39 @@ describe('clash highlights on substrates', () => {
 	it('counts heavy atoms from a formula', () => {
 		expect(heavyAtomCount('C7H12O3')).toBe(10);
 		expect(heavyAtomCount('C2H6BrN')).toBe(4);
+	});
+});
+
+describe('a step’s verdict on the map', () => {
+	const answer = (extra: Partial<StepCheck> = {}): StepCheck => ({
+		id: 's1',
+		conditions: [],
+		hazards: [],
+		clashes: [],
+		unrecognized: [],
+		...extra
+	});
+
+	it('never reads a step that could not be checked as fine, and says why it was not', () => {
+		const error = {
+			code: 'invalid_structure',
+			message: 'The product cannot be read — it is empty.'
+		};
+		expect(verdictOf(answer({ error }))).toEqual({
+			tone: 'unchecked',
+			label: 'Not checked: The product cannot be read — it is empty.'
+		});
+		expect(verdictOf(answer())).toEqual({ tone: 'fine', label: '' });
+	});
+
+	it('names unrecognised reagent text plainly, and nothing when every reagent was known', () => {
+		expect(unrecognizedText(['Grubbs II'])).toBe(
+			'Not recognised: Grubbs II — its effect is not checked.'
+		);
+		expect(unrecognizedText(['OG-Cat 17', 'Zq-ligand 5'])).toBe(
+			'Not recognised: OG-Cat 17, Zq-ligand 5 — their effects are not checked.'
+		);
+		expect(unrecognizedText([])).toBeNull();
+		expect(unrecognizedText(undefined)).toBeNull();
 	});
 });
