@@ -1,6 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import {
 	asUser,
+	cormorantId,
 	HYDROXY_KETONE,
 	KETO_ESTER,
 	makeRoute,
@@ -87,6 +88,55 @@ test('a step with a Grignard reagent on a free ketone shows a clash marker, its 
 	await expect(page.getByRole('list', { name: 'Reagent hazards' })).toContainText('MeMgBr');
 	// The substrate is redrawn with the clashing atoms shaded, and its frame turns to the clash colour.
 	await expect(node(page, 'OG-2031-A keto ester')).toHaveClass(/border-clash/);
+});
+
+test('a step with reagent text Orthogon does not know says so, and a step it cannot read says “Not checked”', async ({
+	page
+}) => {
+	await signInAndWait(page, 'chemist@example.com');
+	// OG-Cat 17: an in-house catalyst code no reagent table lists. The second step's product is
+	// a SMILES still being typed (an unclosed branch), so that step cannot be checked. The nodes
+	// stand far apart so no node covers a step's label.
+	const created = await page.request.post(`/api/projects/${await cormorantId(page)}/routes`, {
+		data: {
+			name: unique('Unknown additive'),
+			intermediates: [
+				{ id: 'a', label: 'OG-2031-A keto ester', structure: KETO_ESTER, position: { x: 0, y: 0 } },
+				{
+					id: 'c',
+					label: 'OG-2031-C hydroxy ketone',
+					structure: HYDROXY_KETONE,
+					position: { x: 640, y: 0 }
+				},
+				{ id: 'd', label: 'OG-2031-D half drawn', structure: 'CC(', position: { x: 1280, y: 0 } }
+			],
+			steps: [
+				{ id: 's1', from: ['a'], to: 'c', reagents: 'MeMgBr, OG-Cat 17, THF' },
+				{ id: 's2', from: ['c'], to: 'd', reagents: 'NaBH4, MeOH' }
+			]
+		}
+	});
+	expect(created.status()).toBe(201);
+	await page.goto(`/routes/${(await created.json()).id}`);
+
+	const notice = 'Not recognised: OG-Cat 17 — its effect is not checked.';
+	const grignard = page.getByTestId('step-label').filter({ hasText: 'MeMgBr' });
+	await expect(grignard.getByTestId('step-unrecognized')).toHaveText(notice, { timeout: 10_000 });
+	const halfDrawn = page.getByTestId('step-label').filter({ hasText: 'NaBH4' });
+	const notChecked = halfDrawn.getByRole('button', {
+		name: /^Not checked: The product cannot be read/
+	});
+	await expect(notChecked).toBeVisible();
+	await expect(halfDrawn).toContainText('Not checked');
+
+	await notChecked.click();
+	await expect(page.getByRole('heading', { name: /^Step:/ })).toContainText('OG-2031-D half drawn');
+	await expect(page.getByText(/^Not checked: The product cannot be read/).last()).toBeVisible();
+	await expect(page.getByText(/No clashes found/)).toHaveCount(0);
+
+	await grignard.getByRole('button', { name: 'MeMgBr, OG-Cat 17, THF' }).click();
+	await expect(page.getByRole('list', { name: 'Clashes' })).toContainText(/ketone/i);
+	await expect(page.getByText(notice)).toHaveCount(2);
 });
 
 test('a reviewer sees the same map read-only', async ({ page, browser }) => {
@@ -209,13 +259,11 @@ test('the project lists its routes: filter, import an SDF, duplicate and archive
 	await expect(row).toBeVisible();
 
 	const sdf = await (await page.request.get(`/api/routes/${id}/export?format=sdf`)).text();
-	await page
-		.getByLabel('Import SDF or route JSON')
-		.setInputFiles({
-			name: 'imported-og2031.sdf',
-			mimeType: 'chemical/x-mdl-sdfile',
-			buffer: Buffer.from(sdf)
-		});
+	await page.getByLabel('Import SDF or route JSON').setInputFiles({
+		name: 'imported-og2031.sdf',
+		mimeType: 'chemical/x-mdl-sdfile',
+		buffer: Buffer.from(sdf)
+	});
 	await expect(page.getByRole('heading', { name: 'imported-og2031', level: 1 })).toBeVisible();
 	await expect(page.getByTestId('step-label')).toContainText('MeMgBr, THF');
 	await page.goBack();
