@@ -41,6 +41,8 @@ describe('classifier: a salt is not its metal', () => {
 		'Zn(BH4)2',
 		'zinc borohydride',
 		'zinc chloride',
+		'Zn(OTf)2',
+		'Mg(ClO4)2',
 		'NaOtBu',
 		'sodium tert-butoxide'
 	];
@@ -48,6 +50,7 @@ describe('classifier: a salt is not its metal', () => {
 		it(`"${text}" brings no dissolving metal and is recognised`, () => {
 			const answer = read(text);
 			expect(answer.conditions).not.toContain('dissolving-metal');
+			expect(answer.conditions).not.toContain('organometallic');
 			expect(answer.matched.map((m) => m.reagent)).not.toContain('sodium metal');
 			expect(answer.unknown).toEqual([]);
 		});
@@ -64,7 +67,10 @@ describe('classifier: a salt is not its metal', () => {
 			['CoCl2·6H2O, NaBH4, MeOH', ['hydride-mild'], COCL2_NABH4],
 			['NiCl2, NaBH4, MeOH', ['hydride-mild'], 'common practice'],
 			['LiBr, DBU, MeCN', ['base-amine'], 'Masamune–Roush conditions — from memory'],
-			['KI, K2CO3, acetone', ['base-aqueous', 'nucleophile'], 'common practice']
+			['KI, K2CO3, acetone', ['base-aqueous', 'nucleophile'], 'common practice'],
+			['Zn(OTf)2, CH2Cl2', ['lewis-acid'], 'common practice'],
+			['Mg(ClO4)2, MeCN', ['lewis-acid'], 'common practice'],
+			['KOAc, Pd(dppf)Cl2, dioxane', ['palladium-zero'], 'Miyaura borylation — from memory']
 		];
 		for (const [text, expected, source] of cases) {
 			const answer = read(text);
