@@ -102,6 +102,11 @@ describe('classifier: a metal in a metal context is still the metal', () => {
 		});
 	}
 
+	it('names the couple that was written: Fe, NH4Cl is not Fe, HCl (common practice)', () => {
+		expect(names('Fe, NH4Cl, EtOH/H2O')).toEqual(['Fe, NH4Cl', 'EtOH', 'water']);
+		expect(names('Fe/AcOH')).toEqual(['Fe, AcOH']);
+	});
+
 	it('does not take a metal name inside a compound name for the metal', () => {
 		// Diethylzinc is an organometallic, not zinc metal (common practice).
 		expect(read('diethyl zinc').conditions).not.toContain('dissolving-metal');
