@@ -5,6 +5,8 @@
  */
 import { CONDITION_IDS, type ConditionId } from './ids';
 import { foldText } from './normalize';
+import { isNoiseFragment, standsAlone } from './reagent-text';
+import { formulaFits, isBareMetal, readsAsFormula } from './spelling';
 import type { Reagent } from './schemas';
 
 export interface ReagentMatch {
@@ -29,31 +31,24 @@ export const HEAT_THRESHOLD_CELSIUS = 80;
 const WORD_CHAR = /[\p{L}\p{N}]/u;
 const BOUNDARY_AFTER = '(?![\\p{L}\\p{N}])';
 
-// Words that carry no chemistry of their own in reagent text: units, times, atmospheres, filler.
-const FILLER = new Set(
-	(
-		'rt r t room temp temperature ambient then and in with at over overnight followed by to from for under via of on ' +
-		'or neat step steps i ii iii iv v vi vii viii ix x a b c d e cat catalytic equiv eq equivalent equivalents mol ' +
-		'mmol µmol umol m mm n h hr hrs hour hours min mins minute minutes s sec day days week weeks k atm bar psi ml µl ' +
-		'ul l g mg kg ppm vol wt w excess dry dried anhydrous aq aqueous sat satd saturated conc concentrated dilute ' +
-		'solution soln mixture work workup up quench quenched ar argon n2 nitrogen atmosphere inert degassed slow ' +
-		'slowly dropwise addition added add stir stirred stirring cool cooled cold warm warmed warming ice bath one pot ' +
-		'same ca approx about fresh freshly distilled sequential sequentially portionwise portions batch ' +
-		'the an reagent reagents conditions cond mild rxn reaction'
-	).split(' ')
-);
 const FRAGMENT_SPLIT = /[,;\n]|\bthen\b|\bfollowed by\b|\band\b/giu;
 const TEMPERATURE = /(?<![\p{L}\p{N}.])([-+]?\d+(?:\.\d+)?)\s*°\s*c(?![\p{L}])/gu;
 
 interface Spelling {
 	folded: string;
+	/** As listed in rules/reagents.json. */
+	written: string;
+	/** A formula matched loosely fits only typed text that is not another formula. */
+	formula: boolean;
+	/** A bare metal counts only where it stands alone (see reagent-text.ts). */
+	metal: boolean;
 	reagent: Reagent;
 }
 
 interface Candidate {
 	start: number;
 	end: number;
-	reagent: Reagent;
+	spelling: Spelling;
 }
 
 function escapeRegExp(text: string): string {
@@ -70,7 +65,8 @@ function spellingPattern(folded: string): string {
 			let run = '';
 			while (i < folded.length && /[\s,;/·]/.test(folded[i] as string)) run += folded[i++];
 			if (/[,;/]/.test(run)) out += '\\s*[,;/]\\s*';
-			else if (run.includes('·')) out += '(?:\\s*[·.*]\\s*|\\s+)';
+			// An adduct is written with a dot, dash or slash: "HF·py", "HF-py" and "HF/py" are one reagent.
+			else if (run.includes('·')) out += '(?:\\s*[·.*/-]\\s*|\\s+)';
 			else out += '\\s+';
 			continue;
 		}
@@ -82,7 +78,7 @@ function spellingPattern(folded: string): string {
 
 interface Bucket {
 	regex: RegExp;
-	owners: Reagent[];
+	owners: Spelling[];
 }
 
 /**
@@ -101,7 +97,7 @@ function compileBuckets(spellings: Spelling[]): Map<string, Bucket> {
 		const body = group.map((s) => `(${spellingPattern(s.folded)})`).join('|');
 		buckets.set(first, {
 			regex: new RegExp(`(?:${body})${BOUNDARY_AFTER}`, 'uy'),
-			owners: group.map((s) => s.reagent)
+			owners: group
 		});
 	}
 	return buckets;
@@ -115,8 +111,25 @@ function matchAt(buckets: Map<string, Bucket>, text: string, at: number): Candid
 	const m = bucket.regex.exec(text);
 	if (!m) return undefined;
 	const group = m.findIndex((g, i) => i > 0 && g !== undefined);
-	const reagent = bucket.owners[group - 1];
-	return reagent && { start: at, end: at + m[0].length, reagent };
+	const spelling = bucket.owners[group - 1];
+	return spelling && { start: at, end: at + m[0].length, spelling };
+}
+
+/** Whether a match may stand for what was typed: formula case and metal context (see spelling.ts). */
+function fits(candidate: Candidate | undefined, cased: string): Candidate | undefined {
+	if (!candidate) return undefined;
+	const { start, end, spelling } = candidate;
+	if (spelling.formula && !formulaFits(spelling.written, cased.slice(start, end))) return undefined;
+	if (spelling.metal && !standsAlone(cased, start, end)) return undefined;
+	return candidate;
+}
+
+/** A word starts here, and not inside a formula's brackets: "CO" in "Co2(CO)8" starts nothing. */
+function startsWord(text: string, at: number): boolean {
+	if (at === 0) return true;
+	const previous = text[at - 1] as string;
+	if (WORD_CHAR.test(previous)) return false;
+	return !(/[([]/.test(previous) && at >= 2 && /[\p{L}\p{N})\]]/u.test(text[at - 2] as string));
 }
 
 /** Leftmost-longest matches over the text, tried only where a word can begin. */
@@ -129,10 +142,9 @@ function scan(
 	const taken: Candidate[] = [];
 	let at = 0;
 	while (at < folded.length) {
-		const startsWord = at === 0 || !WORD_CHAR.test(folded[at - 1] as string);
-		if (startsWord && folded[at] !== ' ') {
-			const a = matchAt(loose, folded, at);
-			const b = matchAt(exact, cased, at);
+		if (folded[at] !== ' ' && startsWord(folded, at)) {
+			const a = fits(matchAt(loose, folded, at), cased);
+			const b = fits(matchAt(exact, cased, at), cased);
 			const best = a && b ? (b.end > a.end ? b : a) : (a ?? b);
 			if (best) {
 				taken.push(best);
@@ -143,16 +155,6 @@ function scan(
 		at++;
 	}
 	return taken;
-}
-
-function isFillerFragment(fragment: string): boolean {
-	const words = fragment.toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? [];
-	return words.every(
-		(word) =>
-			/^\d+$/.test(word) ||
-			FILLER.has(word) ||
-			/^\d+(h|min|mm|ml|mg|g|mol|equiv|eq|atm|bar|psi|k|c)$/.test(word)
-	);
 }
 
 function trimFragment(fragment: string): string {
@@ -166,12 +168,24 @@ export function compileClassifier(reagents: readonly Reagent[]) {
 	for (const reagent of reagents) {
 		const exactCase = new Set(reagent.exactCase ?? []);
 		for (const spelling of [reagent.name, ...reagent.synonyms]) {
-			const trimmed = spelling.trim();
-			if (exactCase.has(trimmed)) exact.push({ folded: foldText(trimmed, true), reagent });
-			else loose.push({ folded: foldText(trimmed), reagent });
+			const written = spelling.trim();
+			const metal = isBareMetal(written);
+			if (exactCase.has(written)) {
+				exact.push({ folded: foldText(written, true), written, formula: false, metal, reagent });
+				continue;
+			}
+			const formula = readsAsFormula(written);
+			// A formula matches as written, and loosely ("hcl") unless typed as another formula.
+			if (formula) {
+				exact.push({ folded: foldText(written, true), written, formula: false, metal, reagent });
+			}
+			loose.push({ folded: foldText(written), written, formula, metal, reagent });
 		}
 	}
-	const looseBuckets = compileBuckets(loose);
+	// "cocl2" could be COCl2 or CoCl2: a folded spelling two reagents share matches only as written.
+	const owners = new Map<string, Set<Reagent>>();
+	for (const s of loose) owners.set(s.folded, (owners.get(s.folded) ?? new Set()).add(s.reagent));
+	const looseBuckets = compileBuckets(loose.filter((s) => owners.get(s.folded)?.size === 1));
 	const exactBuckets = compileBuckets(exact);
 
 	return function conditionsForReagents(text: string): ReagentClassification {
@@ -179,10 +193,10 @@ export function compileClassifier(reagents: readonly Reagent[]) {
 		const cased = foldText(text, true);
 		const taken = scan(folded, cased, looseBuckets, exactBuckets);
 
-		const matched: ReagentMatch[] = taken.map((c) => ({
-			reagent: c.reagent.name,
-			text: text.slice(c.start, c.end),
-			conditions: [...c.reagent.conditions]
+		const matched: ReagentMatch[] = taken.map(({ start, end, spelling: { reagent } }) => ({
+			reagent: reagent.name,
+			text: text.slice(start, end),
+			conditions: [...reagent.conditions]
 		}));
 		const consumed = text.split('');
 		for (const c of taken) for (let i = c.start; i < c.end; i++) consumed[i] = ' ';
@@ -202,12 +216,14 @@ export function compileClassifier(reagents: readonly Reagent[]) {
 			.split(FRAGMENT_SPLIT)
 			.map((fragment) => trimFragment(fragment).replace(/\s+/g, ' '))
 			.filter(
-				(fragment) => fragment !== '' && WORD_CHAR.test(fragment) && !isFillerFragment(fragment)
+				(fragment) => fragment !== '' && WORD_CHAR.test(fragment) && !isNoiseFragment(fragment)
 			);
 
 		const found = new Set(matched.flatMap((m) => m.conditions));
 		const hazards = new Map<string, string>();
-		for (const c of taken) if (c.reagent.hazard) hazards.set(c.reagent.name, c.reagent.hazard);
+		for (const { spelling } of taken) {
+			if (spelling.reagent.hazard) hazards.set(spelling.reagent.name, spelling.reagent.hazard);
+		}
 
 		return {
 			conditions: CONDITION_IDS.filter((id) => found.has(id)),

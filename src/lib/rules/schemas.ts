@@ -57,7 +57,9 @@ export const reagentSchema = z
 		conditions: z.array(conditionIdSchema),
 		kind: z.enum(REAGENT_KINDS).default('reagent'),
 		exactCase: z.array(text).optional(),
-		hazard: text.optional()
+		hazard: text.optional(),
+		/** Where the row comes from: a book and chapter, a paper, "common practice" or "from memory". */
+		source: text.optional()
 	})
 	.superRefine((reagent, ctx) => {
 		if (reagent.kind === 'reagent' && reagent.conditions.length === 0) {

@@ -6,7 +6,7 @@
 import type { z } from 'zod';
 import { CONDITION_IDS, PROTECTING_GROUP_IDS } from './ids';
 import { formatIssue, formatZodIssues, RuleTableError } from './issues';
-import { foldText } from './normalize';
+import { spellingKey } from './spelling';
 import {
 	conditionsFileSchema,
 	protectingGroupConditionsFileSchema,
@@ -74,12 +74,14 @@ function checkEachOnce(
 function checkReagentSpellings(reagents: readonly Reagent[], problems: string[]) {
 	const owner = new Map<string, string>();
 	reagents.forEach((reagent, index) => {
+		const exactCase = new Set(reagent.exactCase ?? []);
 		const spellings: [string, PropertyKey[]][] = [
 			[reagent.name, [index, 'name']],
 			...reagent.synonyms.map((s, i): [string, PropertyKey[]] => [s, [index, 'synonyms', i]])
 		];
 		for (const [spelling, path] of spellings) {
-			const key = foldText(spelling.trim()).replace(/\s+/g, ' ');
+			// Formulas keep their case (CoCl2 is not COCl2); names fold.
+			const key = spellingKey(spelling, exactCase.has(spelling.trim()));
 			const previous = owner.get(key);
 			if (previous !== undefined && previous !== reagent.name) {
 				problems.push(
