@@ -6,6 +6,8 @@ import {
 } from 'rate-limiter-flexible';
 import type { Sequelize } from 'sequelize';
 import { dbReady, User } from '../db';
+import { openSqliteConnection } from '../db/connection';
+import { queuedWrite } from '../db/write-queue';
 import { normaliseEmail } from './credentials';
 
 // What a stranger can do and what they cannot: five wrong passwords for one account *from one
@@ -44,6 +46,26 @@ async function limiters(): Promise<Limiters> {
 
 type SqliteConnectionManager = { getConnection(options: object): Promise<unknown> };
 
+/**
+ * The limiter's store wraps each count in a SAVEPOINT on the connection it is given. On
+ * Sequelize's shared connection, other queries would run inside that transaction, and a count
+ * that met the lock could leave it open. A file database therefore gets a connection of its own
+ * (its writes go through the process's write queue: see limiterWrite); an in-memory database
+ * (tests) has only Sequelize's one connection.
+ */
+async function sqliteConnectionFor(sequelize: Sequelize): Promise<unknown> {
+	const { options } = sequelize as unknown as { options: { storage?: string } };
+	const storage = options.storage ?? ':memory:';
+	if (storage !== ':memory:') return openSqliteConnection(storage);
+	const manager = sequelize.connectionManager as unknown as SqliteConnectionManager;
+	return manager.getConnection({});
+}
+
+/** A limiter write, queued with the process's other SQLite writes (PostgreSQL: run at once). */
+function limiterWrite<T>(work: () => Promise<T>): Promise<T> {
+	return queuedWrite(User.sequelize!, work);
+}
+
 async function createLimiters(sequelize: Sequelize): Promise<Limiters> {
 	const common = { tableName: TABLE, tableCreated: true, duration: SIGN_IN_LIMITS.windowSeconds };
 	let make: (keyPrefix: string, points: number) => RateLimiterStoreAbstract;
@@ -57,8 +79,7 @@ async function createLimiters(sequelize: Sequelize): Promise<Limiters> {
 				points
 			});
 	} else {
-		const manager = sequelize.connectionManager as unknown as SqliteConnectionManager;
-		const connection = await manager.getConnection({});
+		const connection = await sqliteConnectionFor(sequelize);
 		make = (keyPrefix, points) =>
 			new RateLimiterSQLite({
 				...common,
@@ -97,8 +118,8 @@ export async function takeSignInAttempt(email: string, address: string): Promise
 	if (account && account.remainingPoints <= 0) return refusal(account);
 	if (addressCount && addressCount.remainingPoints <= 0) return refusal(addressCount);
 	try {
-		await perAddress.consume(address);
-		await perAccountFromAddress.consume(key);
+		await limiterWrite(() => perAddress.consume(address));
+		await limiterWrite(() => perAccountFromAddress.consume(key));
 		return { allowed: true };
 	} catch (rejection) {
 		if (rejection instanceof RateLimiterRes) return refusal(rejection);
@@ -114,8 +135,6 @@ export async function settleSignInAttempt(
 ): Promise<void> {
 	if (!succeeded) return;
 	const { perAccountFromAddress, perAddress } = await limiters();
-	await Promise.all([
-		perAccountFromAddress.delete(accountKey(email, address)),
-		perAddress.reward(address, 1)
-	]);
+	await limiterWrite(() => perAccountFromAddress.delete(accountKey(email, address)));
+	await limiterWrite(() => perAddress.reward(address, 1));
 }

@@ -20,6 +20,11 @@ class TunedDatabase extends sqlite3.Database {
 		});
 	}
 }
+/** A connection of its own to a SQLite file, tuned like Sequelize's (busy timeout, WAL). */
+export function openSqliteConnection(filename: string): sqlite3.Database {
+	return new TunedDatabase(filename);
+}
+
 const tunedSqlite = Object.assign(Object.create(sqlite3) as typeof sqlite3, {
 	Database: TunedDatabase
 });

@@ -54,6 +54,18 @@ export class WriteQueue {
 	}
 }
 
+const queues = new WeakMap<Sequelize, WriteQueue>();
+
+/**
+ * Runs a write that does not go through Sequelize (a raw sqlite3 connection, such as the sign-in
+ * limiter's) in the same queue, so it never races this process's transactions for the lock.
+ * Without a queue (PostgreSQL) it just runs, e.g. `await queuedWrite(sequelize, () => save())`.
+ */
+export function queuedWrite<T>(sequelize: Sequelize, work: () => Promise<T>): Promise<T> {
+	const queue = queues.get(sequelize);
+	return queue ? queue.run(work) : work();
+}
+
 const WRITE_QUERY_TYPES = new Set<string>([
 	QueryTypes.INSERT,
 	QueryTypes.UPDATE,
@@ -76,6 +88,7 @@ function isWrite(sql: unknown, options: { type?: string } | undefined): boolean 
  * would bypass the queue; they still begin IMMEDIATE, so they wait on the busy timeout.
  */
 export function serialiseWrites(sequelize: Sequelize, queue = new WriteQueue()): void {
+	queues.set(sequelize, queue);
 	const transaction = sequelize.transaction.bind(sequelize) as (
 		...args: unknown[]
 	) => Promise<unknown>;
