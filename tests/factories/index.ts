@@ -1,5 +1,13 @@
 import type { RequestEvent } from '@sveltejs/kit';
-import { closeDatabase, dbReady, Membership, openDatabase, Project, Team, User } from '../../src/lib/server/db';
+import {
+	closeDatabase,
+	dbReady,
+	Membership,
+	openDatabase,
+	Project,
+	Team,
+	User
+} from '../../src/lib/server/db';
 import type { Role } from '../../src/lib/policy';
 import type { SessionUser } from '../../src/lib/types';
 
@@ -42,7 +50,8 @@ export async function makeTeamWithEveryRole() {
 		viewer: await makeUser('Viewer'),
 		outsider: await makeUser('Outsider')
 	};
-	for (const role of ['lead', 'chemist', 'reviewer', 'viewer'] as const) await join(people[role], team.id, role);
+	for (const role of ['lead', 'chemist', 'reviewer', 'viewer'] as const)
+		await join(people[role], team.id, role);
 	await join(people.outsider, other.id, 'lead');
 	return { team, other, people };
 }
@@ -58,7 +67,12 @@ export function fakeEvent(options: {
 	const request = new Request(url, {
 		method: options.method ?? 'GET',
 		headers: { 'content-type': 'application/json' },
-		body: options.body === undefined ? undefined : typeof options.body === 'string' ? options.body : JSON.stringify(options.body)
+		body:
+			options.body === undefined
+				? undefined
+				: typeof options.body === 'string'
+					? options.body
+					: JSON.stringify(options.body)
 	});
 	return {
 		url,
@@ -67,4 +81,26 @@ export function fakeEvent(options: {
 		params: {},
 		getClientAddress: () => '127.0.0.1'
 	} as unknown as RequestEvent;
+}
+
+/** Calls an endpoint handler as `user` and reads its JSON answer, e.g. `callApi(POST, { user, method: 'POST', body })`. */
+export async function callApi(
+	handler: unknown,
+	options: {
+		user: SessionUser;
+		method: string;
+		body?: unknown;
+		params?: Record<string, string>;
+		path?: string;
+	}
+) {
+	const event = fakeEvent({
+		user: options.user,
+		path: options.path ?? '/api/test',
+		method: options.method,
+		body: options.body
+	}) as RequestEvent & { params: Record<string, string> };
+	event.params = options.params ?? {};
+	const response = await (handler as (e: RequestEvent) => Promise<Response>)(event);
+	return { status: response.status, body: await response.json() };
 }

@@ -3,7 +3,6 @@
 // never a 500, never a hang (the pool's time budget ends every call). The seed is printed so a
 // failure can be replayed: FUZZ_SEED=<n> npx vitest run tests/unit/fuzz-structures.test.ts
 
-import type { RequestEvent } from '@sveltejs/kit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POST as analyze } from '../../src/routes/api/analyze/+server';
 import { POST as check } from '../../src/routes/api/check/+server';
@@ -13,7 +12,7 @@ import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import type { Project } from '../../src/lib/server/db';
 import { closeChemistryPool } from '../../src/lib/server/chem-pool/pool';
 import { uploadRouteFile } from '../factories/route-upload';
-import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+import { callApi, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 import { makeMalformedStructures } from '../factories/malformed-structures';
 
 const SEED = Number(process.env.FUZZ_SEED ?? 20261203);
@@ -26,22 +25,12 @@ let version = 1;
 
 type Answer = { status: number; body: unknown };
 
-async function call(
+const call = (
 	handler: unknown,
 	method: string,
 	body: unknown,
 	params: Record<string, string> = {}
-): Promise<Answer> {
-	const event = fakeEvent({
-		user: f.people.chemist,
-		path: '/api/fuzz',
-		method,
-		body
-	}) as RequestEvent & { params: Record<string, string> };
-	event.params = params;
-	const response = await (handler as (e: RequestEvent) => Promise<Response>)(event);
-	return { status: response.status, body: await response.json() };
-}
+): Promise<Answer> => callApi(handler, { user: f.people.chemist, method, body, params });
 
 async function upload(text: string): Promise<Answer> {
 	return (await uploadRouteFile({

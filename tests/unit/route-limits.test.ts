@@ -3,7 +3,6 @@
 // Over a limit → 422 naming the intermediate, nothing stored; merely unreadable drafts are kept.
 
 import { readFileSync } from 'node:fs';
-import type { RequestEvent } from '@sveltejs/kit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as routeList from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
 import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
@@ -11,7 +10,7 @@ import { Intermediate, Route, type Project } from '../../src/lib/server/db';
 import { STRUCTURE_LIMITS } from '../../src/lib/chem/limits';
 import { closeChemistryPool } from '../../src/lib/server/chem-pool/pool';
 import { uploadRouteFile } from '../factories/route-upload';
-import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+import { callApi, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 const killer = readFileSync(
 	new URL('../fixtures/declares-99999999-atoms-v3000.mol', import.meta.url),
@@ -33,22 +32,8 @@ const route = (structures: string[], name = 'Limits route') => ({
 		.map((_, i) => ({ id: `s${i + 1}`, from: [`n${i + 1}`], to: `n${i + 2}` }))
 });
 
-async function call(
-	handler: unknown,
-	params: Record<string, string>,
-	method: string,
-	body?: unknown
-) {
-	const event = fakeEvent({
-		user: f.people.chemist,
-		path: '/api/x',
-		method,
-		body
-	}) as RequestEvent & { params: Record<string, string> };
-	event.params = params;
-	const response = await (handler as (e: RequestEvent) => Promise<Response>)(event);
-	return { status: response.status, body: await response.json() };
-}
+const call = (handler: unknown, params: Record<string, string>, method: string, body?: unknown) =>
+	callApi(handler, { user: f.people.chemist, method, body, params });
 
 async function upload(name: string, text: string) {
 	return (await uploadRouteFile({ user: f.people.chemist, projectId: project.id, name, text })) as {

@@ -1,6 +1,7 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { can, ROLE_LABELS, type Action, type Role } from '../../policy';
 import { paths } from '../../paths';
+import { isUuid } from '../../uuid';
 import { dbReady, Membership, Project, Route } from '../db';
 import type { SessionUser } from './credentials';
 
@@ -100,8 +101,4 @@ export async function requireRouteAction(event: GuardEvent, routeId: string, act
 	if (!route?.project || !(await roleIn(user.id, route.project.teamId))) notFound('That route');
 	const { role } = await requireTeamAction(event, route.project.teamId, action);
 	return { user, role, route, project: route.project };
-}
-
-function isUuid(value: string): boolean {
-	return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
 }

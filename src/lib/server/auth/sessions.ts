@@ -1,4 +1,5 @@
 import { Op } from 'sequelize';
+import { isUuid } from '../../uuid';
 import { dbReady, Session, User } from '../db';
 import type { SessionUser } from './credentials';
 
@@ -6,7 +7,6 @@ import type { SessionUser } from './credentials';
 export const SESSION_MAX_AGE_SECONDS = 12 * 60 * 60;
 // Moving the end along costs a write, so it happens at most this often per session.
 const EXTEND_GRANULARITY_MS = 10 * 60 * 1000;
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 const endFromNow = () => new Date(Date.now() + SESSION_MAX_AGE_SECONDS * 1000);
 
@@ -28,7 +28,7 @@ export async function userForSession(
 	sessionId: string,
 	userId: string
 ): Promise<SessionUser | null> {
-	if (!UUID.test(sessionId) || !UUID.test(userId)) return null;
+	if (!isUuid(sessionId) || !isUuid(userId)) return null;
 	await dbReady();
 	const session = await Session.findOne({
 		where: { id: sessionId, userId, expiresAt: { [Op.gt]: new Date() } },
@@ -44,7 +44,7 @@ export async function userForSession(
 
 /** Ends one session on every server: its cookie is refused from the next request on. */
 export async function endSession(sessionId: string): Promise<void> {
-	if (!UUID.test(sessionId)) return;
+	if (!isUuid(sessionId)) return;
 	await dbReady();
 	await Session.destroy({ where: { id: sessionId } });
 }
@@ -52,6 +52,6 @@ export async function endSession(sessionId: string): Promise<void> {
 /** Ends every session of the user except `keep` (the browser that asked); returns how many. */
 export async function endOtherSessions(userId: string, keep: string | null): Promise<number> {
 	await dbReady();
-	const others = keep && UUID.test(keep) ? { id: { [Op.ne]: keep } } : {};
+	const others = keep && isUuid(keep) ? { id: { [Op.ne]: keep } } : {};
 	return Session.destroy({ where: { userId, ...others } });
 }
