@@ -53,7 +53,7 @@ describe('rule-table loader: error messages name file, path and reason', () => {
 		const rows = raw.protectingGroups as { stability: Record<string, string> }[];
 		delete rows[2]!.stability.fluoride;
 		expect(problemsOf(raw)).toEqual([
-			'rules/protecting-groups.json: [2].stability.fluoride: missing rating (every condition class needs one: stable, caution or labile)'
+			'rules/protecting-groups.json: [2].stability.fluoride: missing rating (every broader condition class needs one: stable, caution or labile)'
 		]);
 	});
 
@@ -136,7 +136,7 @@ describe('rule-table loader: error messages name file, path and reason', () => {
 		const problems = problemsOf(raw);
 		expect(problems).toContain('rules/conditions.json: [0]: unknown field "colour"');
 		expect(problems).toContain(
-			'rules/reactivity.json: [0].rating: unknown reactivity rating "explodes" (valid: reacts, caution)'
+			'rules/reactivity.json: [0].rating: unknown reactivity rating "explodes" (valid: reacts, caution, none)'
 		);
 	});
 

@@ -4,28 +4,51 @@
  * the JSON files in rules/ must use them and the loader rejects anything else.
  */
 
-/** Condition classes, in the order the rule table lists them. */
+/**
+ * Condition classes, in the order the rule table lists them. A class with `refines` in
+ * rules/conditions.json is a finer class inside a broader one (e.g. `organometallic-grignard`
+ * inside `organometallic`): it carries its own ratings only where they differ and otherwise
+ * inherits the broader class's, so a finer class is never milder than the data says.
+ */
 export const CONDITION_IDS = [
 	'acid-strong',
 	'acid-mild',
+	'acid-mild-aprotic',
 	'lewis-acid',
+	'lewis-acid-mild',
 	'base-aqueous',
+	'base-aqueous-mild',
 	'base-amine',
 	'base-strong',
+	'base-strong-hydride',
 	'nucleophile',
 	'organometallic',
+	'organometallic-grignard',
+	'organometallic-soft',
 	'hydride-strong',
+	'hydride-strong-borane',
+	'hydride-strong-borohydride',
 	'hydride-mild',
+	'hydride-mild-imine',
 	'hydrogenation',
+	'hydrogenation-poisoned',
+	'hydrogenation-homogeneous',
 	'dissolving-metal',
+	'dissolving-metal-acid',
 	'oxidant-mild',
+	'oxidant-mild-allylic',
+	'oxidant-mild-primary',
+	'oxidant-mild-aldehyde',
 	'oxidant-strong',
+	'oxidant-strong-alkene',
 	'oxidant-electron-transfer',
 	'periodate',
 	'fluoride',
+	'fluoride-buffered',
 	'palladium-zero',
 	'soft-metal',
 	'acylating',
+	'acylating-amine',
 	'alkylating',
 	'heat'
 ] as const;
@@ -108,6 +131,13 @@ export type StabilityRating = (typeof STABILITY_RATINGS)[number];
 /** How a free group fares under a condition class; a pair with no entry means no known problem. */
 export const REACTIVITY_RATINGS = ['reacts', 'caution'] as const;
 export type ReactivityRating = (typeof REACTIVITY_RATINGS)[number];
+
+/**
+ * What a reactivity.json row may say: a rating, or `none` — only for a finer class, where it
+ * says that the broader class's entry does not apply (Ar–F under a Grignard reagent).
+ */
+export const REACTIVITY_ROW_RATINGS = [...REACTIVITY_RATINGS, 'none'] as const;
+export type ReactivityRowRating = (typeof REACTIVITY_ROW_RATINGS)[number];
 
 /** What a reagents.json entry is: only `reagent` entries must bring a condition class. */
 export const REAGENT_KINDS = ['reagent', 'solvent', 'additive', 'workup'] as const;

@@ -7,7 +7,7 @@ import {
 	CONDITION_IDS,
 	FREE_GROUP_IDS,
 	PROTECTING_GROUP_IDS,
-	REACTIVITY_RATINGS,
+	REACTIVITY_ROW_RATINGS,
 	REAGENT_KINDS,
 	STABILITY_RATINGS
 } from './ids';
@@ -33,11 +33,15 @@ export const stabilityRatingSchema = z.enum(STABILITY_RATINGS, {
 			? 'missing rating (every condition class needs one: stable, caution or labile)'
 			: `unknown rating ${JSON.stringify(issue.input)} (valid: ${STABILITY_RATINGS.join(', ')})`
 });
-export const reactivityRatingSchema = idEnum('reactivity rating', REACTIVITY_RATINGS);
+export const reactivityRatingSchema = idEnum('reactivity rating', REACTIVITY_ROW_RATINGS);
 
-/** One row of rules/conditions.json, e.g. `{ id: 'fluoride', label: 'Fluoride', … }`. */
+/**
+ * One row of rules/conditions.json, e.g. `{ id: 'fluoride', label: 'Fluoride', … }`. `refines`
+ * names the broader class a finer one sits in (one level: the broader class refines nothing).
+ */
 export const conditionSchema = z.strictObject({
 	id: conditionIdSchema,
+	refines: conditionIdSchema.optional(),
 	label: text,
 	description: text,
 	examples: z.array(text).min(1)
@@ -82,7 +86,10 @@ export const reagentSchema = z
 	});
 export const reagentsFileSchema = z.array(reagentSchema);
 
-/** One row of rules/reactivity.json: a free group under a condition class. */
+/**
+ * One row of rules/reactivity.json: a free group under a condition class. A finer class with no
+ * row of its own inherits the broader class's row; `none` (finer classes only) says it does not.
+ */
 export const reactivitySchema = z.strictObject({
 	group: freeGroupIdSchema,
 	condition: conditionIdSchema,
@@ -118,31 +125,42 @@ export const installSchema = methodSchema.extend({ transforms: z.array(transform
  * missing cell is a load error); `source` credits the ratings. The perception half of the same
  * row (label, protects, patterns, …) is validated by src/lib/chem/patterns.ts, hence `loose`.
  */
-export const protectingGroupConditionsSchema = z.object({
-	id: protectingGroupIdSchema,
-	install: installSchema,
-	remove: z.array(methodSchema).min(1),
-	stability: z.record(conditionIdSchema, stabilityRatingSchema, {
-		// zod reports extra keys of an enum-keyed record as `unrecognized_keys` (not in its types).
-		error: (issue) => {
-			const keys = (issue as { keys?: unknown }).keys;
-			return Array.isArray(keys)
-				? `unknown condition id ${keys.map((key) => JSON.stringify(key)).join(', ')} (valid: ${CONDITION_IDS.join(', ')})`
-				: 'must be an object of condition id → rating';
-		}
-	}),
-	/**
-	 * Exceptions to a class rating for named reagents (names as in rules/reagents.json), e.g.
-	 * Fmoc is `caution` under base-amine (tertiary amines) but `labile` to piperidine.
-	 */
-	reagentRatings: z
-		.array(z.strictObject({ reagent: text, condition: conditionIdSchema, rating: stabilityRatingSchema, reason: text }))
-		.default([]),
-	notes: z.array(text),
-	/** Installing it makes a new stereocentre (THP): said, and counted as a caution, on a chiral substrate. */
-	newStereocentre: text.optional(),
-	source: text
-}).loose();
+export const protectingGroupConditionsSchema = z
+	.object({
+		id: protectingGroupIdSchema,
+		install: installSchema,
+		remove: z.array(methodSchema).min(1),
+		// Every broader class must be rated (validate.ts checks, as it knows which classes are finer);
+		// a finer class is rated only where it differs from its broader class.
+		stability: z.partialRecord(conditionIdSchema, stabilityRatingSchema, {
+			// zod reports extra keys of an enum-keyed record as `unrecognized_keys` (not in its types).
+			error: (issue) => {
+				const keys = (issue as { keys?: unknown }).keys;
+				return Array.isArray(keys)
+					? `unknown condition id ${keys.map((key) => JSON.stringify(key)).join(', ')} (valid: ${CONDITION_IDS.join(', ')})`
+					: 'must be an object of condition id → rating';
+			}
+		}),
+		/**
+		 * Exceptions to a class rating for named reagents (names as in rules/reagents.json), e.g.
+		 * Fmoc is `caution` under base-amine (tertiary amines) but `labile` to piperidine.
+		 */
+		reagentRatings: z
+			.array(
+				z.strictObject({
+					reagent: text,
+					condition: conditionIdSchema,
+					rating: stabilityRatingSchema,
+					reason: text
+				})
+			)
+			.default([]),
+		notes: z.array(text),
+		/** Installing it makes a new stereocentre (THP): said, and counted as a caution, on a chiral substrate. */
+		newStereocentre: text.optional(),
+		source: text
+	})
+	.loose();
 export const protectingGroupConditionsFileSchema = z.array(protectingGroupConditionsSchema);
 
 export type Condition = z.output<typeof conditionSchema>;

@@ -48,7 +48,13 @@ export interface RuleTable {
 	 * `reagents` are the canonical names of the reagents that brought the condition; a PG row's
 	 * `reagentRatings` refine the class rating for them (the worst one applies).
 	 */
-	stabilityOf(pg: ProtectingGroupId, condition: ConditionId, reagents?: readonly string[]): StabilityAnswer;
+	stabilityOf(
+		pg: ProtectingGroupId,
+		condition: ConditionId,
+		reagents?: readonly string[]
+	): StabilityAnswer;
+	/** The PG's rating under every class, finer classes resolved (what the API and screens show). */
+	ratingsOf(pg: ProtectingGroupId): Record<ConditionId, StabilityRating>;
 	/** `undefined` means no known problem (or a team override of `none`). */
 	reactivityOf(group: FreeGroupId, condition: ConditionId): ReactivityAnswer | undefined;
 	conditionsForReagents: ReagentClassifier;
@@ -68,6 +74,8 @@ interface Base {
 	conditions: Map<ConditionId, Condition>;
 	pgs: Map<ProtectingGroupId, ProtectingGroupConditions>;
 	reactivity: Map<string, ReactivityEntry>;
+	/** Finer class → the broader class it inherits from. */
+	broader: Map<ConditionId, ConditionId>;
 }
 
 const pairKey = (a: string, b: ConditionId) => `${a}\u0000${b}`;
@@ -80,8 +88,34 @@ function prepare(data: RuleData): Base {
 		classify: compileClassifier(data.reagents),
 		conditions: new Map(data.conditions.map((c) => [c.id, c])),
 		pgs: new Map(data.protectingGroups.map((pg) => [pg.id, pg])),
-		reactivity: new Map(data.reactivity.map((r) => [pairKey(r.group, r.condition), r]))
+		reactivity: new Map(data.reactivity.map((r) => [pairKey(r.group, r.condition), r])),
+		broader: new Map(
+			data.conditions.flatMap((c) => (c.refines ? [[c.id, c.refines] as const] : []))
+		)
 	};
+}
+
+/**
+ * A PG's default rating under one class, refined for the reagents that brought it where the row
+ * names them (each reagent its own rating, else the class rating; the worst one applies).
+ */
+function withReagentRatings(
+	row: ProtectingGroupConditions,
+	condition: ConditionId,
+	rating: StabilityRating,
+	reagents: readonly string[]
+): StabilityAnswer {
+	const classAnswer: StabilityAnswer = { rating, source: row.source, layer: 'default' };
+	const answers = reagents.map((name): StabilityAnswer => {
+		const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
+		return entry
+			? { rating: entry.rating, reason: entry.reason, source: row.source, layer: 'default' }
+			: classAnswer;
+	});
+	return answers.reduce(
+		(worst, next) => (SEVERITY[next.rating] > SEVERITY[worst.rating] ? next : worst),
+		classAnswer
+	);
 }
 
 function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
@@ -91,6 +125,10 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 	const reactivityOverride = new Map(
 		(overrides?.reactivity ?? []).map((row) => [pairKey(row.group, row.condition), row])
 	);
+	const withBroader = (condition: ConditionId): ConditionId[] => {
+		const broader = base.broader.get(condition);
+		return broader ? [condition, broader] : [condition];
+	};
 	const overrideSource = (source: string | undefined) =>
 		source ?? `${overrides?.name} (team override)`;
 
@@ -111,45 +149,53 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 			return found;
 		},
 		stabilityOf(pg, condition, reagents = []) {
-			const override = stabilityOverride.get(pairKey(pg, condition));
-			if (override) {
-				return {
-					rating: override.rating,
-					source: overrideSource(override.source),
-					reason: override.reason,
-					layer: 'override'
-				};
-			}
 			const row = table.protectingGroup(pg);
-			const classAnswer: StabilityAnswer = { rating: row.stability[condition], source: row.source, layer: 'default' };
-			if (reagents.length === 0) return classAnswer;
-			// Each reagent gets its own rating where the row names it, else the class rating.
-			const answers = reagents.map((name): StabilityAnswer => {
-				const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
-				return entry ? { rating: entry.rating, reason: entry.reason, source: row.source, layer: 'default' } : classAnswer;
-			});
-			return answers.reduce((worst, next) => (SEVERITY[next.rating] > SEVERITY[worst.rating] ? next : worst));
+			// Most specific first: the class itself (team layer, then defaults), then its broader class.
+			for (const id of withBroader(condition)) {
+				const override = stabilityOverride.get(pairKey(pg, id));
+				if (override) {
+					return {
+						rating: override.rating,
+						source: overrideSource(override.source),
+						reason: override.reason,
+						layer: 'override'
+					};
+				}
+				const rating = row.stability[id];
+				if (rating !== undefined) return withReagentRatings(row, id, rating, reagents);
+			}
+			throw new Error(`${pg} has no rating under ${condition} or its broader class`);
+		},
+		ratingsOf(pg) {
+			const ids = base.data.conditions.map((c) => c.id);
+			return Object.fromEntries(ids.map((id) => [id, table.stabilityOf(pg, id).rating])) as Record<
+				ConditionId,
+				StabilityRating
+			>;
 		},
 		reactivityOf(group, condition) {
-			const override = reactivityOverride.get(pairKey(group, condition));
-			if (override) {
-				if (override.rating === 'none') return undefined;
+			for (const id of withBroader(condition)) {
+				const override = reactivityOverride.get(pairKey(group, id));
+				if (override) {
+					if (override.rating === 'none') return undefined;
+					return {
+						rating: override.rating,
+						reason: override.reason,
+						source: overrideSource(override.source),
+						layer: 'override'
+					};
+				}
+				const entry = base.reactivity.get(pairKey(group, id));
+				if (!entry) continue;
+				if (entry.rating === 'none') return undefined;
 				return {
-					rating: override.rating,
-					reason: override.reason,
-					source: overrideSource(override.source),
-					layer: 'override'
-				};
-			}
-			const entry = base.reactivity.get(pairKey(group, condition));
-			return (
-				entry && {
 					rating: entry.rating,
 					reason: entry.reason,
 					source: entry.source,
 					layer: 'default'
-				}
-			);
+				};
+			}
+			return undefined;
 		},
 		conditionsForReagents: base.classify
 	};

@@ -153,6 +153,9 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 			problems
 		);
 	}
+	if (conditions) checkRefinements(conditions, problems);
+	if (conditions && protectingGroups) checkBroadRatings(conditions, protectingGroups, problems);
+	if (conditions && reactivity) checkNoneRows(conditions, reactivity, problems);
 	if (reagents) checkReagentSpellings(reagents, problems);
 	if (reagents && protectingGroups) checkReagentRatings(protectingGroups, reagents, problems);
 	if (protectingGroups) checkTransformCoverage(protectingGroups, problems);
@@ -165,15 +168,32 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 }
 
 /** A reagent-level rating must name a known reagent that brings the condition it refines. */
-function checkReagentRatings(pgs: ProtectingGroupConditions[], reagents: Reagent[], problems: string[]) {
+function checkReagentRatings(
+	pgs: ProtectingGroupConditions[],
+	reagents: Reagent[],
+	problems: string[]
+) {
 	const byName = new Map(reagents.map((r) => [r.name, r]));
 	pgs.forEach((pg, index) => {
 		pg.reagentRatings.forEach((entry, i) => {
 			const reagent = byName.get(entry.reagent);
 			const where = [index, 'reagentRatings', i, 'reagent'];
-			if (!reagent) problems.push(formatIssue(RULE_FILES.protectingGroups, where, `unknown reagent "${entry.reagent}" (not a name in ${RULE_FILES.reagents})`));
+			if (!reagent)
+				problems.push(
+					formatIssue(
+						RULE_FILES.protectingGroups,
+						where,
+						`unknown reagent "${entry.reagent}" (not a name in ${RULE_FILES.reagents})`
+					)
+				);
 			else if (!reagent.conditions.includes(entry.condition)) {
-				problems.push(formatIssue(RULE_FILES.protectingGroups, where, `"${entry.reagent}" does not bring ${entry.condition} in ${RULE_FILES.reagents}`));
+				problems.push(
+					formatIssue(
+						RULE_FILES.protectingGroups,
+						where,
+						`"${entry.reagent}" does not bring ${entry.condition} in ${RULE_FILES.reagents}`
+					)
+				);
 			}
 		});
 	});
@@ -189,10 +209,81 @@ function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: stri
 		const where = [index, 'install', 'transforms'];
 		for (const group of protects) {
 			const count = drawn.filter((g) => g === group).length;
-			if (count !== 1) problems.push(formatIssue(RULE_FILES.protectingGroups, where, `${count === 0 ? 'no' : count} transforms for "${group}" (each protected group needs exactly one)`));
+			if (count !== 1)
+				problems.push(
+					formatIssue(
+						RULE_FILES.protectingGroups,
+						where,
+						`${count === 0 ? 'no' : count} transforms for "${group}" (each protected group needs exactly one)`
+					)
+				);
 		}
 		for (const group of new Set(drawn)) {
-			if (!protects.includes(group)) problems.push(formatIssue(RULE_FILES.protectingGroups, where, `a transform for "${group}", which the row does not protect`));
+			if (!protects.includes(group))
+				problems.push(
+					formatIssue(
+						RULE_FILES.protectingGroups,
+						where,
+						`a transform for "${group}", which the row does not protect`
+					)
+				);
+		}
+	});
+}
+
+/** A finer class sits in a broader one, one level deep: `organometallic-grignard` → `organometallic`. */
+function checkRefinements(conditions: Condition[], problems: string[]) {
+	const refines = new Map(conditions.map((c) => [c.id, c.refines]));
+	conditions.forEach((condition, index) => {
+		if (!condition.refines) return;
+		const where = [index, 'refines'];
+		if (condition.refines === condition.id) {
+			problems.push(formatIssue(RULE_FILES.conditions, where, 'a class cannot refine itself'));
+		} else if (refines.get(condition.refines)) {
+			problems.push(
+				formatIssue(
+					RULE_FILES.conditions,
+					where,
+					`"${condition.refines}" is itself a finer class; refine its broader class "${refines.get(condition.refines)}"`
+				)
+			);
+		}
+	});
+}
+
+/** Every protecting group rates every broader class; finer classes inherit where they are not rated. */
+function checkBroadRatings(
+	conditions: Condition[],
+	pgs: ProtectingGroupConditions[],
+	problems: string[]
+) {
+	const broad = conditions.filter((c) => !c.refines).map((c) => c.id);
+	pgs.forEach((pg, index) => {
+		for (const id of broad) {
+			if (pg.stability[id] === undefined)
+				problems.push(
+					formatIssue(
+						RULE_FILES.protectingGroups,
+						[index, 'stability', id],
+						'missing rating (every broader condition class needs one: stable, caution or labile)'
+					)
+				);
+		}
+	});
+}
+
+/** `none` only makes sense where a broader class's row could otherwise be inherited. */
+function checkNoneRows(conditions: Condition[], rows: ReactivityEntry[], problems: string[]) {
+	const finer = new Set(conditions.filter((c) => c.refines).map((c) => c.id));
+	rows.forEach((row, index) => {
+		if (row.rating === 'none' && !finer.has(row.condition)) {
+			problems.push(
+				formatIssue(
+					RULE_FILES.reactivity,
+					[index, 'rating'],
+					`"none" is only for a finer class (${row.condition} refines nothing; leave the pair out instead)`
+				)
+			);
 		}
 	});
 }

@@ -11,5 +11,11 @@ export const GET: RequestHandler = apiHandler(async (event) => {
 	const table = loadRuleTable();
 	// Compiled search patterns are openchemlib objects; the rows are what the files say.
 	const groups = perceptionRules().groups.map(({ compiled: _compiled, ...row }) => row);
-	return json({ conditions: table.conditions, protectingGroups: table.protectingGroups, groups });
+	// A finer class a row does not rate inherits its broader class's rating; the answer spells
+	// every class out so that clients need not know the inheritance.
+	const protectingGroups = table.protectingGroups.map((row) => ({
+		...row,
+		stability: table.ratingsOf(row.id)
+	}));
+	return json({ conditions: table.conditions, protectingGroups, groups });
 });
