@@ -50,6 +50,9 @@ export const CONDITION_IDS = [
 	'acylating',
 	'acylating-amine',
 	'alkylating',
+	'fluorinating',
+	'dehydrating',
+	'metathesis',
 	'heat'
 ] as const;
 export type ConditionId = (typeof CONDITION_IDS)[number];
