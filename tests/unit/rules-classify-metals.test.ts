@@ -58,16 +58,16 @@ describe('classifier: a salt is not its metal', () => {
 
 	it('reads the listed salts and additives with their classes', () => {
 		const cases: [string, ConditionId[], string][] = [
-			['K3PO4, Pd(PPh3)4, dioxane/H2O', ['base-aqueous', 'palladium-zero'], 'common practice'],
+			['K3PO4, Pd(PPh3)4, dioxane/H2O', ['base-aqueous-mild', 'palladium-zero'], 'common practice'],
 			['NaOtBu, Pd2(dba)3, toluene', ['base-strong', 'palladium-zero'], 'common practice'],
 			['CuSO4, sodium ascorbate', ['soft-metal'], CUAAC],
-			['K3Fe(CN)6, K2CO3, OsO4 (cat.)', ['base-aqueous', 'oxidant-strong'], AD],
+			['K3Fe(CN)6, K2CO3, OsO4 (cat.)', ['base-aqueous', 'oxidant-strong-alkene'], AD],
 			['Zn(BH4)2, Et2O', ['hydride-mild'], ZN_BH4],
 			['ZnBr2, CH2Cl2', ['lewis-acid'], WUTS],
 			['CoCl2·6H2O, NaBH4, MeOH', ['hydride-mild'], COCL2_NABH4],
 			['NiCl2, NaBH4, MeOH', ['hydride-mild'], 'common practice'],
 			['LiBr, DBU, MeCN', ['base-amine'], 'Masamune–Roush conditions — from memory'],
-			['KI, K2CO3, acetone', ['base-aqueous', 'nucleophile'], 'common practice'],
+			['KI, K2CO3, acetone', ['base-aqueous-mild', 'nucleophile'], 'common practice'],
 			['Zn(OTf)2, CH2Cl2', ['lewis-acid'], 'common practice'],
 			['Mg(ClO4)2, MeCN', ['lewis-acid'], 'common practice'],
 			['KOAc, Pd(dppf)Cl2, dioxane', ['palladium-zero'], 'Miyaura borylation — from memory']
@@ -87,12 +87,12 @@ describe('classifier: a metal in a metal context is still the metal', () => {
 		['Li, NH3', ['dissolving-metal'], WUTS],
 		['Li/NH3, THF, t-BuOH', ['dissolving-metal'], WUTS],
 		['sodium, liquid NH3', ['dissolving-metal'], WUTS],
-		['Zn, AcOH', ['acid-mild', 'dissolving-metal'], WUTS],
-		['Zn dust, AcOH', ['acid-mild', 'dissolving-metal'], WUTS],
-		['Zn (10 equiv), HCl', ['acid-strong', 'dissolving-metal'], CLAYDEN],
-		['Fe, NH4Cl, EtOH/H2O', ['dissolving-metal'], CLAYDEN],
-		['Fe powder, AcOH', ['acid-mild', 'dissolving-metal'], CLAYDEN],
-		['Mg turnings, THF', ['organometallic'], CLAYDEN]
+		['Zn, AcOH', ['acid-mild', 'dissolving-metal-acid'], WUTS],
+		['Zn dust, AcOH', ['acid-mild', 'dissolving-metal-acid'], WUTS],
+		['Zn (10 equiv), HCl', ['acid-strong', 'dissolving-metal-acid'], CLAYDEN],
+		['Fe, NH4Cl, EtOH/H2O', ['dissolving-metal-acid'], CLAYDEN],
+		['Fe powder, AcOH', ['acid-mild', 'dissolving-metal-acid'], CLAYDEN],
+		['Mg turnings, THF', ['organometallic-grignard'], CLAYDEN]
 	];
 	for (const [text, expected, source] of cases) {
 		it(`"${text}" → ${expected.join(', ')} (${source})`, () => {
@@ -153,7 +153,7 @@ describe('classifier: HF·pyridine counts once', () => {
 	for (const text of spellings) {
 		it(`"${text}" is one reagent (${WUTS})`, () => {
 			expect(names(text)).toEqual(['HF·pyridine']);
-			expect([...read(text).conditions].sort()).toEqual(['acid-mild', 'fluoride']);
+			expect([...read(text).conditions].sort()).toEqual(['acid-mild', 'fluoride-buffered']);
 		});
 	}
 });

@@ -9,12 +9,46 @@ import { isNoiseFragment, standsAlone } from './reagent-text';
 import { formulaFits, isBareMetal, readsAsFormula } from './spelling';
 import type { Reagent } from './schemas';
 
+/**
+ * A reagent's classes in this step: the first `when` entry whose tag another matched reagent
+ * carries, else the row's own `conditions` (the reagent's typical, harsher use).
+ */
+function inContext(
+	reagent: Reagent,
+	others: readonly { reagent: Reagent; text: string }[]
+): Pick<ReagentMatch, 'conditions' | 'context'> {
+	for (const entry of reagent.when ?? []) {
+		const carrier = others.find(
+			(o) => o.reagent !== reagent && o.reagent.tags?.includes(entry.tag)
+		);
+		if (carrier) {
+			return {
+				conditions: [...entry.conditions],
+				context: { reagent: carrier.reagent.name, text: carrier.text, why: entry.why }
+			};
+		}
+	}
+	return { conditions: [...reagent.conditions] };
+}
+
+/** The other reagent of the step whose tag picked a reagent's classes, and why it matters. */
+export interface ReagentContextMatch {
+	/** Canonical name of the reagent that carries the tag, e.g. `MeOH`. */
+	reagent: string;
+	/** Its span, as typed. */
+	text: string;
+	/** From the `when` entry, e.g. "carbonate in an alcohol: methoxide forms". */
+	why: string;
+}
+
 export interface ReagentMatch {
 	/** Canonical reagent name from rules/reagents.json. */
 	reagent: string;
 	/** The span of the input that matched, as typed. */
 	text: string;
 	conditions: ConditionId[];
+	/** Present when another reagent of the step decided the classes (a `when` entry). */
+	context?: ReagentContextMatch;
 }
 
 export interface ReagentClassification {
@@ -193,10 +227,14 @@ export function compileClassifier(reagents: readonly Reagent[]) {
 		const cased = foldText(text, true);
 		const taken = scan(folded, cased, looseBuckets, exactBuckets);
 
-		const matched: ReagentMatch[] = taken.map(({ start, end, spelling: { reagent } }) => ({
+		const present = taken.map(({ start, end, spelling: { reagent } }) => ({
+			reagent,
+			text: text.slice(start, end)
+		}));
+		const matched: ReagentMatch[] = present.map(({ reagent, text: typed }) => ({
 			reagent: reagent.name,
-			text: text.slice(start, end),
-			conditions: [...reagent.conditions]
+			text: typed,
+			...inContext(reagent, present)
 		}));
 		const consumed = text.split('');
 		for (const c of taken) for (let i = c.start; i < c.end; i++) consumed[i] = ' ';

@@ -146,6 +146,25 @@ export type ReactivityRowRating = (typeof REACTIVITY_ROW_RATINGS)[number];
 export const REAGENT_KINDS = ['reagent', 'solvent', 'additive', 'workup'] as const;
 export type ReagentKind = (typeof REAGENT_KINDS)[number];
 
+/**
+ * What a solvent or additive tells the classifier about the flask (rules/reagents.json `tags`);
+ * a reagent row's `when` list picks its classes by them, e.g. K2CO3 with an `alcohol` present is
+ * `base-aqueous` (methoxide forms), with only an `aprotic` solvent `base-aqueous-mild`.
+ */
+export const REAGENT_TAGS = [
+	'water',
+	'alcohol',
+	'aprotic',
+	'carboxylic-acid',
+	'proton-source',
+	'acyl-transfer-catalyst',
+	'nitroxyl',
+	'epoxidation-metal',
+	'poisoned-catalyst',
+	'homogeneous-catalyst'
+] as const;
+export type ReagentTag = (typeof REAGENT_TAGS)[number];
+
 export function isConditionId(value: unknown): value is ConditionId {
 	return typeof value === 'string' && (CONDITION_IDS as readonly string[]).includes(value);
 }

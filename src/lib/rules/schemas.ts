@@ -9,6 +9,7 @@ import {
 	PROTECTING_GROUP_IDS,
 	REACTIVITY_ROW_RATINGS,
 	REAGENT_KINDS,
+	REAGENT_TAGS,
 	STABILITY_RATINGS
 } from './ids';
 
@@ -48,11 +49,26 @@ export const conditionSchema = z.strictObject({
 });
 export const conditionsFileSchema = z.array(conditionSchema);
 
+export const reagentTagSchema = idEnum('reagent tag', REAGENT_TAGS);
+
+/**
+ * One entry of a reagent row's `when` list: if another reagent in the same step carries `tag`,
+ * the row brings `conditions` instead of its own, and `why` says so in the clash message, e.g.
+ * `{ tag: 'alcohol', conditions: ['base-aqueous'], why: 'carbonate in an alcohol: alkoxide forms' }`.
+ */
+export const reagentContextSchema = z.strictObject({
+	tag: reagentTagSchema,
+	conditions: z.array(conditionIdSchema).min(1),
+	why: text
+});
+
 /**
  * One row of rules/reagents.json. `conditions` are the classes the reagent brings in its typical
- * use (DHP implies the acid catalyst it is always used with). Solvents, additives and work-up
- * materials may bring none; they are listed so that the classifier recognises them and shows
- * their hazards. `exactCase` lists synonyms that match only as written ("CAN" but not "can").
+ * use (DHP implies the acid catalyst it is always used with), or with none of the `when` tags
+ * present; the first `when` entry whose tag another reagent of the step carries wins. `tags` say
+ * what this row tells the others (MeOH: `alcohol`). Solvents, additives and work-up materials may
+ * bring no class; they are listed so that the classifier recognises them and shows their hazards.
+ * `exactCase` lists synonyms that match only as written ("CAN" but not "can").
  */
 export const reagentSchema = z
 	.strictObject({
@@ -60,6 +76,8 @@ export const reagentSchema = z
 		synonyms: z.array(text),
 		conditions: z.array(conditionIdSchema),
 		kind: z.enum(REAGENT_KINDS).default('reagent'),
+		tags: z.array(reagentTagSchema).optional(),
+		when: z.array(reagentContextSchema).min(1).optional(),
 		exactCase: z.array(text).optional(),
 		hazard: text.optional(),
 		/** Where the row comes from: a book and chapter, a paper, "common practice" or "from memory". */
@@ -73,6 +91,15 @@ export const reagentSchema = z
 				message:
 					'a reagent must bring at least one condition class (or set kind to solvent, additive or workup)'
 			});
+		}
+		for (const [i, entry] of (reagent.when ?? []).entries()) {
+			if (reagent.tags?.includes(entry.tag)) {
+				ctx.addIssue({
+					code: 'custom',
+					path: ['when', i, 'tag'],
+					message: `"${entry.tag}" is one of this reagent's own tags; a context comes from another reagent of the step`
+				});
+			}
 		}
 		for (const [i, spelling] of (reagent.exactCase ?? []).entries()) {
 			if (spelling !== reagent.name && !reagent.synonyms.includes(spelling)) {
@@ -165,6 +192,7 @@ export const protectingGroupConditionsFileSchema = z.array(protectingGroupCondit
 
 export type Condition = z.output<typeof conditionSchema>;
 export type Reagent = z.output<typeof reagentSchema>;
+export type ReagentContext = z.output<typeof reagentContextSchema>;
 export type ReactivityEntry = z.output<typeof reactivitySchema>;
 export type Method = z.output<typeof methodSchema>;
 export type Transform = z.output<typeof transformSchema>;

@@ -157,6 +157,7 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 	if (conditions && protectingGroups) checkBroadRatings(conditions, protectingGroups, problems);
 	if (conditions && reactivity) checkNoneRows(conditions, reactivity, problems);
 	if (reagents) checkReagentSpellings(reagents, problems);
+	if (reagents) checkContextTags(reagents, problems);
 	if (reagents && protectingGroups) checkReagentRatings(protectingGroups, reagents, problems);
 	if (protectingGroups) checkTransformCoverage(protectingGroups, problems);
 	if (reactivity) checkReactivityPairs(reactivity, problems);
@@ -165,6 +166,28 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 		throw new RuleTableError(problems);
 	}
 	return { conditions, reagents, reactivity, protectingGroups };
+}
+
+/** Every class a reagent can bring: its own and those of its `when` contexts. */
+function classesOf(reagent: Reagent): string[] {
+	return [...reagent.conditions, ...(reagent.when ?? []).flatMap((entry) => entry.conditions)];
+}
+
+/** A `when` tag that no reagent carries could never apply: a typo, or a tag not yet given out. */
+function checkContextTags(reagents: readonly Reagent[], problems: string[]) {
+	const carried = new Set(reagents.flatMap((r) => r.tags ?? []));
+	reagents.forEach((reagent, index) => {
+		(reagent.when ?? []).forEach((entry, i) => {
+			if (!carried.has(entry.tag))
+				problems.push(
+					formatIssue(
+						RULE_FILES.reagents,
+						[index, 'when', i, 'tag'],
+						`no reagent carries the tag "${entry.tag}", so this context never applies`
+					)
+				);
+		});
+	});
 }
 
 /** A reagent-level rating must name a known reagent that brings the condition it refines. */
@@ -186,7 +209,7 @@ function checkReagentRatings(
 						`unknown reagent "${entry.reagent}" (not a name in ${RULE_FILES.reagents})`
 					)
 				);
-			else if (!reagent.conditions.includes(entry.condition)) {
+			else if (!classesOf(reagent).includes(entry.condition)) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.protectingGroups,

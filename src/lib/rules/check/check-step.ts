@@ -4,12 +4,14 @@
 import { isStructureError } from '../../chem/errors';
 import { readStructure } from '../../chem/parse';
 import { transformation, type Site } from './transformation';
-import { protectingGroupMessage, freeGroupMessage, type Origin } from './messages';
+import { protectingGroupMessage, freeGroupMessage, type Bringer, type Origin } from './messages';
 import {
 	StepStructureError,
 	UnknownConditionError,
 	type CheckRules,
 	type Clash,
+	type ReagentMatch,
+	type ReagentReading,
 	type StepCheck,
 	type StepToCheck
 } from './types';
@@ -25,14 +27,20 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	const classified = step.reagents?.trim()
 		? rules.classify(step.reagents)
 		: { conditions: [], matched: [], hazards: [], unknown: [] };
+	const reagentClasses = classified.matched.map(readingOf);
 	const conditions = [...new Set([...explicit, ...classified.conditions])];
 
 	const origins = new Map<string, Origin>();
 	for (const id of conditions) {
-		const reagents = classified.matched
-			.filter((m) => m.conditions.includes(id))
-			.map((m) => m.reagent);
-		origins.set(id, { reagents: [...new Set(reagents)], explicit: explicit.includes(id) });
+		const bringers = new Map<string, Bringer>();
+		for (const m of classified.matched.filter((m) => m.conditions.includes(id))) {
+			if (!bringers.has(m.reagent))
+				bringers.set(m.reagent, {
+					reagent: m.reagent,
+					context: m.context && { reagent: m.context.reagent, why: m.context.why }
+				});
+		}
+		origins.set(id, { reagents: [...bringers.values()], explicit: explicit.includes(id) });
 	}
 
 	const substrates = Array.isArray(step.substrate) ? step.substrate : [step.substrate];
@@ -42,7 +50,8 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		const origin = origins.get(condition)!;
 		for (const pg of change.protectingGroups.filter(standsBy)) {
 			// Explicit condition ids carry no reagent, so the class rating applies to them as well.
-			const answer = rules.stability(pg.id, condition, origin.explicit ? [] : origin.reagents);
+			const named = origin.explicit ? [] : origin.reagents.map((b) => b.reagent);
+			const answer = rules.stability(pg.id, condition, named);
 			if (answer.rating === 'stable') continue;
 			clashes.push({
 				severity: answer.rating === 'labile' ? 'clash' : 'caution',
@@ -78,6 +87,7 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	return {
 		id: step.id,
 		conditions,
+		reagentClasses,
 		hazards: classified.hazards,
 		clashes,
 		unrecognized: classified.unknown
@@ -85,6 +95,13 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 }
 
 const standsBy = (site: Site) => site.survives;
+
+/** What one matched reagent brought, and (when a `when` entry decided) which reagent decided it. */
+function readingOf(m: ReagentMatch): ReagentReading {
+	const reading: ReagentReading = { reagent: m.reagent, text: m.text, conditions: m.conditions };
+	if (m.context) reading.context = { reagent: m.context.reagent, why: m.context.why };
+	return reading;
+}
 
 function readTransformation(stepId: string, substrates: string[], product: string) {
 	for (const [role, texts] of [

@@ -3,15 +3,27 @@
 
 import type { CheckRules } from './types';
 
-export type Origin = { reagents: string[]; explicit: boolean };
+/** A reagent that brought a class, and the other reagent of the step that decided which class. */
+export type Bringer = { reagent: string; context?: { reagent: string; why: string } };
+export type Origin = { reagents: Bringer[]; explicit: boolean };
 
+/**
+ * E.g. "K2CO3 with MeOH (Hydroxide, carbonate or alkoxide; carbonate in an alcohol: methoxide
+ * forms)": the reagent, the company that decided its class, the class and why.
+ */
 function broughtBy(origin: Origin, conditionLabel: string): string {
-	if (origin.reagents.length) return `${list(origin.reagents)} (${conditionLabel})`;
-	return `The step's ${conditionLabel} conditions`;
+	if (!origin.reagents.length) return `The step's ${conditionLabel} conditions`;
+	const names = origin.reagents.map((b) =>
+		b.context ? `${b.reagent} with ${b.context.reagent}` : b.reagent
+	);
+	const whys = [...new Set(origin.reagents.flatMap((b) => (b.context ? [b.context.why] : [])))];
+	return `${list(names)} (${[conditionLabel, ...whys.map(stripStop)].join('; ')})`;
 }
 
 function list(items: string[]): string {
-	return items.length <= 1 ? (items[0] ?? '') : `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`;
+	return items.length <= 1
+		? (items[0] ?? '')
+		: `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`;
 }
 
 /** E.g. "TBAF (fluoride) would remove the TBS group (tert-butyldimethylsilyl ether), which this step keeps. …" */
@@ -24,7 +36,9 @@ export function protectingGroupMessage(
 ): string {
 	const label = rules.conditionLabel(condition);
 	const verb = answer.rating === 'labile' ? 'would remove' : 'may partly remove';
-	const why = answer.reason ? stripStop(answer.reason) : `${pgId} is rated ${answer.rating} under ${label.toLowerCase()} conditions`;
+	const why = answer.reason
+		? stripStop(answer.reason)
+		: `${pgId} is rated ${answer.rating} under ${label.toLowerCase()} conditions`;
 	return `${broughtBy(origin, label)} ${verb} the ${pgId} group (${rules.protectingGroupLabel(pgId)}), which this step keeps: ${why}. Source: ${answer.source}.`;
 }
 

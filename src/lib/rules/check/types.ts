@@ -39,6 +39,12 @@ export type StepCheckError = { code: string; message: string };
 export type StepCheck = {
 	id: string;
 	conditions: string[];
+	/**
+	 * Which reagent brought which classes, in the order typed, e.g. `{ reagent: 'K2CO3', text:
+	 * 'K2CO3', conditions: ['base-aqueous'], context: { reagent: 'MeOH', why: '…' } }`. Absent on a
+	 * route step that could not be checked.
+	 */
+	reagentClasses?: ReagentReading[];
 	hazards: Hazard[];
 	clashes: Clash[];
 	/** Reagent text the table does not know, as typed (e.g. `['Grubbs II']`): its effect is not checked. */
@@ -50,7 +56,23 @@ export type StepCheck = {
 /** The body of both check endpoints. */
 export type CheckAnswer = { steps: StepCheck[] };
 
-export type ReagentMatch = { reagent: string; conditions: string[] };
+/** The other reagent of the step whose presence picked a reagent's classes, and why. */
+export type ReagentContext = { reagent: string; why: string };
+
+export type ReagentMatch = {
+	reagent: string;
+	text: string;
+	conditions: string[];
+	context?: ReagentContext & { text: string };
+};
+
+/** One reagent of a step as the answer reports it (see `StepCheck.reagentClasses`). */
+export type ReagentReading = {
+	reagent: string;
+	text: string;
+	conditions: string[];
+	context?: ReagentContext;
+};
 
 /** What the check reads from the rule table. */
 export type CheckRules = {
