@@ -30,16 +30,21 @@ describe('POST /api/check', () => {
 		expect(status).toBe(200);
 		expect(body.steps).toHaveLength(1);
 		const [step] = body.steps;
-		expect(Object.keys(step).sort()).toEqual(['clashes', 'conditions', 'hazards', 'id', 'unrecognized']);
+		expect(Object.keys(step).sort()).toEqual(['clashes', 'conditions', 'hazards', 'id', 'reagentClasses', 'unrecognized']);
+		// Which reagent brought which class, as typed (THF brings none).
+		expect(step.reagentClasses).toEqual([
+			{ reagent: 'MeMgBr', text: 'MeMgBr', conditions: ['organometallic-grignard'] },
+			{ reagent: 'THF', text: 'THF', conditions: [] }
+		]);
 		expect(step.id).toBe('add-MeMgBr');
 		// Every word of 'MeMgBr, THF' is known: the list is there, and empty.
 		expect(step.unrecognized).toEqual([]);
-		expect(step.conditions).toContain('organometallic');
+		expect(step.conditions).toContain('organometallic-grignard');
 		expect(step.clashes[0]).toEqual({
 			severity: 'clash',
 			kind: 'attacks-free-group',
 			subject: 'ketone',
-			condition: 'organometallic',
+			condition: 'organometallic-grignard',
 			atoms: [0, 1, 2, 3],
 			message: expect.stringContaining('ketone')
 		});
@@ -56,7 +61,7 @@ describe('POST /api/check', () => {
 		const { status, body } = await call(checkPost, 'chemist', { body: { steps } });
 		expect(status).toBe(200);
 		expect(body.steps[0].unrecognized).toEqual(['OG-Cat 17']);
-		expect(body.steps[0].conditions).toContain('organometallic');
+		expect(body.steps[0].conditions).toContain('organometallic-grignard');
 		expect(body.steps[1].unrecognized).toEqual(['Zq-ligand 5', 'OG-Cat 17']);
 	});
 

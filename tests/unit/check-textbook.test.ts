@@ -71,7 +71,7 @@ describe('steps that must clash', () => {
 	it('a Grignard reagent attacks the free ketone that should stand by — Clayden, ketones are attacked by RMgX (from memory)', () => {
 		const result = check({ substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCC(C)(C)O', reagents: 'MeMgBr, THF' });
 		expect(result.clashes).toEqual([
-			expect.objectContaining({ severity: 'clash', kind: 'attacks-free-group', subject: 'ketone', condition: 'organometallic', atoms: [0, 1, 2, 3] })
+			expect.objectContaining({ severity: 'clash', kind: 'attacks-free-group', subject: 'ketone', condition: 'organometallic-grignard', atoms: [0, 1, 2, 3] })
 		]);
 		expect(result.clashes[0]!.message).toMatch(/^MeMgBr \(.+\) attacks the free ketone/);
 		expect(result.clashes[0]!.message).toMatch(/Source: /);
@@ -143,7 +143,7 @@ describe('steps that must clash', () => {
 describe('how the check reads a step', () => {
 	it('unions explicit condition ids with those inferred from the reagent text', () => {
 		const result = check({ substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCC(C)(C)O', reagents: 'MeMgBr, THF', conditions: ['heat'] });
-		expect(result.conditions).toEqual(expect.arrayContaining(['heat', 'organometallic']));
+		expect(result.conditions).toEqual(expect.arrayContaining(['heat', 'organometallic-grignard']));
 	});
 	it('refuses an unknown explicit condition id and lists the valid ones', () => {
 		expect(() => check({ substrate: 'CCO', product: 'CC=O', conditions: ['acid-stronk'] })).toThrow(UnknownConditionError);
