@@ -9,6 +9,34 @@ import { isNoiseFragment, standsAlone } from './reagent-text';
 import { formulaFits, isBareMetal, readsAsFormula } from './spelling';
 import type { Reagent } from './schemas';
 
+/** The other reagent of the step whose tag picked a reagent's classes, and why it matters. */
+export interface ReagentContextMatch {
+	/** Canonical name of the reagent that carries the tag, e.g. `MeOH`. */
+	reagent: string;
+	/** Its span, as typed. */
+	text: string;
+	/** From the `when` entry, e.g. "carbonate in an alcohol: alkoxide forms and transesterifies esters". */
+	why: string;
+}
+
+export interface ReagentMatch {
+	/** Canonical reagent name from rules/reagents.json. */
+	reagent: string;
+	/** The span of the input that matched, as typed. */
+	text: string;
+	conditions: ConditionId[];
+	/** Present when another reagent of the step decided the classes (a `when` entry). */
+	context?: ReagentContextMatch;
+}
+
+export interface ReagentClassification {
+	conditions: ConditionId[];
+	matched: ReagentMatch[];
+	hazards: { reagent: string; note: string }[];
+	/** Fragments that named nothing the table knows (numbers, units and filler words are ignored). */
+	unknown: string[];
+}
+
 /**
  * A reagent's classes in this step: the first `when` entry whose tag another matched reagent
  * carries, else the row's own `conditions` (the reagent's typical, harsher use).
@@ -29,34 +57,6 @@ function inContext(
 		}
 	}
 	return { conditions: [...reagent.conditions] };
-}
-
-/** The other reagent of the step whose tag picked a reagent's classes, and why it matters. */
-export interface ReagentContextMatch {
-	/** Canonical name of the reagent that carries the tag, e.g. `MeOH`. */
-	reagent: string;
-	/** Its span, as typed. */
-	text: string;
-	/** From the `when` entry, e.g. "carbonate in an alcohol: methoxide forms". */
-	why: string;
-}
-
-export interface ReagentMatch {
-	/** Canonical reagent name from rules/reagents.json. */
-	reagent: string;
-	/** The span of the input that matched, as typed. */
-	text: string;
-	conditions: ConditionId[];
-	/** Present when another reagent of the step decided the classes (a `when` entry). */
-	context?: ReagentContextMatch;
-}
-
-export interface ReagentClassification {
-	conditions: ConditionId[];
-	matched: ReagentMatch[];
-	hazards: { reagent: string; note: string }[];
-	/** Fragments that named nothing the table knows (numbers, units and filler words are ignored). */
-	unknown: string[];
 }
 
 /** At or above this temperature a step counts as `heat` even without the word "reflux". */

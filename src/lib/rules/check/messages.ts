@@ -8,8 +8,9 @@ export type Bringer = { reagent: string; context?: { reagent: string; why: strin
 export type Origin = { reagents: Bringer[]; explicit: boolean };
 
 /**
- * E.g. "K2CO3 with MeOH (Hydroxide, carbonate or alkoxide; carbonate in an alcohol: methoxide
- * forms)": the reagent, the company that decided its class, the class and why.
+ * E.g. "K2CO3 with MeOH (Hydroxide, carbonate or alkoxide; carbonate in an alcohol: alkoxide
+ * forms and transesterifies esters)": the reagent, the company that decided its class, the class
+ * and why.
  */
 function broughtBy(origin: Origin, conditionLabel: string): string {
 	if (!origin.reagents.length) return `The step's ${conditionLabel} conditions`;
