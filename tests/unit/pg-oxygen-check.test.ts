@@ -145,6 +145,11 @@ describe('diol masks', () => {
 		};
 		expect(on('DTBS', { ...dtbs, reagents: 'AcOH/THF/H2O' })).toEqual([]);
 		expect(on('DTBS', { ...dtbs, reagents: 'TBAF, THF' })).toEqual(['clash fluoride']);
+		// Dihydroxylation or epoxidation elsewhere spares a silylene; chromic acid is only a caution.
+		expect(on('DTBS', { ...dtbs, conditions: ['oxidant-strong-alkene'] })).toEqual([]);
+		expect(on('DTBS', { ...dtbs, conditions: ['oxidant-strong'] })).toEqual([
+			'caution oxidant-strong'
+		]);
 		const tipds = {
 			substrate: 'CC(C)[Si]1(C(C)C)OCC[C@@H](CCOC(=O)C)O[Si](C(C)C)(C(C)C)O1',
 			product: 'CC(C)[Si]1(C(C)C)OCC[C@@H](CCO)O[Si](C(C)C)(C(C)C)O1'
