@@ -51,9 +51,20 @@ describe('methyl ether', () => {
 			'caution lewis-acid'
 		]);
 	});
-	it("stands by strong Brønsted acid and mild Lewis acids (CeCl3) — Greene's, ch. 3 (from memory)", () => {
+	it("stands by strong Brønsted acid and the Lewis acids of C–C bond formation — Greene's, ch. 3 (from memory)", () => {
 		expect(on('methyl-ether', { ...step, reagents: 'HCl, MeOH' })).toEqual([]);
 		expect(on('methyl-ether', { ...step, conditions: ['lewis-acid-mild'] })).toEqual([]);
+		// A Mukaiyama aldol on an anisaldehyde: TiCl4 or BF3·OEt2 leave the aryl methyl ether.
+		const aldol = { substrate: 'COc1ccc(C=O)cc1', product: 'COc1ccc(C(O)CC(=O)C)cc1' };
+		expect(on('methyl-ether', { ...aldol, reagents: 'TiCl4, CH2Cl2, –78 °C' })).toEqual([]);
+		expect(on('methyl-ether', { ...aldol, reagents: 'BF3·OEt2, CH2Cl2' })).toEqual([]);
+	});
+	it("is left by the DDQ that removes a PMB ether, only flagged by CAN — Greene's, ch. 2 (from memory)", () => {
+		const pmb = { substrate: 'COc1ccc(CCOCc2ccc(OC)cc2)cc1', product: 'COc1ccc(CCO)cc1' };
+		expect(on('methyl-ether', { ...pmb, reagents: 'DDQ, CH2Cl2/H2O' })).toEqual([]);
+		expect(on('methyl-ether', { ...pmb, reagents: 'CAN, MeCN/H2O' })).toEqual([
+			'caution oxidant-electron-transfer'
+		]);
 	});
 });
 
@@ -66,6 +77,10 @@ describe('SEM and MEM ethers', () => {
 	it('SEM survives buffered fluoride that removes TBS, not forcing TBAF — Lipshutz & Pegram, Tetrahedron Lett. 1980, 21, 3343 (from memory)', () => {
 		expect(on('SEM', { ...step, conditions: ['fluoride-buffered'] })).toEqual([]);
 		expect(on('SEM', { ...step, conditions: ['fluoride'] })).toEqual(['clash fluoride']);
+	});
+	it("SEM falls to MgBr2 and is only flagged by TiCl4 — Greene's, ch. 2 (from memory)", () => {
+		expect(on('SEM', { ...step, reagents: 'MgBr2·OEt2, Et2O' })).toEqual(['clash lewis-acid']);
+		expect(on('SEM', { ...step, reagents: 'TiCl4, CH2Cl2' })).toEqual(['caution lewis-acid']);
 	});
 	it('MEM comes off with ZnBr2 where acetic acid in CH2Cl2 leaves it — Corey, Gras & Ulrich, Tetrahedron Lett. 1976, 17, 809 (from memory)', () => {
 		const mem = { substrate: 'COCCOCOC1CCC(CC=O)CC1', product: 'COCCOCOC1CCC(CCNCc2ccccc2)CC1' };
