@@ -111,6 +111,21 @@ describe('allyl ether', () => {
 	});
 });
 
+describe('allyl ether, its alkene masked by the PG', () => {
+	it('is flagged by the OsO4 that dihydroxylates another alkene — Guibé, Tetrahedron 1998, 54, 2967 (from memory)', () => {
+		const step = {
+			substrate: 'C=CCOCCCC/C=C/c1ccccc1',
+			product: 'C=CCOCCCCC(O)C(O)c1ccccc1'
+		};
+		expect(on('allyl-ether', { ...step, reagents: 'OsO4, NMO, acetone/H2O' })).toContain(
+			'clash oxidant-strong'
+		);
+		expect(on('allyl-ether', { ...step, conditions: ['oxidant-strong-alkene'] })).toEqual([
+			'clash oxidant-strong-alkene'
+		]);
+	});
+});
+
 describe('tert-butyl ether', () => {
 	it('stands by piperidine in Fmoc/tBu peptide synthesis and falls to TFA — Kocienski (from memory)', () => {
 		const step = {
