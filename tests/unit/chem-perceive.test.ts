@@ -28,9 +28,18 @@ const PG_IDS = [
 	'methyl-ester', 'tBu-ester', 'Bn-ester', 'allyl-ester', 'TMS-alkyne', 'S-Tr'
 ];
 
+// The oxygen PGs of issue 11 (rules/protecting-groups.json); pinned by id, not by total, since
+// other parts of issue 11 add PGs too.
+const OXYGEN_PG_IDS = [
+	'methyl-ether', 'allyl-ether', 'SEM', 'MEM', 'BOM', 'tBu-ether', 'TIPDS', 'DTBS', 'PMP-acetal',
+	'cyclic-carbonate', 'ethyl-ester', 'PMB-ester'
+];
+
 describe('the rule table', () => {
-	it('has exactly the 31 protecting-group ids, and the group ids others depend on', () => {
-		expect(perceptionRules().protectingGroups.map((p) => p.id).sort()).toEqual([...PG_IDS].sort());
+	it('has the protecting-group ids others depend on, each once, and the group ids others depend on', () => {
+		const ids = perceptionRules().protectingGroups.map((p) => p.id);
+		expect(ids).toEqual(expect.arrayContaining([...PG_IDS, ...OXYGEN_PG_IDS]));
+		expect(new Set(ids).size).toBe(ids.length);
 		const groupIds = perceptionRules().groups.map((g) => g.id);
 		for (const id of ['alkyl-halide', 'aryl-halide', 'azide', 'nitro', 'imine', 'sulfide', 'indole-nh', 'amine-tertiary']) {
 			expect(groupIds).toContain(id);
@@ -62,14 +71,14 @@ describe('the rule table', () => {
 
 describe('every protecting group is recognised, with what it masks', () => {
 	// Expected names are the chemistry of each structure (common practice).
-	it('covers each of the 31 ids in the reference set as the chemist names it', () => {
+	it('covers each of those ids in the reference set as the chemist names it', () => {
 		const seen = new Set<string>();
 		for (const molecule of referenceMolecules) {
 			const found = pgIds(of(molecule.smiles));
 			expect(found, molecule.name).toEqual([...(molecule.pgs ?? [])].sort());
 			found.forEach((id) => seen.add(id));
 		}
-		expect([...seen].sort()).toEqual([...PG_IDS].sort());
+		expect([...seen]).toEqual(expect.arrayContaining([...PG_IDS, ...OXYGEN_PG_IDS]));
 	});
 	it.each([
 		['CC(C)(C)[Si](C)(C)OCCCC=O', 'TBS', 'alcohol-primary', 'O'],

@@ -89,7 +89,19 @@ export const PROTECTING_GROUP_IDS = [
 	'Bn-ester',
 	'allyl-ester',
 	'TMS-alkyne',
-	'S-Tr'
+	'S-Tr',
+	'methyl-ether',
+	'allyl-ether',
+	'SEM',
+	'MEM',
+	'BOM',
+	'tBu-ether',
+	'TIPDS',
+	'DTBS',
+	'PMP-acetal',
+	'cyclic-carbonate',
+	'ethyl-ester',
+	'PMB-ester'
 ] as const;
 export type ProtectingGroupId = (typeof PROTECTING_GROUP_IDS)[number];
 
