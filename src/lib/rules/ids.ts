@@ -89,7 +89,16 @@ export const PROTECTING_GROUP_IDS = [
 	'Bn-ester',
 	'allyl-ester',
 	'TMS-alkyne',
-	'S-Tr'
+	'S-Tr',
+	'Ns',
+	'Troc',
+	'Teoc',
+	'N-Bn',
+	'acetamide',
+	'trifluoroacetamide',
+	'TIPS-alkyne',
+	'TES-alkyne',
+	'S-Ac'
 ] as const;
 export type ProtectingGroupId = (typeof PROTECTING_GROUP_IDS)[number];
 
