@@ -42,7 +42,8 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		const origin = origins.get(condition)!;
 		for (const pg of change.protectingGroups.filter(standsBy)) {
 			// Explicit condition ids carry no reagent, so the class rating applies to them as well.
-			const answer = rules.stability(pg.id, condition, origin.explicit ? [] : origin.reagents);
+			const reagents = origin.explicit ? [] : origin.reagents;
+			const answer = rules.stability(pg.id, condition, reagents, pg.on);
 			if (answer.rating === 'stable') continue;
 			clashes.push({
 				severity: answer.rating === 'labile' ? 'clash' : 'caution',

@@ -8,8 +8,11 @@ import { LruCache } from '../../chem/cache';
 import { readStructure } from '../../chem/parse';
 import { perceive, type Perception } from '../../chem/perceive';
 import { perceiveText } from '../../chem/perception-cache';
+import type { PgSite } from '../ids';
+import { siteOf } from './pg-site';
 
-export type Site = { id: string; atoms: number[]; survives: boolean };
+/** `on`: what a protecting group sits on, where that matters to its ratings (pg-site.ts). */
+export type Site = { id: string; atoms: number[]; survives: boolean; on?: PgSite };
 export type Transformation = { protectingGroups: Site[]; freeGroups: Site[]; mapped: boolean };
 
 const cache = new LruCache<Transformation>('transformations');
@@ -43,6 +46,13 @@ export function transformation(substrates: string[], product: string): Transform
 			)
 		: null;
 	const result = compare(before, after, map);
+	if (result.protectingGroups.length) {
+		const molecule = combined ?? readStructure(substrates[0]!, MAP_ONLY).molecule;
+		before.protectingGroups.forEach((pg, i) => {
+			const on = siteOf(molecule, pg.maskedAtom);
+			if (on) result.protectingGroups[i]!.on = on;
+		});
+	}
 	cache.set(key, result);
 	return result;
 }
