@@ -6,6 +6,8 @@ import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
 import { transformation } from '../../src/lib/rules/check/transformation';
 import { buildRuleTable, loadRuleTable, RuleTableError } from '../../src/lib/rules';
 import { DEFAULT_RULE_FILES } from '../../src/lib/rules/default-files';
+import { planRouteDocument } from '../../src/lib/server/services/plan';
+import { line } from '../factories/plan-routes';
 
 // Ratings that depend on what a protecting group sits on (a PG row's `whereOn`). Sources:
 // "Greene's" is Wuts, Greene's Protective Groups in Organic Synthesis (5th ed.); Hasan et al.,
@@ -150,7 +152,7 @@ describe('whereOn in the rule table', () => {
 	it('rejects an unknown site and a second entry for the same site and class, naming the path', () => {
 		const withWhereOn = (whereOn: unknown[]) => ({
 			...DEFAULT_RULE_FILES,
-			protectingGroups: DEFAULT_RULE_FILES.protectingGroups.map((row, i) =>
+			protectingGroups: (DEFAULT_RULE_FILES.protectingGroups as object[]).map((row, i) =>
 				i === 0 ? { ...row, whereOn } : row
 			)
 		});
@@ -165,5 +167,29 @@ describe('whereOn in the rule table', () => {
 		expect(() => buildRuleTable(withWhereOn([twice, twice]))).toThrow(
 			/a second entry for aryl-oxygen base-aqueous/
 		);
+	});
+});
+
+describe('the planner knows the site from the group it masks', () => {
+	it("does not keep a phenol under TBS or TBDPS through K2CO3/MeOH — Greene's, ch. 4 (from memory)", () => {
+		// The phenol is attacked in s1 (Grignard) and s3 (acylation), so its mask sits through s2.
+		const answer = planRouteDocument(
+			line(
+				[
+					'Oc1ccc(CC=O)cc1C#C[Si](C)(C)C',
+					'Oc1ccc(CC(C)O)cc1C#C[Si](C)(C)C',
+					'Oc1ccc(CC(C)O)cc1C#C',
+					'Oc1ccc(CC(C)OC(C)=O)cc1C#C'
+				],
+				['MeMgBr, THF', 'K2CO3, MeOH', 'Ac2O, Et3N, DMAP, CH2Cl2']
+			)
+		);
+		expect(answer.plans.length).toBeGreaterThan(0);
+		const phenolPgs = answer.plans.map(
+			(p) => p.protections.find((x) => x.group === 'phenol')!.protectingGroup
+		);
+		expect(phenolPgs).not.toContain('TBS');
+		expect(phenolPgs).not.toContain('TBDPS');
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/TBS rejected: .*"s2" \(K2CO3, MeOH\)/);
 	});
 });

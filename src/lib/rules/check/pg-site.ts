@@ -27,3 +27,15 @@ export function siteOf(molecule: Molecule, atom: number): PgSite | undefined {
 	}
 	return undefined;
 }
+
+// The free groups whose atom fixes the site: the planner knows a need's group, not its atoms'
+// aromaticity, and a group id is enough there (a phenol's O is always on an aromatic carbon).
+const SITE_OF_GROUP: Readonly<Record<string, PgSite>> = {
+	phenol: 'aryl-oxygen',
+	'indole-nh': 'aromatic-nitrogen'
+};
+
+/** The site implied by a free-group id, e.g. `siteOfGroup('phenol')` → `aryl-oxygen`; undefined for an alcohol. */
+export function siteOfGroup(groupId: string): PgSite | undefined {
+	return SITE_OF_GROUP[groupId];
+}
