@@ -85,8 +85,8 @@ describe('ratings of the new protecting groups (textbook facts)', () => {
 		[
 			'Ns',
 			'nucleophile',
-			'labile',
-			'PhSH/K2CO3 removes Ns — Fukuyama, Tetrahedron Lett. 1995, 36, 6373'
+			'caution',
+			`azide or cyanide may attack the electron-poor ring — ${GREENE}`
 		],
 		['Ns', 'acid-strong', 'stable', `TFA leaves a nosyl amide — ${GREENE}`],
 		['Troc', 'dissolving-metal-acid', 'labile', `Zn/AcOH removes Troc — ${GREENE}`],
@@ -160,6 +160,11 @@ describe('ratings of the new protecting groups (textbook facts)', () => {
 	];
 	it.each(facts)('%s under %s is %s (%s)', (pg, condition, rating) => {
 		expect(table.stabilityOf(pg as never, condition).rating).toBe(rating);
+	});
+
+	it('a thiolate removes Ns — Fukuyama, Jow & Cheung, Tetrahedron Lett. 1995, 36, 6373 (from memory)', () => {
+		expect(table.stabilityOf('Ns', 'nucleophile', ['thiophenol']).rating).toBe('labile');
+		expect(table.stabilityOf('Ns', 'nucleophile', ['NaN3']).rating).toBe('caution');
 	});
 
 	it('boiling HCl removes an acetamide, but HCl in dioxane at room temperature does not — common practice', () => {
