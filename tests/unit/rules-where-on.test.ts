@@ -100,6 +100,38 @@ describe('the clash check rates a PG by what it sits on', () => {
 		).toEqual([]);
 	});
 
+	it('NaOH in hot MeOH removes Ts from an indole N but not from an alkyl amine — Bajwa et al., Tetrahedron Lett. 2006, 47, 6425 (from memory)', () => {
+		const TS = 'Cc1ccc(cc1)S(=O)(=O)';
+		const onIndole = pgClashes(
+			{
+				substrate: `${TS}n1ccc2cc(C(=O)OC)ccc21`,
+				product: `${TS}n1ccc2cc(C(=O)O)ccc21`,
+				reagents: 'NaOH, MeOH, reflux'
+			},
+			'Ts'
+		);
+		expect(onIndole.map((c) => c.severity)).toContain('clash');
+		const onAmine = pgClashes(
+			{
+				substrate: `${TS}NCCC(=O)OC`,
+				product: `${TS}NCCC(=O)O`,
+				reagents: 'NaOH, MeOH, reflux'
+			},
+			'Ts'
+		);
+		expect(onAmine).toEqual([]);
+	});
+
+	it("hydrazine cleaves an aryl acetate; an alkyl acetate only draws a caution — Greene's, ch. 5 (from memory)", () => {
+		const step = (substrate: string) =>
+			pgClashes(
+				{ substrate, product: substrate.replace('C=O', 'C=NN'), reagents: 'hydrazine, EtOH' },
+				'Ac'
+			).map((c) => c.severity);
+		expect(step('CC(=O)Oc1ccc(C=O)cc1')).toContain('clash');
+		expect(step('CC(=O)OCCCC=O')).not.toContain('clash');
+	});
+
 	it('says nothing of the site where the site did not decide the rating', () => {
 		const found = pgClashes(
 			{ substrate: `${BOC}n1ccc2ccccc21`, product: `${BOC}n1ccc2ccccc21`, reagents: 'TFA' },
