@@ -39,15 +39,15 @@ export function transformation(substrates: string[], product: string): Transform
 	// Counting decides most steps: a group id that keeps its count survives, one that vanishes
 	// changed. Only when some but not all instances of an id vanish must the atoms be mapped
 	// (the maximum common substructure is the slow part) to tell which one reacted.
+	// Read at most once, for the atom map and for what each PG sits on.
+	let substrate = combined;
+	const substrateMolecule = () => (substrate ??= readStructure(substrates[0]!, MAP_ONLY).molecule);
 	const map = ambiguous(before, after)
-		? mapAtoms(
-				combined ?? readStructure(substrates[0]!, MAP_ONLY).molecule,
-				readStructure(product, MAP_ONLY).molecule
-			)
+		? mapAtoms(substrateMolecule(), readStructure(product, MAP_ONLY).molecule)
 		: null;
 	const result = compare(before, after, map);
 	if (result.protectingGroups.length) {
-		const molecule = combined ?? readStructure(substrates[0]!, MAP_ONLY).molecule;
+		const molecule = substrateMolecule();
 		before.protectingGroups.forEach((pg, i) => {
 			const on = siteOf(molecule, pg.maskedAtom);
 			if (on) result.protectingGroups[i]!.on = on;
