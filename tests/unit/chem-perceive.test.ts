@@ -5,7 +5,12 @@ import { describe, expect, it } from 'vitest';
 import { Molecule, SmilesParser, SSSearcher } from 'openchemlib';
 import { readStructure } from '../../src/lib/chem/parse';
 import { perceive, type Perception } from '../../src/lib/chem/perceive';
-import { compileRules, perceptionRules, protectingGroupPatternSchema, RuleTableError } from '../../src/lib/chem/patterns';
+import {
+	compileRules,
+	perceptionRules,
+	protectingGroupPatternSchema,
+	RuleTableError
+} from '../../src/lib/chem/patterns';
 import { highlightAtoms } from '../../src/lib/chem/highlight';
 import { depictSvg } from '../../src/lib/chem/depict';
 import { canonicalForm } from '../../src/lib/chem/properties';
@@ -15,6 +20,7 @@ import protectingGroupsJson from '../../rules/protecting-groups.json';
 import { referenceMolecules } from '../reference/molecules';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
 import { routeOG2031 } from '../../scripts/bench/route-og2031';
+import { PROTECTING_GROUP_IDS } from '../../src/lib/rules/ids';
 
 const of = (smiles: string) => perceive(readStructure(smiles).molecule);
 const pgIds = (p: Perception) => p.protectingGroups.map((pg) => pg.id).sort();
@@ -22,49 +28,120 @@ const pg = (p: Perception, id: string) => p.protectingGroups.find((x) => x.id ==
 
 // The 31 PG ids other parts of Orthogon depend on (issue 3).
 const PG_IDS = [
-	'TMS', 'TES', 'TBS', 'TIPS', 'TBDPS', 'Bn', 'PMB', 'MOM', 'THP', 'Tr', 'Ac', 'Bz', 'Piv',
-	'acetonide', 'benzylidene', 'dioxolane', 'dioxane', 'dithiane', 'dimethyl-acetal',
-	'Boc', 'Cbz', 'Fmoc', 'Alloc', 'Ts', 'phthalimide',
-	'methyl-ester', 'tBu-ester', 'Bn-ester', 'allyl-ester', 'TMS-alkyne', 'S-Tr'
+	'TMS',
+	'TES',
+	'TBS',
+	'TIPS',
+	'TBDPS',
+	'Bn',
+	'PMB',
+	'MOM',
+	'THP',
+	'Tr',
+	'Ac',
+	'Bz',
+	'Piv',
+	'acetonide',
+	'benzylidene',
+	'dioxolane',
+	'dioxane',
+	'dithiane',
+	'dimethyl-acetal',
+	'Boc',
+	'Cbz',
+	'Fmoc',
+	'Alloc',
+	'Ts',
+	'phthalimide',
+	'methyl-ester',
+	'tBu-ester',
+	'Bn-ester',
+	'allyl-ester',
+	'TMS-alkyne',
+	'S-Tr'
 ];
 
 // The oxygen PGs of issue 11 (rules/protecting-groups.json); pinned by id, not by total, since
 // other parts of issue 11 add PGs too.
 const OXYGEN_PG_IDS = [
-	'methyl-ether', 'allyl-ether', 'SEM', 'MEM', 'BOM', 'tBu-ether', 'TIPDS', 'DTBS', 'PMP-acetal',
-	'cyclic-carbonate', 'ethyl-ester', 'PMB-ester'
+	'methyl-ether',
+	'allyl-ether',
+	'SEM',
+	'MEM',
+	'BOM',
+	'tBu-ether',
+	'TIPDS',
+	'DTBS',
+	'PMP-acetal',
+	'cyclic-carbonate',
+	'ethyl-ester',
+	'PMB-ester'
 ];
 
 describe('the rule table', () => {
-	it('has the protecting-group ids others depend on, each once, and the group ids others depend on', () => {
+	it('has the protecting-group ids of ids.ts (the 31 of issue 3 among them), and the group ids others depend on', () => {
 		const ids = perceptionRules().protectingGroups.map((p) => p.id);
-		expect(ids).toEqual(expect.arrayContaining([...PG_IDS, ...OXYGEN_PG_IDS]));
+		expect([...ids].sort()).toEqual([...PROTECTING_GROUP_IDS].sort());
+		expect(ids).toEqual(expect.arrayContaining(PG_IDS));
+		expect(ids).toEqual(expect.arrayContaining(OXYGEN_PG_IDS));
 		expect(new Set(ids).size).toBe(ids.length);
 		const groupIds = perceptionRules().groups.map((g) => g.id);
-		for (const id of ['alkyl-halide', 'aryl-halide', 'azide', 'nitro', 'imine', 'sulfide', 'indole-nh', 'amine-tertiary']) {
+		for (const id of [
+			'alkyl-halide',
+			'aryl-halide',
+			'azide',
+			'nitro',
+			'imine',
+			'sulfide',
+			'indole-nh',
+			'amine-tertiary'
+		]) {
 			expect(groupIds).toContain(id);
 		}
 	});
 	it('keeps fields it does not know (install, stability, … are merged in later)', () => {
-		const row = { ...protectingGroupsJson[0]!, stability: { 'acid-strong': 'labile' }, install: [{ reagents: 'TMSCl, imidazole' }] };
+		const row = {
+			...protectingGroupsJson[0]!,
+			stability: { 'acid-strong': 'labile' },
+			install: [{ reagents: 'TMSCl, imidazole' }]
+		};
 		const parsed = protectingGroupPatternSchema.parse(row);
-		expect(parsed).toMatchObject({ stability: { 'acid-strong': 'labile' }, install: [{ reagents: 'TMSCl, imidazole' }] });
+		expect(parsed).toMatchObject({
+			stability: { 'acid-strong': 'labile' },
+			install: [{ reagents: 'TMSCl, imidazole' }]
+		});
 		expect(() => compileRules(groupsJson, [row, ...protectingGroupsJson.slice(1)])).not.toThrow();
 	});
 	it('names file, row and reason for a broken row', () => {
-		const broken = protectingGroupsJson.map((row, i) => (i === 2 ? { ...row, patterns: ['[OX2:1]([#6)'] } : row));
+		const broken = protectingGroupsJson.map((row, i) =>
+			i === 2 ? { ...row, patterns: ['[OX2:1]([#6)'] } : row
+		);
 		expect(() => compileRules(groupsJson, broken)).toThrow(RuleTableError);
-		expect(() => compileRules(groupsJson, broken)).toThrow(/protecting-groups\.json\[2\]\.patterns\[0\]/);
-		const unknownGroup = protectingGroupsJson.map((row, i) => (i === 0 ? { ...row, protects: ['alcohol-quaternary'] } : row));
-		expect(() => compileRules(groupsJson, unknownGroup)).toThrow(/alcohol-quaternary is not a group/);
-		const noPriority = protectingGroupsJson.map((row, i) => (i === 0 ? { ...row, priority: undefined } : row));
+		expect(() => compileRules(groupsJson, broken)).toThrow(
+			/protecting-groups\.json\[2\]\.patterns\[0\]/
+		);
+		const unknownGroup = protectingGroupsJson.map((row, i) =>
+			i === 0 ? { ...row, protects: ['alcohol-quaternary'] } : row
+		);
+		expect(() => compileRules(groupsJson, unknownGroup)).toThrow(
+			/alcohol-quaternary is not a group/
+		);
+		const noPriority = protectingGroupsJson.map((row, i) =>
+			i === 0 ? { ...row, priority: undefined } : row
+		);
 		expect(() => compileRules(groupsJson, noPriority)).toThrow(/\[0\]\.priority/);
 	});
 	it('the pre-checks (elements, needs) never hide a match: same answers with and without them', () => {
-		const structures = [...referenceMolecules.map((m) => m.smiles), ...routeOG2031.map((s) => s.smiles), ...aromaticityDisagreements.map((c) => c.smiles)];
+		const structures = [
+			...referenceMolecules.map((m) => m.smiles),
+			...routeOG2031.map((s) => s.smiles),
+			...aromaticityDisagreements.map((c) => c.smiles)
+		];
 		for (const smiles of structures) {
 			const { molecule } = readStructure(smiles);
-			expect(perceive(molecule), smiles).toEqual(perceive(readStructure(smiles).molecule, undefined, { exhaustive: true }));
+			expect(perceive(molecule), smiles).toEqual(
+				perceive(readStructure(smiles).molecule, undefined, { exhaustive: true })
+			);
 		}
 	}, 60_000); // ~130 structures searched twice, exhaustively: seconds on a busy 2-core machine
 });
@@ -154,13 +231,18 @@ describe('aromaticity: openchemlib needs the ;A in the pattern column', () => {
 	it.each([
 		['OCc1ccco1', 2],
 		['Cc1c[nH]c2ccccc12', 1]
-	])('%s: raw reference SMARTS finds %i "alkenes" in openchemlib, we report none', (smiles, rawCount) => {
-		const raw = new SmilesParser({ smartsMode: 'smarts' }).parseMolecule('[CX3]=[CX3]', { noCoordinates: true });
-		const searcher = new SSSearcher();
-		searcher.setMol(raw, Molecule.fromSmiles(smiles));
-		expect(searcher.findFragmentInMolecule({ countMode: 'overlapping' })).toBe(rawCount);
-		expect(of(smiles).groups.filter((g) => g.id === 'alkene')).toEqual([]);
-	});
+	])(
+		'%s: raw reference SMARTS finds %i "alkenes" in openchemlib, we report none',
+		(smiles, rawCount) => {
+			const raw = new SmilesParser({ smartsMode: 'smarts' }).parseMolecule('[CX3]=[CX3]', {
+				noCoordinates: true
+			});
+			const searcher = new SSSearcher();
+			searcher.setMol(raw, Molecule.fromSmiles(smiles));
+			expect(searcher.findFragmentInMolecule({ countMode: 'overlapping' })).toBe(rawCount);
+			expect(of(smiles).groups.filter((g) => g.id === 'alkene')).toEqual([]);
+		}
+	);
 });
 
 describe('highlight and depiction', () => {
@@ -174,7 +256,9 @@ describe('highlight and depiction', () => {
 		expect(highlightAtoms('diol-1,2,0', diol, 7)).toEqual([0, 1, 2, 3]);
 	});
 	it('refuses what is not in the structure', () => {
-		expect(() => highlightAtoms('ketone', perception, atomCount)).toThrow(/Cannot highlight "ketone"/);
+		expect(() => highlightAtoms('ketone', perception, atomCount)).toThrow(
+			/Cannot highlight "ketone"/
+		);
 		expect(() => highlightAtoms('99', perception, atomCount)).toThrow(/0 to 19/); // 20 atoms, counted by hand;
 	});
 	it('draws an SVG with the highlighted bonds shaded', () => {
@@ -185,7 +269,13 @@ describe('highlight and depiction', () => {
 		// The shading is drawn as wide visible background lines (the invisible wide ones with
 		// class="event" are openchemlib's hit areas): seven TBS bonds, none without highlight.
 		const wide = (svg: string) =>
-			svg.split('\n').filter((line) => !line.includes('class="event"') && Number(/stroke-width="([\d.]+)"/.exec(line)?.[1] ?? 0) > 5).length;
+			svg
+				.split('\n')
+				.filter(
+					(line) =>
+						!line.includes('class="event"') &&
+						Number(/stroke-width="([\d.]+)"/.exec(line)?.[1] ?? 0) > 5
+				).length;
 		expect(wide(plain)).toBe(0);
 		expect(wide(shaded)).toBe(7);
 	});

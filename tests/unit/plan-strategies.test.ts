@@ -222,21 +222,24 @@ describe('strategy cases from textbook practice', () => {
 		};
 		const answer = planRouteDocument(doc);
 		expect(answer.unsolved).toBeUndefined();
-		expect(pgsOf(answer)).toContain('Boc');
-		const boc = answer.plans.find((p) => p.protections[0]!.protectingGroup === 'Boc')!;
-		expect(boc.protections).toEqual([expect.objectContaining({ group: 'amine-primary', atoms: [0, 1], install: expect.objectContaining({ before: 'join' }), removal: expect.objectContaining({ after: 'end' }) })]);
-		// The Boc goes on the acid half; the coupling joins the protected acid with the untouched amine.
-		const protect = boc.route.steps.find((st) => st.intent === 'protect')!;
+		// An amine carbamate or sulfonamide masks it (Boc, Cbz, Teoc, Troc, Alloc …: which one ranks
+		// first is the planner's choice among equals, so the first plan is followed here).
+		expect(answer.plans.map((p) => p.protections[0]!.protectingGroup).every((pg) => ['Boc', 'Cbz', 'Fmoc', 'Alloc', 'Teoc', 'Troc', 'Ts', 'Ns'].includes(pg))).toBe(true);
+		const first = answer.plans[0]!;
+		const chosen = first.protections[0]!.protectingGroup;
+		expect(first.protections).toEqual([expect.objectContaining({ group: 'amine-primary', atoms: [0, 1], install: expect.objectContaining({ before: 'join' }), removal: expect.objectContaining({ after: 'end' }) })]);
+		// The mask goes on the acid half; the coupling joins the protected acid with the untouched amine.
+		const protect = first.route.steps.find((st) => st.intent === 'protect')!;
 		expect(protect.from).toEqual(['acid']);
-		const join = boc.route.steps.find((st) => st.id === 'join')!;
+		const join = first.route.steps.find((st) => st.id === 'join')!;
 		expect(join.from).toEqual([protect.to, 'amine']);
-		const masked = boc.route.intermediates.find((n) => n.id === protect.to)!;
-		expect(perceiveText(masked.structure).protectingGroups).toEqual([expect.objectContaining({ id: 'Boc', masks: 'amine-primary' })]);
-		expect(boc.route.intermediates.find((n) => n.id === 'amine')!.structure).toBe('NCc1ccccc1');
-		// Free again at the end: the last step removes the Boc and gives the drawn target back.
-		const last = boc.route.steps.at(-1)!;
+		const masked = first.route.intermediates.find((n) => n.id === protect.to)!;
+		expect(perceiveText(masked.structure).protectingGroups).toEqual([expect.objectContaining({ id: chosen, masks: 'amine-primary' })]);
+		expect(first.route.intermediates.find((n) => n.id === 'amine')!.structure).toBe('NCc1ccccc1');
+		// Free again at the end: the last step removes the mask and gives the drawn target back.
+		const last = first.route.steps.at(-1)!;
 		expect(last.intent).toBe('deprotect');
-		expect(boc.route.intermediates.find((n) => n.id === last.to)!.structure).toBe('NCCC(=O)NCc1ccccc1');
+		expect(first.route.intermediates.find((n) => n.id === last.to)!.structure).toBe('NCCC(=O)NCc1ccccc1');
 	});
 
 	it('masks a ketone on one branch of a convergent route through that branch\'s Grignard step — Clayden; Greene\'s (from memory)', () => {

@@ -42,6 +42,12 @@ describe('rule table: ids and coverage', () => {
 		// Pinned by id, not by total: other parts of issue 11 add PGs too.
 		expect(PROTECTING_GROUP_IDS).toEqual(expect.arrayContaining(OXYGEN_PGS_OF_ISSUE_11));
 		expect(new Set(PROTECTING_GROUP_IDS).size).toBe(PROTECTING_GROUP_IDS.length);
+		expect(PROTECTING_GROUP_IDS).toEqual(
+			expect.arrayContaining(['Boc', 'Ns', 'Troc', 'Teoc', 'N-Bn', 'acetamide'])
+		);
+		expect(PROTECTING_GROUP_IDS).toEqual(
+			expect.arrayContaining(['trifluoroacetamide', 'TIPS-alkyne', 'TES-alkyne', 'S-Ac'])
+		);
 		expect([...table.protectingGroups.map((pg) => pg.id)].sort()).toEqual(
 			[...PROTECTING_GROUP_IDS].sort()
 		);

@@ -101,7 +101,16 @@ export const PROTECTING_GROUP_IDS = [
 	'PMP-acetal',
 	'cyclic-carbonate',
 	'ethyl-ester',
-	'PMB-ester'
+	'PMB-ester',
+	'Ns',
+	'Troc',
+	'Teoc',
+	'N-Bn',
+	'acetamide',
+	'trifluoroacetamide',
+	'TIPS-alkyne',
+	'TES-alkyne',
+	'S-Ac'
 ] as const;
 export type ProtectingGroupId = (typeof PROTECTING_GROUP_IDS)[number];
 
@@ -180,3 +189,12 @@ export type ReagentTag = (typeof REAGENT_TAGS)[number];
 export function isConditionId(value: unknown): value is ConditionId {
 	return typeof value === 'string' && (CONDITION_IDS as readonly string[]).includes(value);
 }
+
+/**
+ * What a protecting group may sit on when that changes its ratings (a PG row's `whereOn`):
+ * `aromatic-nitrogen` is the N of an indole, pyrrole or other azole (N-Boc and N-Ts there are
+ * base-labile); `aryl-oxygen` is an O on an aromatic carbon (phenolic silyl ethers and aryl
+ * acetates fall to milder bases than alkyl ones). The check derives it from the molecule.
+ */
+export const PG_SITES = ['aromatic-nitrogen', 'aryl-oxygen'] as const;
+export type PgSite = (typeof PG_SITES)[number];

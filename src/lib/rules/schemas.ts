@@ -6,6 +6,7 @@ import { z } from 'zod';
 import {
 	CONDITION_IDS,
 	FREE_GROUP_IDS,
+	PG_SITES,
 	PROTECTING_GROUP_IDS,
 	REACTIVITY_ROW_RATINGS,
 	REAGENT_KINDS,
@@ -143,6 +144,32 @@ export const transformSchema = z.strictObject({
 	smarts: text.regex(/^[^>]+>>[^>]+$/, 'must be one reaction SMARTS, "reactant>>product"')
 });
 
+/**
+ * Ratings that hold only when the PG sits on a given kind of atom, e.g. `{ site: 'aromatic-nitrogen',
+ * condition: 'base-aqueous', rating: 'labile', reason: 'NaOMe in MeOH removes Boc from an indole N' }`.
+ * An entry stands at its class's level: it wins over the row's own rating for that class (and is
+ * inherited by a finer class the row does not rate), while a team override still wins over it.
+ */
+export const whereOnSchema = z
+	.array(
+		z.strictObject({
+			site: idEnum('site', PG_SITES),
+			condition: conditionIdSchema,
+			rating: stabilityRatingSchema,
+			reason: text
+		})
+	)
+	.default([])
+	.superRefine((entries, ctx) => {
+		const seen = new Set<string>();
+		entries.forEach((entry, i) => {
+			const key = `${entry.site} ${entry.condition}`;
+			if (seen.has(key))
+				ctx.addIssue({ code: 'custom', path: [i], message: `a second entry for ${key}` });
+			seen.add(key);
+		});
+	});
+
 /** The usual install method, with the transforms that draw its result. */
 export const installSchema = methodSchema.extend({ transforms: z.array(transformSchema).min(1) });
 
@@ -182,6 +209,7 @@ export const protectingGroupConditionsSchema = z
 				})
 			)
 			.default([]),
+		whereOn: whereOnSchema,
 		notes: z.array(text),
 		/** Installing it makes a new stereocentre (THP): said, and counted as a caution, on a chiral substrate. */
 		newStereocentre: text.optional(),
@@ -197,3 +225,4 @@ export type ReactivityEntry = z.output<typeof reactivitySchema>;
 export type Method = z.output<typeof methodSchema>;
 export type Transform = z.output<typeof transformSchema>;
 export type ProtectingGroupConditions = z.output<typeof protectingGroupConditionsSchema>;
+export type WhereOnEntry = z.output<typeof whereOnSchema>[number];

@@ -11,12 +11,19 @@ import { DEFAULT_RULE_FILES } from './default-files';
 import type {
 	ConditionId,
 	FreeGroupId,
+	PgSite,
 	ProtectingGroupId,
 	ReactivityRating,
 	StabilityRating
 } from './ids';
 import { parseOverrides, type RuleOverrides, type RuleOverridesInput } from './overrides';
-import type { Condition, ProtectingGroupConditions, ReactivityEntry, Reagent } from './schemas';
+import type {
+	Condition,
+	ProtectingGroupConditions,
+	ReactivityEntry,
+	Reagent,
+	WhereOnEntry
+} from './schemas';
 import { parseRuleFiles, type RuleData } from './validate';
 
 export type RuleLayer = 'default' | 'override';
@@ -27,6 +34,8 @@ export interface StabilityAnswer {
 	/** The override's reason; default ratings carry their reasons in the row's notes. */
 	reason?: string;
 	layer: RuleLayer;
+	/** Set when the rating is the row's `whereOn` entry for what the PG sits on. */
+	site?: PgSite;
 }
 
 export interface ReactivityAnswer {
@@ -46,12 +55,14 @@ export interface RuleTable {
 	protectingGroup(id: ProtectingGroupId): ProtectingGroupConditions;
 	/**
 	 * `reagents` are the canonical names of the reagents that brought the condition; a PG row's
-	 * `reagentRatings` refine the class rating for them (the worst one applies).
+	 * `reagentRatings` refine the class rating for them (the worst one applies). `site` is what the
+	 * PG sits on, when the caller knows it: the row's `whereOn` entry for it replaces the class rating.
 	 */
 	stabilityOf(
 		pg: ProtectingGroupId,
 		condition: ConditionId,
-		reagents?: readonly string[]
+		reagents?: readonly string[],
+		site?: PgSite
 	): StabilityAnswer;
 	/** The PG's rating under every class, finer classes resolved (what the API and screens show). */
 	ratingsOf(pg: ProtectingGroupId): Record<ConditionId, StabilityRating>;
@@ -103,9 +114,12 @@ function withReagentRatings(
 	row: ProtectingGroupConditions,
 	condition: ConditionId,
 	rating: StabilityRating,
-	reagents: readonly string[]
+	reagents: readonly string[],
+	onSite?: WhereOnEntry
 ): StabilityAnswer {
-	const classAnswer: StabilityAnswer = { rating, source: row.source, layer: 'default' };
+	const classAnswer: StabilityAnswer = onSite
+		? { rating, source: row.source, layer: 'default', reason: onSite.reason, site: onSite.site }
+		: { rating, source: row.source, layer: 'default' };
 	const answers = reagents.map((name): StabilityAnswer => {
 		const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
 		return entry
@@ -148,7 +162,7 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 			if (!found) throw new Error(`unknown protecting group id "${id}"`);
 			return found;
 		},
-		stabilityOf(pg, condition, reagents = []) {
+		stabilityOf(pg, condition, reagents = [], site) {
 			const row = table.protectingGroup(pg);
 			// Most specific first: the class itself (team layer, then defaults), then its broader class.
 			for (const id of withBroader(condition)) {
@@ -161,6 +175,9 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 						layer: 'override'
 					};
 				}
+				// What the PG sits on (an indole N, a phenol O) counts at the same level, before the row's rating.
+				const onSite = site && row.whereOn.find((w) => w.site === site && w.condition === id);
+				if (onSite) return withReagentRatings(row, id, onSite.rating, reagents, onSite);
 				const rating = row.stability[id];
 				if (rating !== undefined) return withReagentRatings(row, id, rating, reagents);
 			}

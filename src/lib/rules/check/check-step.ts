@@ -51,7 +51,7 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		for (const pg of change.protectingGroups.filter(standsBy)) {
 			// Explicit condition ids carry no reagent, so the class rating applies to them as well.
 			const named = origin.explicit ? [] : origin.reagents.map((b) => b.reagent);
-			const answer = rules.stability(pg.id, condition, named);
+			const answer = rules.stability(pg.id, condition, named, pg.on);
 			if (answer.rating === 'stable') continue;
 			clashes.push({
 				severity: answer.rating === 'labile' ? 'clash' : 'caution',

@@ -1,7 +1,13 @@
 // Plain-language clash messages: the group, the condition class, the reagent that brought it
 // in, the reason and the source, in one or two sentences a reviewer can act on.
 
+import type { PgSite } from '../ids';
 import type { CheckRules } from './types';
+
+const SITE_WORDS: Record<PgSite, string> = {
+	'aromatic-nitrogen': 'on an aromatic nitrogen',
+	'aryl-oxygen': 'on an aryl oxygen'
+};
 
 /** A reagent that brought a class, and the other reagent of the step that decided which class. */
 export type Bringer = { reagent: string; context?: { reagent: string; why: string } };
@@ -27,12 +33,15 @@ function list(items: string[]): string {
 		: `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`;
 }
 
-/** E.g. "TBAF (fluoride) would remove the TBS group (tert-butyldimethylsilyl ether), which this step keeps. …" */
+/**
+ * E.g. "TBAF (fluoride) would remove the TBS group (tert-butyldimethylsilyl ether), which this step
+ * keeps. …", or "NaOMe (…) would remove the Boc group (…) on an aromatic nitrogen, which …".
+ */
 export function protectingGroupMessage(
 	rules: CheckRules,
 	pgId: string,
 	condition: string,
-	answer: { rating: 'caution' | 'labile'; source: string; reason?: string },
+	answer: { rating: 'caution' | 'labile'; source: string; reason?: string; site?: PgSite },
 	origin: Origin
 ): string {
 	const label = rules.conditionLabel(condition);
@@ -40,7 +49,9 @@ export function protectingGroupMessage(
 	const why = answer.reason
 		? stripStop(answer.reason)
 		: `${pgId} is rated ${answer.rating} under ${label.toLowerCase()} conditions`;
-	return `${broughtBy(origin, label)} ${verb} the ${pgId} group (${rules.protectingGroupLabel(pgId)}), which this step keeps: ${why}. Source: ${answer.source}.`;
+	// Said only when the site decided the rating, so the reader learns why it differs from the usual.
+	const where = answer.site ? ` ${SITE_WORDS[answer.site]}` : '';
+	return `${broughtBy(origin, label)} ${verb} the ${pgId} group (${rules.protectingGroupLabel(pgId)})${where}, which this step keeps: ${why}. Source: ${answer.source}.`;
 }
 
 /** E.g. "MeMgBr (organometallic) attacks the free ketone, which this step leaves alone: …" */

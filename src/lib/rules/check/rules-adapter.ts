@@ -15,8 +15,8 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 	return {
 		conditionIds,
 		conditionLabel: (id) => table.condition(id as ConditionId).label,
-		stability: (pg, condition, reagents) =>
-			table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId, reagents),
+		stability: (pg, condition, reagents, site) =>
+			table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId, reagents, site),
 		protectingGroupLabel: (pg) => pgLabels.get(pg) ?? pg,
 		reactivity: (group, condition) => {
 			// Perception may know groups the reactivity table has no row for: no row, no problem known.

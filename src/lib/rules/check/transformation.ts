@@ -8,8 +8,11 @@ import { LruCache } from '../../chem/cache';
 import { readStructure } from '../../chem/parse';
 import { perceive, type Perception } from '../../chem/perceive';
 import { perceiveText } from '../../chem/perception-cache';
+import type { PgSite } from '../ids';
+import { siteOf } from './pg-site';
 
-export type Site = { id: string; atoms: number[]; survives: boolean };
+/** `on`: what a protecting group sits on, where that matters to its ratings (pg-site.ts). */
+export type Site = { id: string; atoms: number[]; survives: boolean; on?: PgSite };
 export type Transformation = { protectingGroups: Site[]; freeGroups: Site[]; mapped: boolean };
 
 const cache = new LruCache<Transformation>('transformations');
@@ -36,13 +39,20 @@ export function transformation(substrates: string[], product: string): Transform
 	// Counting decides most steps: a group id that keeps its count survives, one that vanishes
 	// changed. Only when some but not all instances of an id vanish must the atoms be mapped
 	// (the maximum common substructure is the slow part) to tell which one reacted.
+	// Read at most once, for the atom map and for what each PG sits on.
+	let substrate = combined;
+	const substrateMolecule = () => (substrate ??= readStructure(substrates[0]!, MAP_ONLY).molecule);
 	const map = ambiguous(before, after)
-		? mapAtoms(
-				combined ?? readStructure(substrates[0]!, MAP_ONLY).molecule,
-				readStructure(product, MAP_ONLY).molecule
-			)
+		? mapAtoms(substrateMolecule(), readStructure(product, MAP_ONLY).molecule)
 		: null;
 	const result = compare(before, after, map);
+	if (result.protectingGroups.length) {
+		const molecule = substrateMolecule();
+		before.protectingGroups.forEach((pg, i) => {
+			const on = siteOf(molecule, pg.maskedAtom);
+			if (on) result.protectingGroups[i]!.on = on;
+		});
+	}
 	cache.set(key, result);
 	return result;
 }

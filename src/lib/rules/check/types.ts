@@ -1,6 +1,8 @@
 // The clash check's vocabulary. Kept free of the rule table's file formats: `CheckRules` is
 // the narrow view of the table the check needs, so a team's override layer can sit behind it.
 
+import type { PgSite } from '../ids';
+
 export type Severity = 'clash' | 'caution';
 export type ClashKind = 'removes-protecting-group' | 'attacks-free-group';
 
@@ -78,12 +80,17 @@ export type ReagentReading = {
 export type CheckRules = {
 	conditionIds: readonly string[];
 	conditionLabel(conditionId: string): string;
-	/** `reagents`: canonical names of the reagents that brought the condition (may refine the rating). */
+	/**
+	 * `reagents`: canonical names of the reagents that brought the condition (may refine the rating);
+	 * `site`: what the PG sits on (`aromatic-nitrogen`, `aryl-oxygen`), when known; the answer's
+	 * `site` says the rating is the one for that site.
+	 */
 	stability(
 		pgId: string,
 		conditionId: string,
-		reagents: readonly string[]
-	): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string };
+		reagents: readonly string[],
+		site?: PgSite
+	): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string; site?: PgSite };
 	protectingGroupLabel(pgId: string): string;
 	reactivity(
 		groupId: string,

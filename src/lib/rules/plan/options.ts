@@ -5,6 +5,7 @@ import { perceptionRules } from '../../chem/patterns';
 import { readStructure } from '../../chem/parse';
 import { perceiveText } from '../../chem/perception-cache';
 import { stereocentres } from '../../chem/properties';
+import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
 import type { RuleTable } from '../table';
 import { stepConditions, type RouteTree } from './tree';
@@ -63,7 +64,7 @@ function removalPoints(rules: CheckRules, tree: RouteTree, need: Need, pg: strin
 		if (at === latest) break;
 		const step = tree.next.get(need.path[at]!)!;
 		for (const c of tree.conditions.get(step.id)!) {
-			const rating = rules.stability(pg, c.id, c.explicit ? [] : c.reagents).rating;
+			const rating = rules.stability(pg, c.id, c.explicit ? [] : c.reagents, siteOfGroup(need.group)).rating;
 			if (rating === 'labile') return points.length ? { points } : { points, killer: { step: step.id, condition: c.id } };
 			if (rating === 'caution') cautions++;
 		}
@@ -150,7 +151,7 @@ function harm(rules: CheckRules, tree: RouteTree, needs: Need[], index: number, 
 	}
 	for (const pg of perceiveText(structure).protectingGroups) {
 		for (const c of conds) {
-			const answer = rules.stability(pg.id, c.id, c.explicit ? [] : c.reagents);
+			const answer = rules.stability(pg.id, c.id, c.explicit ? [] : c.reagents, siteOfGroup(pg.masks));
 			if (answer.rating === 'labile') return { blocked: `would also strip the route's own ${pg.id} group`, cautions };
 			if (answer.rating === 'caution') cautions++;
 		}

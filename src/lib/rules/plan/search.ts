@@ -1,6 +1,7 @@
 // The joint choice: one option per need, found by depth-first branch and bound. Cost is
 // lexicographic — added steps, then cautions, then harshness — folded into one score.
 
+import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
 import { freedEarlyAt, maskedAt } from './options';
 import type { Need, Option } from './types';
@@ -45,7 +46,7 @@ export function conflict(rules: CheckRules, needs: Need[], a: number, oa: Option
 	if (freedEarlyAt(nb, ob.removeAt, oa.removeAt) && nb.members.some((g) => reacts(g, oa.removal.conditions))) {
 		return `${taking} would attack the ${label} once its ${ob.pg} is off`;
 	}
-	const stripped = (conditions: string[]) => conditions.some((c) => rules.stability(ob.pg, c, []).rating === 'labile');
+	const stripped = (conditions: string[]) => conditions.some((c) => rules.stability(ob.pg, c, [], siteOfGroup(nb.group)).rating === 'labile');
 	if (maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) && !sameInstall && stripped(oa.install.conditions)) {
 		return `${putting} would strip the ${ob.pg} on the ${label}`;
 	}
