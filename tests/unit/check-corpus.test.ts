@@ -102,6 +102,19 @@ describe.each(steps)('$id', (step) => {
 		expect(problems, `step ${step.id} (${step.source})`).toEqual([]);
 	});
 
+	it('is perceived by Orthogon to hold every subject, so a quiet answer means something', () => {
+		const seen = new Set(
+			substrates(step).flatMap((text) => {
+				const perceived = perceiveText(text);
+				return [...perceived.groups, ...perceived.protectingGroups].map((site) => site.id);
+			})
+		);
+		const unseen = step.expect
+			.map((e) => e.subject)
+			.filter((subject) => !step.absent?.includes(subject) && !seen.has(subject));
+		expect(unseen, `step ${step.id}: perception misses these subjects`).toEqual([]);
+	});
+
 	it(`is checked as the literature says — ${step.source}`, () => {
 		const failures = disagreements(step);
 		expect(failures, failures.length ? report(step, failures) : '').toEqual([]);
