@@ -12,7 +12,10 @@ export type Outcome = (typeof OUTCOMES)[number];
 /** What the check did say: the harshest severity reported on the subject, or nothing. */
 export type Verdict = 'clash' | 'caution' | 'quiet';
 
-/** The patterns of issue 11 ("What is wrong today"); every one must have steps. */
+/**
+ * The patterns of issue 11 ("What is wrong today"); every one must have steps. `reagent-reading`:
+ * salts and formulas that must not be read as a metal or another reagent (sodium ascorbate, CoCl2).
+ */
 export const TOPICS = [
 	'aryl-halide',
 	'metal-reduction',
@@ -27,6 +30,7 @@ export const TOPICS = [
 	'lewis-acid',
 	'perception',
 	'protecting-group',
+	'reagent-reading',
 	'unrecognized'
 ] as const;
 
