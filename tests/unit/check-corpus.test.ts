@@ -5,7 +5,7 @@
 
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { MainModule } from '@rdkit/rdkit';
-import { checkStep, type StepCheck } from '../../src/lib/rules/check';
+import { checkStep, type Clash, type StepCheck } from '../../src/lib/rules/check';
 import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
 import { perceptionRules } from '../../src/lib/chem/patterns';
 import { perceiveText } from '../../src/lib/chem/perception-cache';
@@ -41,6 +41,28 @@ function smartsFor(subject: string): string[] | undefined {
 
 const presentIn = (smiles: string, patterns: string[]) =>
 	patterns.some((smarts) => rdkitMatches(RDKit, smiles, smarts).length > 0);
+
+describe('how an answer is read against a step', () => {
+	const on = (severity: Clash['severity'], subject = 'TBS'): Clash => ({
+		severity,
+		subject,
+		kind: 'removes-protecting-group',
+		condition: 'fluoride',
+		atoms: [],
+		message: ''
+	});
+	it('takes the harshest severity on the subject and ignores other subjects', () => {
+		expect(verdictOn([on('caution'), on('clash')], 'TBS')).toBe('clash');
+		expect(verdictOn([on('caution'), on('clash', 'Bn')], 'TBS')).toBe('caution');
+		expect(verdictOn([on('clash', 'Bn')], 'TBS')).toBe('quiet');
+	});
+	it('lets `not-clash` accept a caution but `quiet` accept nothing', () => {
+		expect(meets('not-clash', 'caution')).toBe(true);
+		expect(meets('not-clash', 'clash')).toBe(false);
+		expect(meets('quiet', 'caution')).toBe(false);
+		expect(meets('clash', 'caution')).toBe(false);
+	});
+});
 
 describe('the corpus', () => {
 	it('has at least 80 steps, each id once', () => {
