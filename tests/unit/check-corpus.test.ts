@@ -1,7 +1,8 @@
 // The regression corpus of issue 11: literature steps as a chemist writes them, each with what the
 // clash check must say about the groups that stand by, and the source of that claim. The
-// structures are checked in RDKit first (readable, and the subject really is there on both sides),
-// so a step cannot pass because a group was not perceived. tests/corpus/README.md explains the format.
+// structures are checked in RDKit first (readable, and the subject really is there on both sides)
+// and Orthogon's perception must see every subject, so a step cannot pass because a group was not
+// perceived. tests/corpus/README.md explains the format.
 
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { MainModule } from '@rdkit/rdkit';
@@ -138,29 +139,28 @@ describe.each(steps)('$id', (step) => {
 	});
 
 	it(`is checked as the literature says — ${step.source}`, () => {
-		const failures = disagreements(step);
-		expect(failures, failures.length ? report(step, failures) : '').toEqual([]);
+		const { answer, failures } = judge(step);
+		expect(failures, failures.length ? report(step, failures, answer) : '').toEqual([]);
 	});
 });
 
-let lastAnswer: StepCheck | Error | null = null;
-
-/** What the check says against what the step expects, one line per disagreement. */
-function disagreements(step: CorpusStep): string[] {
+/** The check's answer on a step and, one line each, where it disagrees with the step. */
+function judge(step: CorpusStep): { answer: StepCheck | null; failures: string[] } {
+	let answer: StepCheck;
 	try {
-		lastAnswer = checkStep(rules, {
+		answer = checkStep(rules, {
 			id: step.id,
 			substrate: step.substrate,
 			product: step.product,
 			reagents: step.reagents
 		});
 	} catch (caught) {
-		lastAnswer = caught instanceof Error ? caught : new Error(String(caught));
-		return [`the check failed: ${lastAnswer.message}`];
+		const message = caught instanceof Error ? caught.message : String(caught);
+		return { answer: null, failures: [`the check failed: ${message}`] };
 	}
-	const answer = lastAnswer;
-	if (answer.error) return [`the check could not run: ${answer.error.message}`];
-	const lines = step.expect
+	if (answer.error)
+		return { answer, failures: [`the check could not run: ${answer.error.message}`] };
+	const failures = step.expect
 		.map(({ subject, outcome }) => ({
 			subject,
 			outcome,
@@ -172,23 +172,21 @@ function disagreements(step: CorpusStep): string[] {
 		);
 	for (const text of step.unrecognized ?? []) {
 		if (!answer.unrecognized.some((entry) => entry.includes(text)))
-			lines.push(`"${text}" should be listed as not recognised`);
+			failures.push(`"${text}" should be listed as not recognised`);
 	}
-	return lines;
+	return { answer, failures };
 }
 
-function report(step: CorpusStep, failures: string[]): string {
-	const answer = lastAnswer;
-	const said =
-		answer && !(answer instanceof Error)
-			? [
-					`conditions: ${answer.conditions.join(', ') || '(none)'}`,
-					...answer.clashes.map(
-						(c) => `${c.severity} on ${c.subject} (${c.condition}): ${c.message}`
-					),
-					`not recognised: ${answer.unrecognized.join(' | ') || '(nothing)'}`
-				]
-			: [];
+function report(step: CorpusStep, failures: string[], answer: StepCheck | null): string {
+	const said = answer
+		? [
+				`conditions: ${answer.conditions.join(', ') || '(none)'}`,
+				...answer.clashes.map(
+					(c) => `${c.severity} on ${c.subject} (${c.condition}): ${c.message}`
+				),
+				`not recognised: ${answer.unrecognized.join(' | ') || '(nothing)'}`
+			]
+		: ['(no answer)'];
 	return [
 		`step ${step.id} [${step.topic}] — ${step.reagents}`,
 		`source: ${step.source}`,
