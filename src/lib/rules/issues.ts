@@ -44,3 +44,11 @@ export class RuleTableError extends Error {
 		this.problems = problems;
 	}
 }
+
+/** Where each rule file lives, as error messages name it. */
+export const RULE_FILES = {
+	conditions: 'rules/conditions.json',
+	reagents: 'rules/reagents.json',
+	reactivity: 'rules/reactivity.json',
+	protectingGroups: 'rules/protecting-groups.json'
+} as const;

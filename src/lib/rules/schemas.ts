@@ -123,7 +123,15 @@ export const reactivitySchema = z.strictObject({
 	condition: conditionIdSchema,
 	rating: reactivityRatingSchema,
 	reason: text,
-	source: text
+	source: text,
+	/**
+	 * Exceptions for named reagents (names as in rules/reagents.json) that bring this class, e.g.
+	 * a tertiary alcohol `caution` under strong acid but `none` under TFA in CH2Cl2. Where a step
+	 * has several reagents of the class, the worst rating among them applies.
+	 */
+	reagentRatings: z
+		.array(z.strictObject({ reagent: text, rating: reactivityRatingSchema, reason: text }))
+		.default([])
 });
 export const reactivityFileSchema = z.array(reactivitySchema);
 

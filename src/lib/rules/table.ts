@@ -14,6 +14,7 @@ import type {
 	PgSite,
 	ProtectingGroupId,
 	ReactivityRating,
+	ReactivityRowRating,
 	StabilityRating
 } from './ids';
 import { parseOverrides, type RuleOverrides, type RuleOverridesInput } from './overrides';
@@ -66,8 +67,16 @@ export interface RuleTable {
 	): StabilityAnswer;
 	/** The PG's rating under every class, finer classes resolved (what the API and screens show). */
 	ratingsOf(pg: ProtectingGroupId): Record<ConditionId, StabilityRating>;
-	/** `undefined` means no known problem (or a team override of `none`). */
-	reactivityOf(group: FreeGroupId, condition: ConditionId): ReactivityAnswer | undefined;
+	/**
+	 * `undefined` means no known problem (or a team override of `none`). `reagents` are the
+	 * canonical names of the reagents that brought the condition; a row's `reagentRatings` refine
+	 * its rating for them (the worst one applies).
+	 */
+	reactivityOf(
+		group: FreeGroupId,
+		condition: ConditionId,
+		reagents?: readonly string[]
+	): ReactivityAnswer | undefined;
 	conditionsForReagents: ReagentClassifier;
 }
 
@@ -132,6 +141,27 @@ function withReagentRatings(
 	);
 }
 
+const REACTS: Record<ReactivityRowRating, number> = { none: 0, caution: 1, reacts: 2 };
+
+/**
+ * A free group's default rating under one class, refined for the reagents that brought it where
+ * the row names them (each reagent its own rating, else the row's; the worst one applies), e.g.
+ * a tertiary alcohol under TFA alone is `none`, under TFA and H2SO4 the row's `caution`.
+ */
+function reactivityForReagents(
+	entry: ReactivityEntry,
+	reagents: readonly string[]
+): { rating: ReactivityRowRating; reason: string } {
+	const row = { rating: entry.rating, reason: entry.reason };
+	if (reagents.length === 0 || entry.reagentRatings.length === 0) return row;
+	const answers = reagents.map(
+		(name) => entry.reagentRatings.find((r) => r.reagent === name) ?? row
+	);
+	return answers.reduce((worst, next) =>
+		REACTS[next.rating] > REACTS[worst.rating] ? next : worst
+	);
+}
+
 function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 	const stabilityOverride = new Map(
 		(overrides?.stability ?? []).map((row) => [pairKey(row.protectingGroup, row.condition), row])
@@ -190,7 +220,7 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 				StabilityRating
 			>;
 		},
-		reactivityOf(group, condition) {
+		reactivityOf(group, condition, reagents = []) {
 			for (const id of withBroader(condition)) {
 				const override = reactivityOverride.get(pairKey(group, id));
 				if (override) {
@@ -204,13 +234,9 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 				}
 				const entry = base.reactivity.get(pairKey(group, id));
 				if (!entry) continue;
-				if (entry.rating === 'none') return undefined;
-				return {
-					rating: entry.rating,
-					reason: entry.reason,
-					source: entry.source,
-					layer: 'default'
-				};
+				const { rating, reason } = reactivityForReagents(entry, reagents);
+				if (rating === 'none') return undefined;
+				return { rating, reason, source: entry.source, layer: 'default' };
 			}
 			return undefined;
 		},

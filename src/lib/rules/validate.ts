@@ -5,7 +5,8 @@
  */
 import type { z } from 'zod';
 import { CONDITION_IDS, PROTECTING_GROUP_IDS } from './ids';
-import { formatIssue, formatZodIssues, RuleTableError } from './issues';
+import { formatIssue, formatZodIssues, RuleTableError, RULE_FILES } from './issues';
+import { checkReactivityReagentRatings, checkReagentRatings } from './validate-reagent-ratings';
 import { spellingKey } from './spelling';
 import {
 	conditionsFileSchema,
@@ -18,14 +19,7 @@ import {
 	type Reagent
 } from './schemas';
 
-/** Where each file lives, as error messages name it. */
-export const RULE_FILES = {
-	conditions: 'rules/conditions.json',
-	reagents: 'rules/reagents.json',
-	reactivity: 'rules/reactivity.json',
-	protectingGroups: 'rules/protecting-groups.json'
-} as const;
-
+export { RULE_FILES };
 export type RuleFileKey = keyof typeof RULE_FILES;
 export type RawRuleFiles = Record<RuleFileKey, unknown>;
 
@@ -159,6 +153,8 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 	if (reagents) checkReagentSpellings(reagents, problems);
 	if (reagents) checkContextTags(reagents, problems);
 	if (reagents && protectingGroups) checkReagentRatings(protectingGroups, reagents, problems);
+	if (reagents && reactivity && conditions)
+		checkReactivityReagentRatings(reactivity, reagents, conditions, problems);
 	if (protectingGroups) checkTransformCoverage(protectingGroups, problems);
 	if (reactivity) checkReactivityPairs(reactivity, problems);
 
@@ -166,11 +162,6 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 		throw new RuleTableError(problems);
 	}
 	return { conditions, reagents, reactivity, protectingGroups };
-}
-
-/** Every class a reagent can bring: its own and those of its `when` contexts. */
-function classesOf(reagent: Reagent): string[] {
-	return [...reagent.conditions, ...(reagent.when ?? []).flatMap((entry) => entry.conditions)];
 }
 
 /** A `when` tag that no reagent carries could never apply: a typo, or a tag not yet given out. */
@@ -186,38 +177,6 @@ function checkContextTags(reagents: readonly Reagent[], problems: string[]) {
 						`no reagent carries the tag "${entry.tag}", so this context never applies`
 					)
 				);
-		});
-	});
-}
-
-/** A reagent-level rating must name a known reagent that brings the condition it refines. */
-function checkReagentRatings(
-	pgs: ProtectingGroupConditions[],
-	reagents: Reagent[],
-	problems: string[]
-) {
-	const byName = new Map(reagents.map((r) => [r.name, r]));
-	pgs.forEach((pg, index) => {
-		pg.reagentRatings.forEach((entry, i) => {
-			const reagent = byName.get(entry.reagent);
-			const where = [index, 'reagentRatings', i, 'reagent'];
-			if (!reagent)
-				problems.push(
-					formatIssue(
-						RULE_FILES.protectingGroups,
-						where,
-						`unknown reagent "${entry.reagent}" (not a name in ${RULE_FILES.reagents})`
-					)
-				);
-			else if (!classesOf(reagent).includes(entry.condition)) {
-				problems.push(
-					formatIssue(
-						RULE_FILES.protectingGroups,
-						where,
-						`"${entry.reagent}" does not bring ${entry.condition} in ${RULE_FILES.reagents}`
-					)
-				);
-			}
 		});
 	});
 }

@@ -48,9 +48,9 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	const clashes: Clash[] = [];
 	for (const condition of conditions) {
 		const origin = origins.get(condition)!;
+		// Explicit condition ids carry no reagent, so the class rating applies to them as well.
+		const named = origin.explicit ? [] : origin.reagents.map((b) => b.reagent);
 		for (const pg of change.protectingGroups.filter(standsBy)) {
-			// Explicit condition ids carry no reagent, so the class rating applies to them as well.
-			const named = origin.explicit ? [] : origin.reagents.map((b) => b.reagent);
 			const answer = rules.stability(pg.id, condition, named, pg.on);
 			if (answer.rating === 'stable') continue;
 			clashes.push({
@@ -69,7 +69,7 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 			});
 		}
 		for (const group of change.freeGroups.filter(standsBy)) {
-			const rule = rules.reactivity(group.id, condition);
+			const rule = rules.reactivity(group.id, condition, named);
 			if (!rule) continue;
 			clashes.push({
 				severity: rule.rating === 'reacts' ? 'clash' : 'caution',

@@ -18,9 +18,9 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 		stability: (pg, condition, reagents, site) =>
 			table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId, reagents, site),
 		protectingGroupLabel: (pg) => pgLabels.get(pg) ?? pg,
-		reactivity: (group, condition) => {
+		reactivity: (group, condition, reagents) => {
 			// Perception may know groups the reactivity table has no row for: no row, no problem known.
-			const answer = table.reactivityOf(group as FreeGroupId, condition as ConditionId);
+			const answer = table.reactivityOf(group as FreeGroupId, condition as ConditionId, reagents);
 			return answer
 				? { rating: answer.rating, reason: answer.reason, source: answer.source }
 				: null;

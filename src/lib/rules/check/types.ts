@@ -92,9 +92,11 @@ export type CheckRules = {
 		site?: PgSite
 	): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string; site?: PgSite };
 	protectingGroupLabel(pgId: string): string;
+	/** `reagents`: canonical names of the reagents that brought the condition (none: the class rating). */
 	reactivity(
 		groupId: string,
-		conditionId: string
+		conditionId: string,
+		reagents?: readonly string[]
 	): { rating: 'reacts' | 'caution'; reason: string; source: string } | null;
 	groupLabel(groupId: string): string;
 	classify(reagents: string): {
