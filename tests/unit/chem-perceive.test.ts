@@ -32,7 +32,7 @@ describe('the rule table', () => {
 	it('has exactly the 31 protecting-group ids, and the group ids others depend on', () => {
 		expect(perceptionRules().protectingGroups.map((p) => p.id).sort()).toEqual([...PG_IDS].sort());
 		const groupIds = perceptionRules().groups.map((g) => g.id);
-		for (const id of ['alkyl-halide', 'aryl-halide', 'azide', 'nitro', 'imine', 'sulfide', 'indole-nh', 'amine-tertiary']) {
+		for (const id of ['alkyl-halide', 'aryl-halide-f-cl', 'aryl-halide-br-i', 'azide', 'nitro', 'imine', 'sulfide', 'indole-nh', 'amine-tertiary']) {
 			expect(groupIds).toContain(id);
 		}
 	});

@@ -117,15 +117,36 @@ export const FREE_GROUP_IDS = [
 	'acetal',
 	'silyl-ether',
 	'alkyl-halide',
-	'aryl-halide',
+	'aryl-halide-f-cl',
+	'aryl-halide-br-i',
 	'azide',
 	'nitro',
 	'imine',
 	'sulfide',
 	'indole-nh',
-	'amine-tertiary'
+	'amine-tertiary',
+	'alkyne-internal',
+	'aniline',
+	'azole-nh',
+	'azine-nitrogen',
+	'boronic-acid',
+	'boronate-ester',
+	'sulfonate-ester',
+	'michael-acceptor',
+	'vinyl-halide',
+	'alcohol-allylic-benzylic'
 ] as const;
 export type FreeGroupId = (typeof FREE_GROUP_IDS)[number];
+
+/**
+ * Retired group ids that clients may still send (a team override written before a split): each
+ * means every group it was split into. Perception never reports them and the rule files may not
+ * use them, e.g. a team override on `aryl-halide` applies to both halves.
+ */
+export const FREE_GROUP_ALIASES = {
+	'aryl-halide': ['aryl-halide-f-cl', 'aryl-halide-br-i']
+} as const satisfies Record<string, readonly FreeGroupId[]>;
+export type FreeGroupAlias = keyof typeof FREE_GROUP_ALIASES;
 
 /** How a protecting group stands up to a condition class. */
 export const STABILITY_RATINGS = ['stable', 'caution', 'labile'] as const;
