@@ -174,6 +174,9 @@ export const referenceMolecules: ReferenceMolecule[] = [
 		name: 'OG-5230-43 phenyl glucoside',
 		smiles: 'OC[C@H]1O[C@@H](Oc2ccccc2)[C@H](O)[C@@H](O)[C@@H]1O'
 	},
+	{ name: 'OG-5230-44 MIDA bromophenyl boronate', smiles: 'C[N+]12CC(=O)O[B-]1(c1ccc(Br)cc1)OC(=O)C2', pgs: ['MIDA-boronate'] },
+	{ name: 'OG-5230-45 MIDA boronate drawn as an eight-membered ring', smiles: 'CN1CC(=O)OB(c2ccc(Br)cc2)OC(=O)C1', pgs: ['MIDA-boronate'] },
+	{ name: 'OG-5230-46 tolyl B(dan)', smiles: 'Cc1ccc(cc1)B1Nc2cccc3cccc(N1)c23', pgs: ['Bdan'] },
 	// Multi-PG route intermediates
 	{
 		name: 'OG-2031-20 furanoside TBS Bn',

@@ -13,6 +13,7 @@ import { clearPerceptionCache, perceiveWithKey } from '../../src/lib/chem/percep
 import groupsJson from '../../rules/groups.json';
 import protectingGroupsJson from '../../rules/protecting-groups.json';
 import { referenceMolecules } from '../reference/molecules';
+import { PROTECTING_GROUP_IDS } from '../../src/lib/rules/ids';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
 import { routeOG2031 } from '../../scripts/bench/route-og2031';
 
@@ -29,8 +30,11 @@ const PG_IDS = [
 ];
 
 describe('the rule table', () => {
-	it('has exactly the 31 protecting-group ids, and the group ids others depend on', () => {
-		expect(perceptionRules().protectingGroups.map((p) => p.id).sort()).toEqual([...PG_IDS].sort());
+	it('has the protecting-group ids others depend on, and perceives every id of PROTECTING_GROUP_IDS', () => {
+		const perceived = perceptionRules().protectingGroups.map((p) => p.id);
+		expect(perceived.sort()).toEqual([...PROTECTING_GROUP_IDS].sort());
+		// The 31 of issue 3 and the boron masks of issue 11.
+		expect(perceived).toEqual(expect.arrayContaining([...PG_IDS, 'MIDA-boronate', 'Bdan']));
 		const groupIds = perceptionRules().groups.map((g) => g.id);
 		for (const id of ['alkyl-halide', 'aryl-halide-f-cl', 'aryl-halide-br-i', 'azide', 'nitro', 'imine', 'sulfide', 'indole-nh', 'amine-tertiary']) {
 			expect(groupIds).toContain(id);
@@ -62,14 +66,14 @@ describe('the rule table', () => {
 
 describe('every protecting group is recognised, with what it masks', () => {
 	// Expected names are the chemistry of each structure (common practice).
-	it('covers each of the 31 ids in the reference set as the chemist names it', () => {
+	it('covers each id (the 31 of issue 3 and the boron masks) in the reference set as the chemist names it', () => {
 		const seen = new Set<string>();
 		for (const molecule of referenceMolecules) {
 			const found = pgIds(of(molecule.smiles));
 			expect(found, molecule.name).toEqual([...(molecule.pgs ?? [])].sort());
 			found.forEach((id) => seen.add(id));
 		}
-		expect([...seen].sort()).toEqual([...PG_IDS].sort());
+		expect([...seen].sort()).toEqual([...PG_IDS, 'MIDA-boronate', 'Bdan'].sort());
 	});
 	it.each([
 		['CC(C)(C)[Si](C)(C)OCCCC=O', 'TBS', 'alcohol-primary', 'O'],

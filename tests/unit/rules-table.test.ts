@@ -21,8 +21,11 @@ describe('rule table: ids and coverage', () => {
 		}
 	});
 
-	it('rates each of the 31 protecting groups once', () => {
-		expect(PROTECTING_GROUP_IDS).toHaveLength(31);
+	it('rates each protecting group once (the 31 of issue 3 and the boron masks of issue 11 among them)', () => {
+		expect(PROTECTING_GROUP_IDS).toEqual(
+			expect.arrayContaining(['TBS', 'S-Tr', 'MIDA-boronate', 'Bdan'])
+		);
+		expect(new Set(PROTECTING_GROUP_IDS).size).toBe(PROTECTING_GROUP_IDS.length);
 		expect([...table.protectingGroups.map((pg) => pg.id)].sort()).toEqual(
 			[...PROTECTING_GROUP_IDS].sort()
 		);

@@ -89,7 +89,9 @@ export const PROTECTING_GROUP_IDS = [
 	'Bn-ester',
 	'allyl-ester',
 	'TMS-alkyne',
-	'S-Tr'
+	'S-Tr',
+	'MIDA-boronate',
+	'Bdan'
 ] as const;
 export type ProtectingGroupId = (typeof PROTECTING_GROUP_IDS)[number];
 
