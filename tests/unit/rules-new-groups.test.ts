@@ -5,6 +5,7 @@
 
 import { describe, expect, it } from 'vitest';
 import { perceiveText } from '../../src/lib/chem';
+import { highlightAtoms } from '../../src/lib/chem/highlight';
 import { checkStep, type StepToCheck } from '../../src/lib/rules/check';
 import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
 import { loadRuleTable, parseOverrides, RuleTableError } from '../../src/lib/rules';
@@ -315,6 +316,20 @@ describe('the retired id aryl-halide, as a client may still send it', () => {
 			'aryl-halide-br-i none',
 			'aryl-halide-f-cl reacts'
 		]);
+	});
+	it('highlights both halves for aryl-halide in /api/analyze, and refuses it where there is none', () => {
+		const smiles = 'COc1ccc(Br)cc1F';
+		const perception = perceiveText(smiles);
+		const halves = perception.groups
+			.filter((g) => g.id.startsWith('aryl-halide-'))
+			.flatMap((g) => g.atoms);
+		expect(halves.length).toBe(4);
+		expect(highlightAtoms('aryl-halide', perception, 10)).toEqual(
+			[...new Set(halves)].sort((a, b) => a - b)
+		);
+		expect(() => highlightAtoms('aryl-halide', perceiveText('CCO'), 3)).toThrow(
+			/Cannot highlight "aryl-halide"/
+		);
 	});
 	it('still refuses an unknown group id, naming the valid ones with aryl-halide among them', () => {
 		const bad = {

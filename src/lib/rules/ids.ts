@@ -4,6 +4,8 @@
  * the JSON files in rules/ must use them and the loader rejects anything else.
  */
 
+import { FREE_GROUP_ALIASES as GROUP_ALIASES } from '../chem/group-aliases';
+
 /**
  * Condition classes, in the order the rule table lists them. A class with `refines` in
  * rules/conditions.json is a finer class inside a broader one (e.g. `organometallic-grignard`
@@ -140,14 +142,8 @@ export const FREE_GROUP_IDS = [
 ] as const;
 export type FreeGroupId = (typeof FREE_GROUP_IDS)[number];
 
-/**
- * Retired group ids that clients may still send (a team override written before a split): each
- * means every group it was split into. Perception never reports them and the rule files may not
- * use them, e.g. a team override on `aryl-halide` applies to both halves.
- */
-export const FREE_GROUP_ALIASES = {
-	'aryl-halide': ['aryl-halide-f-cl', 'aryl-halide-br-i']
-} as const satisfies Record<string, readonly FreeGroupId[]>;
+/** Retired group ids clients may still send, each meaning the groups it was split into (`aryl-halide`). */
+export const FREE_GROUP_ALIASES = GROUP_ALIASES satisfies Record<string, readonly FreeGroupId[]>;
 export type FreeGroupAlias = keyof typeof FREE_GROUP_ALIASES;
 
 /** How a protecting group stands up to a condition class. */
