@@ -17,5 +17,6 @@ export const MODEL_SUBSTRATES: Record<string, string> = {
 	'carboxylic-acid': 'OC(=O)[C@@H](C)CC',
 	'alkyne-terminal': 'C#CCCC',
 	thiol: 'SCCCC',
-	'boronic-acid': 'OB(O)c1ccc(C)cc1'
+	'boronic-acid': 'OB(O)c1ccc(C)cc1',
+	aniline: 'Nc1ccc(C)cc1'
 };

@@ -98,8 +98,11 @@ describe('every protecting group is recognised, with what it masks', () => {
 		expect(molecule.getAtomLabel(found!.maskedAtom)).toBe(element);
 		expect(found!.atoms).toContain(found!.maskedAtom);
 	});
-	it('falls back to amine-primary for a carbamate on an aniline N (no aryl-amine group yet)', () => {
-		expect(pg(of('CC(C)(C)OC(=O)Nc1ccccc1'), 'Boc')?.masks).toBe('amine-primary');
+	it('says a carbamate on an aniline N masks the aniline (issue 11), and still falls back to amine-primary elsewhere', () => {
+		expect(pg(of('CC(C)(C)OC(=O)Nc1ccccc1'), 'Boc')?.masks).toBe('aniline');
+		expect(pg(of('CC(C)(C)OC(=O)Nc1ccc(Cl)cc1'), 'Boc')?.masks).toBe('aniline');
+		// A Boc on an amide N frees no amine of any kind: the declared fallback is reported.
+		expect(pg(of('CC(C)(C)OC(=O)NC(C)=O'), 'Boc')?.masks).toBe('amine-primary');
 	});
 	it('reports the atoms of the PG itself, not the substrate it sits on', () => {
 		// TBS on propanal-3-ol: O, Si, 2 methyls, tBu (4 C) = 8 atoms; the OCH2 carbon is substrate.
