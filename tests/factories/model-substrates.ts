@@ -16,5 +16,7 @@ export const MODEL_SUBSTRATES: Record<string, string> = {
 	'indole-nh': 'c1ccc2[nH]ccc2c1',
 	'carboxylic-acid': 'OC(=O)[C@@H](C)CC',
 	'alkyne-terminal': 'C#CCCC',
-	thiol: 'SCCCC'
+	thiol: 'SCCCC',
+	'boronic-acid': 'OB(O)c1ccc(C)cc1',
+	aniline: 'Nc1ccc(C)cc1'
 };

@@ -17,15 +17,15 @@ export const aromaticityDisagreements: AromaticityCase[] = [
 	{
 		name: 'OG-5120-01 hydroxymethyl coumarin',
 		smiles: 'OCc1ccc2C=CC(=O)Oc2c1',
-		rdkit: { ester: 0, alkene: 0, 'alcohol-primary': 1 },
-		chemistry: { ester: 1, alkene: 1, 'alcohol-primary': 1 },
-		why: 'RDKit counts the 2-pyranone ring of a coumarin as aromatic, so its C=O is no ester and C3=C4 no alkene. Chemically it is an α,β-unsaturated lactone: hydroxide opens it and C3=C4 takes hydrogen and nucleophiles (common practice).'
+		rdkit: { ester: 0, alkene: 0, 'michael-acceptor': 0, 'alcohol-primary': 1 },
+		chemistry: { ester: 1, alkene: 1, 'michael-acceptor': 1, 'alcohol-primary': 1 },
+		why: 'RDKit counts the 2-pyranone ring of a coumarin as aromatic, so its C=O is no ester and C3=C4 no alkene or Michael acceptor. Chemically it is an α,β-unsaturated lactone: hydroxide opens it and C3=C4 takes hydrogen and nucleophiles (common practice).'
 	},
 	{
 		name: 'OG-5120-02 methyl chromone',
 		smiles: 'CC1=CC(=O)c2ccccc2O1',
-		rdkit: { ketone: 0, alkene: 0 },
-		chemistry: { ketone: 1, alkene: 1 },
+		rdkit: { ketone: 0, alkene: 0, 'michael-acceptor': 0 },
+		chemistry: { ketone: 1, alkene: 1, 'michael-acceptor': 1 },
 		why: 'RDKit counts the 4-pyranone ring as aromatic. A chromone reacts as a vinylogous ester / enone: its C4=O takes hydride and organometallics and C2=C3 adds nucleophiles (common practice).'
 	},
 	{

@@ -45,7 +45,7 @@ describe('molar masses of common reagents (CRC Handbook of Chemistry and Physics
 // IUPAC standard atomic weights, abridged to five significant figures (IUPAC Commission on
 // Isotopic Abundances and Atomic Weights, 2021 table), from memory.
 const IUPAC: Record<string, number> = {
-	H: 1.008, C: 12.011, N: 14.007, O: 15.999, F: 18.998, Si: 28.085, P: 30.974, S: 32.06, Cl: 35.45, Br: 79.904, I: 126.9
+	H: 1.008, B: 10.81, C: 12.011, N: 14.007, O: 15.999, F: 18.998, Si: 28.085, P: 30.974, S: 32.06, Cl: 35.45, Br: 79.904, I: 126.9
 };
 
 function massFromFormula(formula: string): number {

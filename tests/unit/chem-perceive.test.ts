@@ -18,9 +18,9 @@ import { clearPerceptionCache, perceiveWithKey } from '../../src/lib/chem/percep
 import groupsJson from '../../rules/groups.json';
 import protectingGroupsJson from '../../rules/protecting-groups.json';
 import { referenceMolecules } from '../reference/molecules';
+import { PROTECTING_GROUP_IDS } from '../../src/lib/rules/ids';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
 import { routeOG2031 } from '../../scripts/bench/route-og2031';
-import { PROTECTING_GROUP_IDS } from '../../src/lib/rules/ids';
 
 const of = (smiles: string) => perceive(readStructure(smiles).molecule);
 const pgIds = (p: Perception) => p.protectingGroups.map((pg) => pg.id).sort();
@@ -82,13 +82,15 @@ describe('the rule table', () => {
 	it('has the protecting-group ids of ids.ts (the 31 of issue 3 among them), and the group ids others depend on', () => {
 		const ids = perceptionRules().protectingGroups.map((p) => p.id);
 		expect([...ids].sort()).toEqual([...PROTECTING_GROUP_IDS].sort());
-		expect(ids).toEqual(expect.arrayContaining(PG_IDS));
-		expect(ids).toEqual(expect.arrayContaining(OXYGEN_PG_IDS));
+		expect(ids).toEqual(
+			expect.arrayContaining([...PG_IDS, ...OXYGEN_PG_IDS, 'MIDA-boronate', 'Bdan'])
+		);
 		expect(new Set(ids).size).toBe(ids.length);
 		const groupIds = perceptionRules().groups.map((g) => g.id);
 		for (const id of [
 			'alkyl-halide',
-			'aryl-halide',
+			'aryl-halide-f-cl',
+			'aryl-halide-br-i',
 			'azide',
 			'nitro',
 			'imine',
@@ -148,14 +150,16 @@ describe('the rule table', () => {
 
 describe('every protecting group is recognised, with what it masks', () => {
 	// Expected names are the chemistry of each structure (common practice).
-	it('covers each of those ids in the reference set as the chemist names it', () => {
+	it('covers each id (the 31 of issue 3 and the boron masks) in the reference set as the chemist names it', () => {
 		const seen = new Set<string>();
 		for (const molecule of referenceMolecules) {
 			const found = pgIds(of(molecule.smiles));
 			expect(found, molecule.name).toEqual([...(molecule.pgs ?? [])].sort());
 			found.forEach((id) => seen.add(id));
 		}
-		expect([...seen]).toEqual(expect.arrayContaining([...PG_IDS, ...OXYGEN_PG_IDS]));
+		expect([...seen]).toEqual(
+			expect.arrayContaining([...PG_IDS, ...OXYGEN_PG_IDS, 'MIDA-boronate', 'Bdan'])
+		);
 	});
 	it.each([
 		['CC(C)(C)[Si](C)(C)OCCCC=O', 'TBS', 'alcohol-primary', 'O'],
@@ -180,8 +184,11 @@ describe('every protecting group is recognised, with what it masks', () => {
 		expect(molecule.getAtomLabel(found!.maskedAtom)).toBe(element);
 		expect(found!.atoms).toContain(found!.maskedAtom);
 	});
-	it('falls back to amine-primary for a carbamate on an aniline N (no aryl-amine group yet)', () => {
-		expect(pg(of('CC(C)(C)OC(=O)Nc1ccccc1'), 'Boc')?.masks).toBe('amine-primary');
+	it('says a carbamate on an aniline N masks the aniline (issue 11), and still falls back to amine-primary elsewhere', () => {
+		expect(pg(of('CC(C)(C)OC(=O)Nc1ccccc1'), 'Boc')?.masks).toBe('aniline');
+		expect(pg(of('CC(C)(C)OC(=O)Nc1ccc(Cl)cc1'), 'Boc')?.masks).toBe('aniline');
+		// A Boc on an amide N frees no amine of any kind: the declared fallback is reported.
+		expect(pg(of('CC(C)(C)OC(=O)NC(C)=O'), 'Boc')?.masks).toBe('amine-primary');
 	});
 	it('reports the atoms of the PG itself, not the substrate it sits on', () => {
 		// TBS on propanal-3-ol: O, Si, 2 methyls, tBu (4 C) = 8 atoms; the OCH2 carbon is substrate.

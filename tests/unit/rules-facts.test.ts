@@ -285,13 +285,19 @@ const REACTIVITY_FACTS: ReactivityFact[] = [
 		CLAYDEN
 	],
 	[
-		'aryl-halide',
+		'aryl-halide-br-i',
 		'organometallic',
 		'reacts',
 		'Aryl bromides undergo lithium–halogen exchange with n-BuLi',
 		CLAYDEN
 	],
-	['aryl-halide', 'palladium-zero', 'reacts', 'Aryl halides oxidatively add to Pd(0)', CLAYDEN],
+	[
+		'aryl-halide-br-i',
+		'palladium-zero',
+		'reacts',
+		'Aryl bromides and iodides oxidatively add to Pd(0)',
+		CLAYDEN
+	],
 	['nitrile', 'hydride-strong', 'reacts', 'LiAlH4 reduces nitriles to amines', CLAYDEN],
 	['imine', 'hydride-mild', 'reacts', 'NaBH3CN reduces imines (reductive amination)', CLAYDEN],
 	['sulfide', 'oxidant-strong', 'reacts', 'mCPBA oxidises sulfides to sulfoxides', CLAYDEN],

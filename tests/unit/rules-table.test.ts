@@ -48,6 +48,7 @@ describe('rule table: ids and coverage', () => {
 		expect(PROTECTING_GROUP_IDS).toEqual(
 			expect.arrayContaining(['trifluoroacetamide', 'TIPS-alkyne', 'TES-alkyne', 'S-Ac'])
 		);
+		expect(PROTECTING_GROUP_IDS).toEqual(expect.arrayContaining(['MIDA-boronate', 'Bdan']));
 		expect([...table.protectingGroups.map((pg) => pg.id)].sort()).toEqual(
 			[...PROTECTING_GROUP_IDS].sort()
 		);

@@ -4,6 +4,8 @@
  * the JSON files in rules/ must use them and the loader rejects anything else.
  */
 
+import { FREE_GROUP_ALIASES as GROUP_ALIASES } from '../chem/group-aliases';
+
 /**
  * Condition classes, in the order the rule table lists them. A class with `refines` in
  * rules/conditions.json is a finer class inside a broader one (e.g. `organometallic-grignard`
@@ -110,7 +112,9 @@ export const PROTECTING_GROUP_IDS = [
 	'trifluoroacetamide',
 	'TIPS-alkyne',
 	'TES-alkyne',
-	'S-Ac'
+	'S-Ac',
+	'MIDA-boronate',
+	'Bdan'
 ] as const;
 export type ProtectingGroupId = (typeof PROTECTING_GROUP_IDS)[number];
 
@@ -138,15 +142,30 @@ export const FREE_GROUP_IDS = [
 	'acetal',
 	'silyl-ether',
 	'alkyl-halide',
-	'aryl-halide',
+	'aryl-halide-f-cl',
+	'aryl-halide-br-i',
 	'azide',
 	'nitro',
 	'imine',
 	'sulfide',
 	'indole-nh',
-	'amine-tertiary'
+	'amine-tertiary',
+	'alkyne-internal',
+	'aniline',
+	'azole-nh',
+	'azine-nitrogen',
+	'boronic-acid',
+	'boronate-ester',
+	'sulfonate-ester',
+	'michael-acceptor',
+	'vinyl-halide',
+	'alcohol-allylic-benzylic'
 ] as const;
 export type FreeGroupId = (typeof FREE_GROUP_IDS)[number];
+
+/** Retired group ids clients may still send, each meaning the groups it was split into (`aryl-halide`). */
+export const FREE_GROUP_ALIASES = GROUP_ALIASES satisfies Record<string, readonly FreeGroupId[]>;
+export type FreeGroupAlias = keyof typeof FREE_GROUP_ALIASES;
 
 /** How a protecting group stands up to a condition class. */
 export const STABILITY_RATINGS = ['stable', 'caution', 'labile'] as const;

@@ -4,14 +4,23 @@
  */
 import { z } from 'zod';
 import { formatIssue, formatZodIssues, RuleTableError } from './issues';
-import {
-	conditionIdSchema,
-	freeGroupIdSchema,
-	protectingGroupIdSchema,
-	stabilityRatingSchema
-} from './schemas';
+import { FREE_GROUP_ALIASES, FREE_GROUP_IDS, type FreeGroupAlias, type FreeGroupId } from './ids';
+import { conditionIdSchema, protectingGroupIdSchema, stabilityRatingSchema } from './schemas';
 
 const text = z.string().trim().min(1, 'must not be empty');
+
+const groupIdsAccepted = [
+	...FREE_GROUP_IDS,
+	...(Object.keys(FREE_GROUP_ALIASES) as FreeGroupAlias[])
+];
+/** A free group id, or a retired id that stands for the groups it was split into (`aryl-halide`). */
+const overrideGroupIdSchema = z.enum(groupIdsAccepted as [string, ...string[]], {
+	error: (issue) =>
+		issue.input === undefined
+			? 'missing free group id'
+			: `unknown free group id ${JSON.stringify(issue.input)} (valid: ${groupIdsAccepted.join(', ')})`
+});
+const isAlias = (id: string): id is FreeGroupAlias => Object.hasOwn(FREE_GROUP_ALIASES, id);
 
 /**
  * `stability` replaces a protecting group's rating under one condition class; `reactivity`
@@ -34,7 +43,7 @@ export const ruleOverridesSchema = z.strictObject({
 	reactivity: z
 		.array(
 			z.strictObject({
-				group: freeGroupIdSchema,
+				group: overrideGroupIdSchema,
 				condition: conditionIdSchema,
 				rating: z.enum(['reacts', 'caution', 'none'], {
 					error: (issue) =>
@@ -48,7 +57,28 @@ export const ruleOverridesSchema = z.strictObject({
 });
 
 export type RuleOverridesInput = z.input<typeof ruleOverridesSchema>;
-export type RuleOverrides = z.output<typeof ruleOverridesSchema>;
+type ReactivityOverride = z.output<typeof ruleOverridesSchema>['reactivity'][number];
+/** A validated layer: retired group ids are already spelled out as the groups they stand for. */
+export type RuleOverrides = Omit<z.output<typeof ruleOverridesSchema>, 'reactivity'> & {
+	reactivity: (ReactivityOverride & { group: FreeGroupId })[];
+};
+
+/**
+ * A row on a retired id (`aryl-halide`) becomes one row per group it was split into; a row the
+ * team wrote on one of those groups for the same class is more specific and wins.
+ */
+function expandAliases(rows: ReactivityOverride[]): RuleOverrides['reactivity'] {
+	const explicit = rows.filter((row) => !isAlias(row.group)) as RuleOverrides['reactivity'];
+	const written = new Set(explicit.map((row) => `${row.group} × ${row.condition}`));
+	const expanded = rows.flatMap((row) =>
+		isAlias(row.group)
+			? FREE_GROUP_ALIASES[row.group]
+					.filter((group) => !written.has(`${group} × ${row.condition}`))
+					.map((group) => ({ ...row, group }))
+			: []
+	);
+	return [...explicit, ...expanded];
+}
 
 /** Validates a layer, e.g. `parseOverrides({ name: 'Team Kestrel', stability: [...] })`. */
 export function parseOverrides(input: unknown): RuleOverrides {
@@ -68,5 +98,5 @@ export function parseOverrides(input: unknown): RuleOverrides {
 		seen.add(key);
 	});
 	if (problems.length > 0) throw new RuleTableError(problems);
-	return result.data;
+	return { ...result.data, reactivity: expandAliases(result.data.reactivity) };
 }
