@@ -9,6 +9,7 @@
 import { Molecule, SSSearcher } from 'openchemlib';
 import type { CompiledPattern } from './patterns';
 import { atomTable, mayMatch, type AtomTable } from './prefilter';
+import { allMappings, compareMappings } from './smarts-match';
 
 /** Features a rule row may list under `needs` (group ids may be listed too). */
 export const MOLECULE_FEATURES = ['O-H', 'N-H', 'S-H', 'C=O', 'C=C', 'C=N', 'triple', 'ring-3'] as const;
@@ -71,16 +72,35 @@ export function hasFeatures(target: SearchTarget, needs: readonly (string | numb
 }
 
 /**
- * Every match with a distinct atom set, as fragment-index → molecule-atom arrays (-1 for atoms
- * openchemlib only uses to exclude), e.g. `findMatches(target, compiled)` → `[[3, 4, 5]]`.
- * 'overlapping' mode drops matches that cover exactly the same atoms, as RDKit's uniquify does.
+ * Every match with a distinct atom set, as mappings pattern atom → molecule atom (indices as the
+ * pattern's roles use them; -1 for atoms openchemlib only uses to exclude), in ascending order of
+ * the mapping arrays, e.g. `findMatches(target, compiled)` → `[[3, 4, 5]]`. Matches that cover
+ * exactly the same atoms count once (the first mapping in that order), as RDKit's uniquify does.
  */
 export function findMatches(target: SearchTarget, pattern: CompiledPattern): number[][] {
 	if (!hasFeatures(target, pattern.requiredElements)) return [];
+	if (pattern.exact && target.table.plain) return firstPerAtomSet(allMappings(target.table, pattern.exact));
 	if (!target.exhaustive && pattern.loose && !mayMatch(target.table, pattern.loose)) return [];
 	target.searcher.setFragment(pattern.fragment);
-	const count = target.searcher.findFragmentInMolecule({ countMode: 'overlapping' });
-	return count === 0 ? [] : target.searcher.getMatchList();
+	// 'rigorous' lists every mapping, symmetric ones too: 2–5× cheaper than 'overlapping' on a
+	// TBS pattern (12 mappings per TBS ether), and sorting gives the same order as the TS path.
+	if (target.searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) return [];
+	const mappings = target.searcher.getMatchList();
+	// An exact pattern's roles count in SMARTS order: drop the placeholders of `!$()` atoms.
+	const ordered = pattern.exact ? mappings.map((mapping) => mapping.filter((atom) => atom >= 0)) : mappings;
+	return firstPerAtomSet(ordered.sort(compareMappings));
+}
+
+/** The first mapping of each distinct atom set, in the order given, e.g. `firstPerAtomSet([[1, 2], [2, 1]])` → `[[1, 2]]`. */
+export function firstPerAtomSet(mappings: number[][]): number[][] {
+	if (mappings.length < 2) return mappings;
+	const seen = new Set<string>();
+	return mappings.filter((mapping) => {
+		const atomSet = matchedAtoms(mapping).join(',');
+		if (seen.has(atomSet)) return false;
+		seen.add(atomSet);
+		return true;
+	});
 }
 
 /** The molecule atoms of a match, without excluded placeholders, sorted, e.g. `matchedAtoms([5, -1, 2])` → `[2, 5]`. */

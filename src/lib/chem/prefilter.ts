@@ -8,7 +8,7 @@
 // heavy-atom neighbours. So "no" is final and "yes" still goes to openchemlib for the real match
 // list. tests/unit/chem-prefilter.test.ts proves "no" never hides a match over the reference set.
 
-import type { Molecule } from 'openchemlib';
+import { Molecule } from 'openchemlib';
 
 /**
  * What one pattern atom asks of a molecule atom, all of it at once: one of `elements` (null: any),
@@ -31,9 +31,17 @@ export type AtomTable = {
 	element: Int16Array;
 	aromatic: Uint8Array;
 	hydrogens: Int16Array;
+	/** Formal charge (smarts-match.ts reads it; the loose test does not). */
+	charge: Int8Array;
 	neighbours: number[][];
 	/** Bond bits to each neighbour, same order as `neighbours`. */
 	bonds: number[][];
+	/**
+	 * No charged atom, radical or hydrogen atom (deuterium) among the heavy atoms. openchemlib
+	 * reads X and H on those in ways of its own (an N+ with four carbons is X3 to it), so only a
+	 * plain molecule is searched by smarts-match.ts; the others go to openchemlib.
+	 */
+	plain: boolean;
 };
 
 // Bond bits: a molecule bond has one order bit, plus AROMATIC when it is aromatic.
@@ -49,14 +57,18 @@ const DEFAULT_BOND = SINGLE | AROMATIC;
 const ELEMENTS: Record<string, number> = { B: 5, C: 6, N: 7, O: 8, F: 9, Si: 14, P: 15, S: 16, Cl: 17, Br: 35, I: 53 };
 const AROMATIC_ELEMENTS: Record<string, number> = { b: 5, c: 6, n: 7, o: 8, p: 15, s: 16 };
 
-/** Reads the table once per molecule (helper arrays must be ready), e.g. `atomTable(Molecule.fromSmiles('CCO'))`. */
+/** Reads the table once per molecule, e.g. `atomTable(Molecule.fromSmiles('CCO'))`. */
 export function atomTable(molecule: Molecule): AtomTable {
+	// Rings and aromaticity first (a no-op when done): a fresh molecule has no hydrogen counts yet.
+	molecule.ensureHelperArrays(Molecule.cHelperRings);
 	const count = molecule.getAtoms();
-	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), neighbours: [], bonds: [] };
+	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), charge: new Int8Array(count), neighbours: [], bonds: [], plain: true };
 	for (let atom = 0; atom < count; atom++) {
 		table.element[atom] = molecule.getAtomicNo(atom);
 		table.aromatic[atom] = molecule.isAromaticAtom(atom) ? 1 : 0;
 		table.hydrogens[atom] = molecule.getAllHydrogens(atom);
+		table.charge[atom] = molecule.getAtomCharge(atom);
+		if (table.charge[atom] !== 0 || table.element[atom] === 1 || molecule.getAtomRadical(atom) !== 0) table.plain = false;
 		const neighbours: number[] = [];
 		const bonds: number[] = [];
 		for (let i = 0; i < molecule.getConnAtoms(atom); i++) {
