@@ -16,7 +16,7 @@ export const MOLECULE_FEATURES = ['O-H', 'N-H', 'S-H', 'C=O', 'C=C', 'C=N', 'tri
 
 /** One molecule prepared for many searches: its searcher and the features it has. */
 export type SearchTarget = {
-	molecule: Molecule;
+	readonly molecule: Molecule;
 	/** Made on first use: when the pre-checks rule out every pattern, no searcher is built. */
 	readonly searcher: SSSearcher;
 	/** The molecule as prefilter.ts reads it. */
