@@ -15,7 +15,8 @@ import { z } from 'zod';
 import { Molecule, SmilesParser } from 'openchemlib';
 import { MOLECULE_FEATURES } from './match';
 import { looseQuery, type LooseQuery } from './prefilter';
-import { exactQuery, requiredElement as elementOf, type ExactQuery } from './smarts-query';
+import { exactQuery, type ExactQuery } from './smarts-query';
+import { queryElements } from './smarts-plan';
 import groupsJson from '../../../rules/groups.json';
 import protectingGroupsJson from '../../../rules/protecting-groups.json';
 
@@ -143,9 +144,11 @@ function roles(mapNumbers: number[]): { key: number; masked: number[]; context: 
 	return { key: masked[0] ?? 0, masked, context };
 }
 
-/** The element of a pattern's key atom, whichever reading it was compiled with. */
+/** The element of a pattern's key atom (null: not one element), whichever reading it was compiled with. */
 export function keyElement(pattern: CompiledPattern): number | null {
-	return pattern.exact ? elementOf(pattern.exact.atoms[pattern.key]!) : pattern.fragment.getAtomicNo(pattern.key);
+	if (!pattern.exact) return pattern.fragment.getAtomicNo(pattern.key);
+	const elements = queryElements(pattern.exact)[pattern.key];
+	return elements?.length === 1 ? elements[0]! : null;
 }
 
 /** Elements named by plain (non-list, non-negated) atoms outside recursive `$()` parts. */

@@ -6,23 +6,58 @@
 
 import type { AtomTable } from './prefilter';
 import { AROMATIC, type AtomTest, type ExactQuery } from './smarts-query';
+import { queryElements, searchPlan, type SearchPlan } from './smarts-plan';
 
 /** Recursive `$()` results per table and query: -1 not yet known, 0 no, 1 yes. */
 const recursiveResults = new WeakMap<AtomTable, Map<ExactQuery, Int8Array>>();
+
+/** Atoms by element, per table, made on first use. */
+const atomsByElement = new WeakMap<AtomTable, Map<number, number[]>>();
+
+function atomsOf(table: AtomTable, element: number): readonly number[] {
+	let index = atomsByElement.get(table);
+	if (!index) {
+		index = new Map();
+		for (let atom = 0; atom < table.element.length; atom++) {
+			const list = index.get(table.element[atom]!);
+			if (list) list.push(atom);
+			else index.set(table.element[atom]!, [atom]);
+		}
+		atomsByElement.set(table, index);
+	}
+	return index.get(element) ?? [];
+}
+
+/** One search in progress: the plan it follows, where each query atom sits, which atoms are taken. */
+type Search = { table: AtomTable; query: ExactQuery; plan: SearchPlan; placed: Int32Array; used: Uint8Array; found: number[][]; firstOnly: boolean };
+
+function startSearch(table: AtomTable, query: ExactQuery, root: number, firstOnly: boolean): Search {
+	const placed = new Int32Array(query.atoms.length).fill(-1);
+	return { table, query, plan: searchPlan(query, root), placed, used: new Uint8Array(table.element.length), found: [], firstOnly };
+}
 
 /**
  * Every mapping (query atom → molecule atom), symmetric ones included, in ascending order of the
  * mapping arrays, e.g. `allMappings(atomTable(mol), exactQuery('[OX2H]C')!)` → `[[2, 1]]`.
  */
 export function allMappings(table: AtomTable, query: ExactQuery): number[][] {
-	const found: number[][] = [];
-	const placed = new Int32Array(query.atoms.length).fill(-1);
-	const used = new Uint8Array(table.element.length);
-	for (let atom = 0; atom < table.element.length; atom++) {
-		if (query.firstElement !== null && table.element[atom] !== query.firstElement) continue;
-		place(table, query, placed, used, 0, atom, found, false);
+	// Start on the query atom with the fewest candidates here; none at all ends the search.
+	const elements = queryElements(query);
+	let root = 0;
+	let fewest = Infinity;
+	for (let atom = 0; atom < elements.length; atom++) {
+		const set = elements[atom];
+		if (!set) continue;
+		let candidates = 0;
+		for (const element of set) candidates += atomsOf(table, element).length;
+		if (candidates === 0) return [];
+		if (candidates < fewest) [root, fewest] = [atom, candidates];
 	}
-	return found.sort(compareMappings);
+	const search = startSearch(table, query, root, false);
+	const set = elements[root];
+	if (set) for (const element of set) for (const atom of atomsOf(table, element)) place(search, 0, atom);
+	else for (let atom = 0; atom < table.element.length; atom++) place(search, 0, atom);
+	return search.found.length > 1 ? search.found.sort(compareMappings) : search.found;
 }
 
 /** Ascending by first atom, then second, …: one order for this walk and openchemlib alike. */
@@ -37,40 +72,37 @@ function matchesAt(table: AtomTable, query: ExactQuery, atom: number): boolean {
 	if (!results) recursiveResults.set(table, (results = new Map()));
 	let known = results.get(query);
 	if (!known) results.set(query, (known = new Int8Array(table.element.length).fill(-1)));
-	if (known[atom] === -1) {
-		const placed = new Int32Array(query.atoms.length).fill(-1);
-		const used = new Uint8Array(table.element.length);
-		known[atom] = place(table, query, placed, used, 0, atom, [], true) ? 1 : 0;
-	}
+	if (known[atom] === -1) known[atom] = place(startSearch(table, query, 0, true), 0, atom) ? 1 : 0;
 	return known[atom] === 1;
 }
 
 /**
- * Puts query atom `index` on molecule atom `atom` and, if it fits, goes on with the next one;
- * a complete mapping is collected (or, with `firstOnly`, ends the search with true).
+ * Puts the query atom of plan step `step` on molecule atom `atom` and, if it fits, goes on with
+ * the next step; a complete mapping is collected (or, with `firstOnly`, ends the search: true).
  */
-function place(table: AtomTable, query: ExactQuery, placed: Int32Array, used: Uint8Array, index: number, atom: number, found: number[][], firstOnly: boolean): boolean {
-	if (used[atom] || !fits(table, atom, query.atoms[index]!)) return false;
-	for (const { other, bond } of query.closures[index]!) if (!bonded(table, atom, placed[other]!, bond)) return false;
-	placed[index] = atom;
-	const next = index + 1;
-	if (next === query.atoms.length) {
-		if (firstOnly) return true;
-		found.push(Array.from(placed));
-		placed[index] = -1;
-		return false;
+function place(search: Search, step: number, atom: number): boolean {
+	const { table, query, plan, placed, used } = search;
+	const queryAtom = plan.order[step]!;
+	if (used[atom] || !fits(table, atom, query.atoms[queryAtom]!)) return false;
+	for (const { other, bond } of plan.back[step]!) if (!bonded(table, atom, placed[other]!, bond)) return false;
+	placed[queryAtom] = atom;
+	const next = step + 1;
+	if (next === plan.order.length) {
+		if (!search.firstOnly) search.found.push(Array.from(placed));
+		placed[queryAtom] = -1;
+		return search.firstOnly;
 	}
 	used[atom] = 1;
-	const from = placed[query.parent[next]!]!;
+	const from = placed[plan.from[next]!]!;
 	const neighbours = table.neighbours[from]!;
 	const bonds = table.bonds[from]!;
-	const mask = query.parentBond[next]!;
+	const mask = plan.bond[next]!;
 	let done = false;
 	for (let i = 0; i < neighbours.length && !done; i++) {
-		if (bondFits(bonds[i]!, mask)) done = place(table, query, placed, used, next, neighbours[i]!, found, firstOnly);
+		if (bondFits(bonds[i]!, mask)) done = place(search, next, neighbours[i]!);
 	}
 	used[atom] = 0;
-	placed[index] = -1;
+	placed[queryAtom] = -1;
 	return done;
 }
 
@@ -87,9 +119,11 @@ function bonded(table: AtomTable, a: number, b: number, mask: number): boolean {
 function fits(table: AtomTable, atom: number, test: AtomTest): boolean {
 	switch (test.kind) {
 		case 'all':
-			return test.tests.every((part) => fits(table, atom, part));
+			for (const part of test.tests) if (!fits(table, atom, part)) return false;
+			return true;
 		case 'any':
-			return test.tests.some((part) => fits(table, atom, part));
+			for (const part of test.tests) if (fits(table, atom, part)) return true;
+			return false;
 		case 'not':
 			return !fits(table, atom, test.test);
 		case 'element':

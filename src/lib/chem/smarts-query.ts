@@ -35,8 +35,6 @@ export type ExactQuery = {
 	closures: { other: number; bond: number }[][];
 	/** The atom map number of each atom (0: none); atom roles in patterns.ts. */
 	mapNumbers: number[];
-	/** The element every match of atom 0 has, when one is required (lets a search skip atoms). */
-	firstElement: number | null;
 };
 
 const ORGANIC: Record<string, number> = { B: 5, C: 6, N: 7, O: 8, F: 9, P: 15, S: 16, Cl: 17, Br: 35, I: 53 };
@@ -57,7 +55,7 @@ export function exactQuery(smarts: string): ExactQuery | null {
 }
 
 function readChain(smarts: string): ExactQuery {
-	const query: ExactQuery = { atoms: [], parent: [], parentBond: [], closures: [], mapNumbers: [], firstElement: null };
+	const query: ExactQuery = { atoms: [], parent: [], parentBond: [], closures: [], mapNumbers: [] };
 	const writtenAromatic: boolean[] = [];
 	const branches: number[] = [];
 	const rings = new Map<string, { atom: number; bond: number | null }>();
@@ -107,7 +105,6 @@ function readChain(smarts: string): ExactQuery {
 		previous = index;
 	}
 	if (query.atoms.length === 0 || rings.size > 0 || branches.length > 0) throw new Unsupported();
-	query.firstElement = requiredElement(query.atoms[0]!);
 	return query;
 }
 
@@ -217,15 +214,4 @@ function primitive(head: string, digits: string, first: boolean): AtomTest {
 	if (head in BRACKET_ELEMENTS) return { kind: 'element', element: BRACKET_ELEMENTS[head]! };
 	if (head in AROMATIC_SYMBOLS) return aromaticElement(AROMATIC_SYMBOLS[head]!);
 	throw new Unsupported();
-}
-
-/** The element an atom test cannot match without, when there is exactly one. */
-export function requiredElement(test: AtomTest): number | null {
-	if (test.kind === 'element') return test.element;
-	if (test.kind !== 'all') return null;
-	for (const part of test.tests) {
-		const element = requiredElement(part);
-		if (element !== null) return element;
-	}
-	return null;
 }
