@@ -9,7 +9,9 @@
 import { Molecule, SSSearcher } from 'openchemlib';
 import type { CompiledPattern } from './patterns';
 import { atomTable, mayMatch, type AtomTable } from './prefilter';
-import { allMappings, compareMappings } from './smarts-match';
+import { compareMappings, distinctMatches, firstPerAtomSet, matchedAtoms } from './smarts-match';
+
+export { matchedAtoms };
 
 /** Features a rule row may list under `needs` (group ids may be listed too). */
 export const MOLECULE_FEATURES = ['O-H', 'N-H', 'S-H', 'C=O', 'C=C', 'C=N', 'triple', 'ring-3'] as const;
@@ -79,7 +81,7 @@ export function hasFeatures(target: SearchTarget, needs: readonly (string | numb
  */
 export function findMatches(target: SearchTarget, pattern: CompiledPattern): number[][] {
 	if (!hasFeatures(target, pattern.requiredElements)) return [];
-	if (pattern.exact && target.table.plain) return firstPerAtomSet(allMappings(target.table, pattern.exact));
+	if (pattern.exact && target.table.plain) return distinctMatches(target.table, pattern.exact);
 	if (!target.exhaustive && pattern.loose && !mayMatch(target.table, pattern.loose)) return [];
 	target.searcher.setFragment(pattern.fragment);
 	// 'rigorous' lists every mapping, symmetric ones too: 2–5× cheaper than 'overlapping' on a
@@ -89,21 +91,4 @@ export function findMatches(target: SearchTarget, pattern: CompiledPattern): num
 	// An exact pattern's roles count in SMARTS order: drop the placeholders of `!$()` atoms.
 	const ordered = pattern.exact ? mappings.map((mapping) => mapping.filter((atom) => atom >= 0)) : mappings;
 	return firstPerAtomSet(ordered.sort(compareMappings));
-}
-
-/** The first mapping of each distinct atom set, in the order given, e.g. `firstPerAtomSet([[1, 2], [2, 1]])` → `[[1, 2]]`. */
-export function firstPerAtomSet(mappings: number[][]): number[][] {
-	if (mappings.length < 2) return mappings;
-	const seen = new Set<string>();
-	return mappings.filter((mapping) => {
-		const atomSet = matchedAtoms(mapping).join(',');
-		if (seen.has(atomSet)) return false;
-		seen.add(atomSet);
-		return true;
-	});
-}
-
-/** The molecule atoms of a match, without excluded placeholders, sorted, e.g. `matchedAtoms([5, -1, 2])` → `[2, 5]`. */
-export function matchedAtoms(match: number[]): number[] {
-	return match.filter((atom) => atom >= 0).sort((a, b) => a - b);
 }

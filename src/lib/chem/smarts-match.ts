@@ -6,7 +6,7 @@
 
 import type { AtomTable } from './prefilter';
 import { AROMATIC, type AtomTest, type ExactQuery } from './smarts-query';
-import { queryElements, searchPlan, type SearchPlan } from './smarts-plan';
+import { leafOrder, queryElements, searchPlan, type SearchPlan } from './smarts-plan';
 
 /** Recursive `$()` results per table and query: -1 not yet known, 0 no, 1 yes. */
 const recursiveResults = new WeakMap<AtomTable, Map<ExactQuery, Int8Array>>();
@@ -29,11 +29,29 @@ function atomsOf(table: AtomTable, element: number): readonly number[] {
 }
 
 /** One search in progress: the plan it follows, where each query atom sits, which atoms are taken. */
-type Search = { table: AtomTable; query: ExactQuery; plan: SearchPlan; placed: Int32Array; used: Uint8Array; found: number[][]; firstOnly: boolean };
+type Search = {
+	table: AtomTable;
+	query: ExactQuery;
+	plan: SearchPlan;
+	placed: Int32Array;
+	used: Uint8Array;
+	found: number[][];
+	firstOnly: boolean;
+	/** Interchangeable leaves kept in ascending order only (null: every permutation listed). */
+	leaves: { before: Int32Array; after: Int32Array } | null;
+};
 
-function startSearch(table: AtomTable, query: ExactQuery, root: number, firstOnly: boolean): Search {
-	const placed = new Int32Array(query.atoms.length).fill(-1);
-	return { table, query, plan: searchPlan(query, root), placed, used: new Uint8Array(table.element.length), found: [], firstOnly };
+/** Working arrays per query, reused: a search leaves them clean (every step undoes itself). */
+const scratch = new WeakMap<ExactQuery, { placed: Int32Array; used: Uint8Array }>();
+
+function startSearch(table: AtomTable, query: ExactQuery, root: number, firstOnly: boolean, distinct: boolean): Search {
+	let arrays = scratch.get(query);
+	if (!arrays || arrays.used.length < table.element.length) {
+		arrays = { placed: new Int32Array(query.atoms.length).fill(-1), used: new Uint8Array(Math.max(64, table.element.length)) };
+		scratch.set(query, arrays);
+	}
+	const leaves = distinct ? leafOrder(query) : null;
+	return { table, query, plan: searchPlan(query, root), ...arrays, found: [], firstOnly, leaves };
 }
 
 /**
@@ -41,6 +59,18 @@ function startSearch(table: AtomTable, query: ExactQuery, root: number, firstOnl
  * mapping arrays, e.g. `allMappings(atomTable(mol), exactQuery('[OX2H]C')!)` → `[[2, 1]]`.
  */
 export function allMappings(table: AtomTable, query: ExactQuery): number[][] {
+	return search(table, query, false);
+}
+
+/**
+ * The first mapping of each distinct atom set, ascending: what perception uses, e.g.
+ * `distinctMatches(table, tbsQuery)` → one mapping per TBS ether where allMappings lists 12.
+ */
+export function distinctMatches(table: AtomTable, query: ExactQuery): number[][] {
+	return firstPerAtomSet(search(table, query, true));
+}
+
+function search(table: AtomTable, query: ExactQuery, distinct: boolean): number[][] {
 	// Start on the query atom with the fewest candidates here; none at all ends the search.
 	const elements = queryElements(query);
 	let root = 0;
@@ -53,11 +83,28 @@ export function allMappings(table: AtomTable, query: ExactQuery): number[][] {
 		if (candidates === 0) return [];
 		if (candidates < fewest) [root, fewest] = [atom, candidates];
 	}
-	const search = startSearch(table, query, root, false);
+	const search = startSearch(table, query, root, false, distinct);
 	const set = elements[root];
 	if (set) for (const element of set) for (const atom of atomsOf(table, element)) place(search, 0, atom);
 	else for (let atom = 0; atom < table.element.length; atom++) place(search, 0, atom);
 	return search.found.length > 1 ? search.found.sort(compareMappings) : search.found;
+}
+
+/** The first mapping of each distinct atom set, in the order given, e.g. `firstPerAtomSet([[1, 2], [2, 1]])` → `[[1, 2]]`. */
+export function firstPerAtomSet(mappings: number[][]): number[][] {
+	if (mappings.length < 2) return mappings;
+	const seen = new Set<string>();
+	return mappings.filter((mapping) => {
+		const atomSet = matchedAtoms(mapping).join(',');
+		if (seen.has(atomSet)) return false;
+		seen.add(atomSet);
+		return true;
+	});
+}
+
+/** The molecule atoms of a match, without excluded placeholders, sorted, e.g. `matchedAtoms([5, -1, 2])` → `[2, 5]`. */
+export function matchedAtoms(match: number[]): number[] {
+	return match.filter((atom) => atom >= 0).sort((a, b) => a - b);
 }
 
 /** Ascending by first atom, then second, …: one order for this walk and openchemlib alike. */
@@ -72,7 +119,7 @@ function matchesAt(table: AtomTable, query: ExactQuery, atom: number): boolean {
 	if (!results) recursiveResults.set(table, (results = new Map()));
 	let known = results.get(query);
 	if (!known) results.set(query, (known = new Int8Array(table.element.length).fill(-1)));
-	if (known[atom] === -1) known[atom] = place(startSearch(table, query, 0, true), 0, atom) ? 1 : 0;
+	if (known[atom] === -1) known[atom] = place(startSearch(table, query, 0, true, true), 0, atom) ? 1 : 0;
 	return known[atom] === 1;
 }
 
@@ -84,6 +131,11 @@ function place(search: Search, step: number, atom: number): boolean {
 	const { table, query, plan, placed, used } = search;
 	const queryAtom = plan.order[step]!;
 	if (used[atom] || !fits(table, atom, query.atoms[queryAtom]!)) return false;
+	if (search.leaves) {
+		const before = search.leaves.before[queryAtom]!;
+		const after = search.leaves.after[queryAtom]!;
+		if ((before >= 0 && placed[before]! > atom) || (after >= 0 && placed[after]! >= 0 && placed[after]! < atom)) return false;
+	}
 	for (const { other, bond } of plan.back[step]!) if (!bonded(table, atom, placed[other]!, bond)) return false;
 	placed[queryAtom] = atom;
 	const next = step + 1;

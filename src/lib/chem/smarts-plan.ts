@@ -17,6 +17,7 @@ export type SearchPlan = {
 };
 
 const plans = new WeakMap<ExactQuery, (SearchPlan | undefined)[]>();
+const leafOrders = new WeakMap<ExactQuery, { before: Int32Array; after: Int32Array }>();
 const elementSets = new WeakMap<ExactQuery, (number[] | null)[]>();
 
 /** The plan that places `root` first (and every other atom after a bonded one), e.g. `searchPlan(query, 0)`. */
@@ -31,6 +32,38 @@ export function queryElements(query: ExactQuery): (number[] | null)[] {
 	let sets = elementSets.get(query);
 	if (!sets) elementSets.set(query, (sets = query.atoms.map(elementsOf)));
 	return sets;
+}
+
+/**
+ * Interchangeable leaves: atoms on the same parent by the same bond, with the same test and map
+ * number and nothing bonded to them further (the three methyls of a tert-butyl). Any mapping
+ * with them permuted covers the same atoms, and the first in ascending order has them ascending,
+ * so a search that keeps only that order loses nothing perception uses. `before[q]` is the
+ * sibling q must come after (-1: none), `after[q]` the one it must come before.
+ */
+export function leafOrder(query: ExactQuery): { before: Int32Array; after: Int32Array } {
+	let order = leafOrders.get(query);
+	if (order) return order;
+	const count = query.atoms.length;
+	order = { before: new Int32Array(count).fill(-1), after: new Int32Array(count).fill(-1) };
+	const inner = new Set<number>(query.parent.filter((parent) => parent >= 0));
+	query.closures.forEach((closures, atom) => {
+		if (closures.length > 0) inner.add(atom);
+		closures.forEach(({ other }) => inner.add(other));
+	});
+	const lastOfKind = new Map<string, number>();
+	for (let atom = 1; atom < count; atom++) {
+		if (inner.has(atom)) continue;
+		const kind = JSON.stringify([query.parent[atom], query.parentBond[atom], query.mapNumbers[atom], query.atoms[atom]]);
+		const previous = lastOfKind.get(kind);
+		if (previous !== undefined) {
+			order.before[atom] = previous;
+			order.after[previous] = atom;
+		}
+		lastOfKind.set(kind, atom);
+	}
+	leafOrders.set(query, order);
+	return order;
 }
 
 function elementsOf(test: AtomTest): number[] | null {
