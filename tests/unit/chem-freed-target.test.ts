@@ -29,7 +29,9 @@ function described(table: AtomTable) {
 		aromatic: table.aromatic[atom],
 		hydrogens: table.hydrogens[atom],
 		charge: table.charge[atom],
-		neighbours: table.neighbours[atom]!.map((other, i) => `${other}:${table.bonds[atom]![i]}`).sort()
+		neighbours: table.neighbours[atom]!.map(
+			(other, i) => `${other}:${table.bonds[atom]![i]}`
+		).sort()
 	}));
 }
 
@@ -44,15 +46,28 @@ describe('the imagined removal of a PG', () => {
 					for (const match of findMatches(parent, pattern)) {
 						const context = new Set(pattern.context.map((i) => match[i]!));
 						const masked = pattern.masked.map((i) => match[i]!);
-						const leaving = matchedAtoms(match).filter((atom) => !context.has(atom) && !masked.includes(atom));
-						const fromOpenchemlib = withoutProtectingGroup(parent.molecule, leaving, masked, pg.restore);
+						const leaving = matchedAtoms(match).filter(
+							(atom) => !context.has(atom) && !masked.includes(atom)
+						);
+						const fromOpenchemlib = withoutProtectingGroup(
+							parent.molecule,
+							leaving,
+							masked,
+							pg.restore
+						);
 						removals++;
 						// freedTarget derives only from a plain parent (no charges: see AtomTable.plain).
-						const fromTable = parent.table.plain ? derivedTable(parent.table, leaving, masked, pg.restore) : null;
+						const fromTable = parent.table.plain
+							? derivedTable(parent.table, leaving, masked, pg.restore)
+							: null;
 						if (!fromTable) continue;
 						derived++;
-						expect(fromTable.atomMap, `${pg.id} on ${smiles}`).toEqual(Array.from(fromOpenchemlib.atomMap));
-						expect(described(fromTable.table), `${pg.id} on ${smiles}`).toEqual(described(atomTable(fromOpenchemlib.molecule)));
+						expect(fromTable.atomMap, `${pg.id} on ${smiles}`).toEqual(
+							Array.from(fromOpenchemlib.atomMap)
+						);
+						expect(described(fromTable.table), `${pg.id} on ${smiles}`).toEqual(
+							described(atomTable(fromOpenchemlib.molecule))
+						);
 					}
 				}
 			}
@@ -78,6 +93,8 @@ describe('the imagined removal of a PG', () => {
 		expect(Array.from(freed.table.element)).toEqual([6, 6, 6, 6, 8]);
 		expect(freed.table.neighbours[1]).toEqual([0, 2, 4]);
 		const tbs = searchTarget(readStructure('CCO[Si](C)(C)C').molecule);
-		expect(Array.from(derivedTable(tbs.table, [3, 4, 5, 6], [2], 'hydrogen')!.table.hydrogens)).toEqual([3, 2, 1]);
+		expect(
+			Array.from(derivedTable(tbs.table, [3, 4, 5, 6], [2], 'hydrogen')!.table.hydrogens)
+		).toEqual([3, 2, 1]);
 	});
 });

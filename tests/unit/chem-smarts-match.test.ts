@@ -10,7 +10,12 @@ import { perceive } from '../../src/lib/chem/perceive';
 import { compilePattern, perceptionRules, type CompiledPattern } from '../../src/lib/chem/patterns';
 import { atomTable } from '../../src/lib/chem/prefilter';
 import { exactQuery } from '../../src/lib/chem/smarts-query';
-import { allMappings, compareMappings, distinctMatches, firstPerAtomSet } from '../../src/lib/chem/smarts-match';
+import {
+	allMappings,
+	compareMappings,
+	distinctMatches,
+	firstPerAtomSet
+} from '../../src/lib/chem/smarts-match';
 import { findMatches, searchTarget } from '../../src/lib/chem/match';
 import { withoutProtectingGroup } from '../../src/lib/chem/deprotect';
 import { referenceMolecules } from '../reference/molecules';
@@ -46,7 +51,10 @@ const structures = [
 	...CORNERS
 ];
 const rules = perceptionRules();
-const patterns = [...rules.groups.map((g) => g.compiled), ...rules.protectingGroups.flatMap((pg) => pg.compiled)];
+const patterns = [
+	...rules.groups.map((g) => g.compiled),
+	...rules.protectingGroups.flatMap((pg) => pg.compiled)
+];
 
 /** Every openchemlib mapping, its exclusion placeholders (-1) dropped: SMARTS order. */
 function openchemlibMappings(molecule: Molecule, pattern: CompiledPattern): number[][] {
@@ -54,7 +62,10 @@ function openchemlibMappings(molecule: Molecule, pattern: CompiledPattern): numb
 	searcher.setMolecule(molecule);
 	searcher.setFragment(pattern.fragment);
 	if (searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) return [];
-	return searcher.getMatchList().map((mapping) => mapping.filter((atom) => atom >= 0)).sort(compareMappings);
+	return searcher
+		.getMatchList()
+		.map((mapping) => mapping.filter((atom) => atom >= 0))
+		.sort(compareMappings);
 }
 
 /** The molecules perception imagines: each found PG removed, as perceive.ts removes it. */
@@ -81,9 +92,13 @@ describe('the TypeScript SMARTS matcher', () => {
 				if (!table.plain) continue; // searched by openchemlib itself (next test)
 				for (const pattern of patterns) {
 					const expected = openchemlibMappings(molecule, pattern);
-					expect(allMappings(table, pattern.exact!), `${pattern.smarts} on ${smiles}`).toEqual(expected);
+					expect(allMappings(table, pattern.exact!), `${pattern.smarts} on ${smiles}`).toEqual(
+						expected
+					);
 					// What perception uses: symmetric leaves in one order only, the same first mapping per atom set.
-					expect(distinctMatches(table, pattern.exact!), `${pattern.smarts} on ${smiles}`).toEqual(firstPerAtomSet(expected));
+					expect(distinctMatches(table, pattern.exact!), `${pattern.smarts} on ${smiles}`).toEqual(
+						firstPerAtomSet(expected)
+					);
 					compared++;
 					if (expected.length > 0) matched++;
 				}
@@ -102,7 +117,8 @@ describe('the TypeScript SMARTS matcher', () => {
 		const tertiary = rules.groupsById.get('amine-tertiary')!.compiled;
 		expect(findMatches(ammonium, tertiary).length).toBeGreaterThan(0);
 		expect(allMappings(ammonium.table, tertiary.exact!)).toEqual([]);
-		for (const smiles of ['[2H]OC(C)C', 'C[CH2]', 'O=[N+]([O-])c1ccccc1']) expect(atomTable(readStructure(smiles).molecule).plain, smiles).toBe(false);
+		for (const smiles of ['[2H]OC(C)C', 'C[CH2]', 'O=[N+]([O-])c1ccccc1'])
+			expect(atomTable(readStructure(smiles).molecule).plain, smiles).toBe(false);
 	});
 
 	it('reads SMARTS as openchemlib does where Daylight differs, and agrees on the corners', () => {
@@ -121,12 +137,15 @@ describe('the TypeScript SMARTS matcher', () => {
 			const molecule = readStructure(smiles).molecule;
 			const pattern = compilePattern(smarts, 'test', []);
 			expect(pattern.exact, smarts).not.toBeNull();
-			expect(allMappings(atomTable(molecule), pattern.exact!), `${smarts} on ${smiles}`).toEqual(openchemlibMappings(molecule, pattern));
+			expect(allMappings(atomTable(molecule), pattern.exact!), `${smarts} on ${smiles}`).toEqual(
+				openchemlibMappings(molecule, pattern)
+			);
 		}
 	});
 
 	it('leaves syntax it does not read to openchemlib, which still finds the matches', () => {
-		for (const smarts of ['[C;R]O', 'C-,:C', '[C@H](O)C', '[13C]', 'C.C', '[D2]O', '[H]']) expect(exactQuery(smarts), smarts).toBeNull();
+		for (const smarts of ['[C;R]O', 'C-,:C', '[C@H](O)C', '[13C]', 'C.C', '[D2]O', '[H]'])
+			expect(exactQuery(smarts), smarts).toBeNull();
 		const ringCarbinol = compilePattern('[C;R][OH]', 'test', []);
 		expect(ringCarbinol.exact).toBeNull();
 		const target = searchTarget(readStructure('OC1CCCCC1CO').molecule);
@@ -145,6 +164,8 @@ describe('the TypeScript SMARTS matcher', () => {
 			[10, 9]
 		]);
 		const viaOpenchemlib = { ...tbs, exact: null, key: tbs.key };
-		expect(findMatches(searchTarget(target.molecule), viaOpenchemlib).map((m) => m.filter((a) => a >= 0))).toEqual(matches);
+		expect(
+			findMatches(searchTarget(target.molecule), viaOpenchemlib).map((m) => m.filter((a) => a >= 0))
+		).toEqual(matches);
 	});
 });

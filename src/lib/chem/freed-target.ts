@@ -19,17 +19,36 @@ const USUAL_VALENCE: Record<number, number> = { 6: 4, 7: 3, 8: 2, 16: 2 };
  * get hydrogens back, or for `carbonyl` the first masked atom its =O. `atomMap[old]` is the new
  * index (-1 removed), e.g. `freedTarget(target, [5, 6], [4], 'hydrogen')`.
  */
-export function freedTarget(parent: SearchTarget, leaving: readonly number[], masked: readonly number[], restore: Restore): { target: SearchTarget; atomMap: number[] } {
-	const derived = parent.table.plain && !parent.exhaustive ? derivedTable(parent.table, leaving, masked, restore) : null;
+export function freedTarget(
+	parent: SearchTarget,
+	leaving: readonly number[],
+	masked: readonly number[],
+	restore: Restore
+): { target: SearchTarget; atomMap: number[] } {
+	const derived =
+		parent.table.plain && !parent.exhaustive
+			? derivedTable(parent.table, leaving, masked, restore)
+			: null;
 	if (!derived) {
 		const freed = withoutProtectingGroup(parent.molecule, [...leaving], [...masked], restore);
-		return { target: searchTarget(freed.molecule, { exhaustive: parent.exhaustive }), atomMap: freed.atomMap };
+		return {
+			target: searchTarget(freed.molecule, { exhaustive: parent.exhaustive }),
+			atomMap: freed.atomMap
+		};
 	}
 	const { table, atomMap } = derived;
 	let molecule: Molecule | null = null;
 	let search: SearchTarget | null = null;
 	// openchemlib's copy is made only if a pattern it alone can read is searched.
-	const fallback = () => (search ??= searchTarget((molecule ??= withoutProtectingGroup(parent.molecule, [...leaving], [...masked], restore).molecule)));
+	const fallback = () =>
+		(search ??= searchTarget(
+			(molecule ??= withoutProtectingGroup(
+				parent.molecule,
+				[...leaving],
+				[...masked],
+				restore
+			).molecule)
+		));
 	const target: SearchTarget = {
 		get molecule() {
 			return fallback().molecule;
@@ -49,7 +68,12 @@ function bondOrder(bits: number): number {
 }
 
 /** The parent's table without `leaving`, or null where openchemlib's answer could differ. */
-export function derivedTable(parent: AtomTable, leaving: readonly number[], masked: readonly number[], restore: Restore): { table: AtomTable; atomMap: number[] } | null {
+export function derivedTable(
+	parent: AtomTable,
+	leaving: readonly number[],
+	masked: readonly number[],
+	restore: Restore
+): { table: AtomTable; atomMap: number[] } | null {
 	const count = parent.element.length;
 	const gone = new Uint8Array(count);
 	for (const atom of leaving) gone[atom] = 1;
@@ -58,7 +82,15 @@ export function derivedTable(parent: AtomTable, leaving: readonly number[], mask
 	for (let atom = 0; atom < count; atom++) atomMap[atom] = gone[atom] ? -1 : kept++;
 	const carbonyl = restore === 'carbonyl' ? masked[0]! : -1;
 	const size = kept + (carbonyl >= 0 ? 1 : 0);
-	const table: AtomTable = { element: new Int16Array(size), aromatic: new Uint8Array(size), hydrogens: new Int16Array(size), charge: new Int8Array(size), neighbours: [], bonds: [], plain: true };
+	const table: AtomTable = {
+		element: new Int16Array(size),
+		aromatic: new Uint8Array(size),
+		hydrogens: new Int16Array(size),
+		charge: new Int8Array(size),
+		neighbours: [],
+		bonds: [],
+		plain: true
+	};
 	for (let atom = 0; atom < count; atom++) {
 		if (gone[atom]) continue;
 		const to = atomMap[atom]!;
@@ -72,7 +104,8 @@ export function derivedTable(parent: AtomTable, leaving: readonly number[], mask
 			if (!gone[other]) {
 				neighbours.push(atomMap[other]!);
 				bonds.push(bits);
-			} else if (bits & AROMATIC) lost = -Infinity; // a ring cut open: aromaticity may change
+			} else if (bits & AROMATIC)
+				lost = -Infinity; // a ring cut open: aromaticity may change
 			else lost += bondOrder(bits);
 		});
 		if (lost < 0) return null;
@@ -104,7 +137,10 @@ export function derivedTable(parent: AtomTable, leaving: readonly number[], mask
  * The features match.ts pre-checks, read from a table. A 3-ring cannot appear by removing atoms,
  * so the parent's 'ring-3' is kept (a feature too many only costs a search, never a match).
  */
-function tableFeatures(table: AtomTable, parentFeatures: ReadonlySet<string | number>): Set<string | number> {
+function tableFeatures(
+	table: AtomTable,
+	parentFeatures: ReadonlySet<string | number>
+): Set<string | number> {
 	const features = new Set<string | number>();
 	if (parentFeatures.has('ring-3')) features.add('ring-3');
 	for (let atom = 0; atom < table.element.length; atom++) {

@@ -1,10 +1,12 @@
-// Running compiled patterns against a molecule with openchemlib's substructure search.
+// Running compiled patterns against a molecule.
 //
-// A search costs tens of microseconds even when it fails, so before searching we check cheap
-// molecule features: the elements a pattern names, and the `needs` a rule row declares (a free
-// O–H, a C=O, a found group such as "silyl-ether", …), then the loose TypeScript walk of
-// prefilter.ts. tests/unit/chem-perceive.test.ts runs every pattern with and without these checks
-// over the reference set to prove they never hide a match.
+// Two ways to search: the exact TypeScript matcher (smarts-match.ts) over the molecule's atom
+// table, used for every pattern smarts-query.ts can read on a plain molecule (no charges), and
+// openchemlib's substructure search for the rest. Before either, cheap molecule features are
+// checked: the elements a pattern names and the `needs` a rule row declares (a free O–H, a C=O, a
+// found group such as "silyl-ether", …); before openchemlib also the loose walk of prefilter.ts.
+// tests/unit/chem-perceive.test.ts runs every pattern with and without these checks over the
+// reference set to prove they never hide a match.
 
 import { Molecule, SSSearcher } from 'openchemlib';
 import type { CompiledPattern } from './patterns';

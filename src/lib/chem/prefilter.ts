@@ -1,12 +1,14 @@
-// A loose substructure test in plain TypeScript, run before openchemlib's search.
+// The atom table every TypeScript search reads, and a loose substructure test run before
+// openchemlib's search (which is now used only for patterns or molecules smarts-match.ts leaves
+// to it: see match.ts).
 //
-// One openchemlib search costs ~70–100 µs even when it finds nothing (it rebuilds the fragment's
-// features on every setFragment), and most pattern × molecule pairs find nothing. This test reads
-// the pattern's SMARTS itself and walks the molecule's atom table in a few µs. It is deliberately
-// looser than openchemlib: anything it does not understand (recursive `$()`, negations, charges,
-// ring primitives) counts as "may match", bonds accept aromatic as well, and `X<n>` only caps the
-// heavy-atom neighbours. So "no" is final and "yes" still goes to openchemlib for the real match
-// list. tests/unit/chem-prefilter.test.ts proves "no" never hides a match over the reference set.
+// One openchemlib search costs tens of µs even when it finds nothing, and most pattern × molecule
+// pairs find nothing. This test reads the pattern's SMARTS itself and walks the atom table in a
+// few µs. It is deliberately looser than openchemlib: anything it does not understand (recursive
+// `$()`, negations, charges, ring primitives) counts as "may match", bonds accept aromatic as
+// well, and `X<n>` only caps the heavy-atom neighbours. So "no" is final and "yes" still goes to
+// openchemlib for the real match list. tests/unit/chem-prefilter.test.ts proves "no" never hides
+// a match over the reference set.
 
 import { Molecule } from 'openchemlib';
 

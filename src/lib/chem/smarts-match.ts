@@ -44,10 +44,19 @@ type Search = {
 /** Working arrays per query, reused: a search leaves them clean (every step undoes itself). */
 const scratch = new WeakMap<ExactQuery, { placed: Int32Array; used: Uint8Array }>();
 
-function startSearch(table: AtomTable, query: ExactQuery, root: number, firstOnly: boolean, distinct: boolean): Search {
+function startSearch(
+	table: AtomTable,
+	query: ExactQuery,
+	root: number,
+	firstOnly: boolean,
+	distinct: boolean
+): Search {
 	let arrays = scratch.get(query);
 	if (!arrays || arrays.used.length < table.element.length) {
-		arrays = { placed: new Int32Array(query.atoms.length).fill(-1), used: new Uint8Array(Math.max(64, table.element.length)) };
+		arrays = {
+			placed: new Int32Array(query.atoms.length).fill(-1),
+			used: new Uint8Array(Math.max(64, table.element.length))
+		};
 		scratch.set(query, arrays);
 	}
 	const leaves = distinct ? leafOrder(query) : null;
@@ -85,7 +94,8 @@ function search(table: AtomTable, query: ExactQuery, distinct: boolean): number[
 	}
 	const search = startSearch(table, query, root, false, distinct);
 	const set = elements[root];
-	if (set) for (const element of set) for (const atom of atomsOf(table, element)) place(search, 0, atom);
+	if (set)
+		for (const element of set) for (const atom of atomsOf(table, element)) place(search, 0, atom);
 	else for (let atom = 0; atom < table.element.length; atom++) place(search, 0, atom);
 	return search.found.length > 1 ? search.found.sort(compareMappings) : search.found;
 }
@@ -119,7 +129,8 @@ function matchesAt(table: AtomTable, query: ExactQuery, atom: number): boolean {
 	if (!results) recursiveResults.set(table, (results = new Map()));
 	let known = results.get(query);
 	if (!known) results.set(query, (known = new Int8Array(table.element.length).fill(-1)));
-	if (known[atom] === -1) known[atom] = place(startSearch(table, query, 0, true, true), 0, atom) ? 1 : 0;
+	if (known[atom] === -1)
+		known[atom] = place(startSearch(table, query, 0, true, true), 0, atom) ? 1 : 0;
 	return known[atom] === 1;
 }
 
@@ -134,9 +145,14 @@ function place(search: Search, step: number, atom: number): boolean {
 	if (search.leaves) {
 		const before = search.leaves.before[queryAtom]!;
 		const after = search.leaves.after[queryAtom]!;
-		if ((before >= 0 && placed[before]! > atom) || (after >= 0 && placed[after]! >= 0 && placed[after]! < atom)) return false;
+		if (
+			(before >= 0 && placed[before]! > atom) ||
+			(after >= 0 && placed[after]! >= 0 && placed[after]! < atom)
+		)
+			return false;
 	}
-	for (const { other, bond } of plan.back[step]!) if (!bonded(table, atom, placed[other]!, bond)) return false;
+	for (const { other, bond } of plan.back[step]!)
+		if (!bonded(table, atom, placed[other]!, bond)) return false;
 	placed[queryAtom] = atom;
 	const next = step + 1;
 	if (next === plan.order.length) {

@@ -54,7 +54,12 @@ export function leafOrder(query: ExactQuery): { before: Int32Array; after: Int32
 	const lastOfKind = new Map<string, number>();
 	for (let atom = 1; atom < count; atom++) {
 		if (inner.has(atom)) continue;
-		const kind = JSON.stringify([query.parent[atom], query.parentBond[atom], query.mapNumbers[atom], query.atoms[atom]]);
+		const kind = JSON.stringify([
+			query.parent[atom],
+			query.parentBond[atom],
+			query.mapNumbers[atom],
+			query.atoms[atom]
+		]);
 		const previous = lastOfKind.get(kind);
 		if (previous !== undefined) {
 			order.before[atom] = previous;
@@ -89,7 +94,9 @@ function buildPlan(query: ExactQuery, root: number): SearchPlan {
 		edges[b]!.push({ other: a, bond });
 	};
 	for (let atom = 1; atom < count; atom++) link(atom, query.parent[atom]!, query.parentBond[atom]!);
-	query.closures.forEach((closures, atom) => closures.forEach(({ other, bond }) => link(atom, other, bond)));
+	query.closures.forEach((closures, atom) =>
+		closures.forEach(({ other, bond }) => link(atom, other, bond))
+	);
 	const plan: SearchPlan = { order: [], from: [], bond: [], back: [] };
 	const placedAt = new Array<number>(count).fill(-1);
 	// Depth first from the root, so each atom is placed right after the atom that leads to it.

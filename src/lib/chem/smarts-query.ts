@@ -12,7 +12,15 @@ export const DOUBLE = 2;
 export const TRIPLE = 4;
 export const AROMATIC = 8;
 const ANY_BOND = SINGLE | DOUBLE | TRIPLE | AROMATIC;
-const BOND_SYMBOLS: Record<string, number> = { '-': SINGLE, '=': DOUBLE, '#': TRIPLE, ':': AROMATIC, '~': ANY_BOND, '/': SINGLE, '\\': SINGLE };
+const BOND_SYMBOLS: Record<string, number> = {
+	'-': SINGLE,
+	'=': DOUBLE,
+	'#': TRIPLE,
+	':': AROMATIC,
+	'~': ANY_BOND,
+	'/': SINGLE,
+	'\\': SINGLE
+};
 
 /** One test on a molecule atom, or a combination of them. */
 export type AtomTest =
@@ -37,10 +45,33 @@ export type ExactQuery = {
 	mapNumbers: number[];
 };
 
-const ORGANIC: Record<string, number> = { B: 5, C: 6, N: 7, O: 8, F: 9, P: 15, S: 16, Cl: 17, Br: 35, I: 53 };
+const ORGANIC: Record<string, number> = {
+	B: 5,
+	C: 6,
+	N: 7,
+	O: 8,
+	F: 9,
+	P: 15,
+	S: 16,
+	Cl: 17,
+	Br: 35,
+	I: 53
+};
 const AROMATIC_SYMBOLS: Record<string, number> = { b: 5, c: 6, n: 7, o: 8, p: 15, s: 16 };
 /** Bracket symbols read here; others (and ambiguous ones such as Sc, Cs) leave the pattern to openchemlib. */
-const BRACKET_ELEMENTS: Record<string, number> = { ...ORGANIC, Si: 14, Se: 34, Sn: 50, Li: 3, Na: 11, K: 19, Mg: 12, Zn: 30, Cu: 29, Pd: 46 };
+const BRACKET_ELEMENTS: Record<string, number> = {
+	...ORGANIC,
+	Si: 14,
+	Se: 34,
+	Sn: 50,
+	Li: 3,
+	Na: 11,
+	K: 19,
+	Mg: 12,
+	Zn: 30,
+	Cu: 29,
+	Pd: 46
+};
 
 class Unsupported extends Error {}
 
@@ -61,7 +92,8 @@ function readChain(smarts: string): ExactQuery {
 	const rings = new Map<string, { atom: number; bond: number | null }>();
 	let previous = -1;
 	let bond: number | null = null;
-	const unwritten = (a: number, b: number) => (writtenAromatic[a] && writtenAromatic[b] ? AROMATIC : SINGLE);
+	const unwritten = (a: number, b: number) =>
+		writtenAromatic[a] && writtenAromatic[b] ? AROMATIC : SINGLE;
 	for (let i = 0; i < smarts.length; i++) {
 		const ch = smarts[i]!;
 		let atom: { test: AtomTest; aromatic: boolean; map: number } | null = null;
@@ -110,12 +142,24 @@ function readChain(smarts: string): ExactQuery {
 
 function symbolAtom(symbol: string): { test: AtomTest; aromatic: boolean; map: number } {
 	if (symbol === '*') return { test: { kind: 'all', tests: [] }, aromatic: false, map: 0 };
-	if (symbol === 'a' || symbol === 'A') return { test: { kind: 'aromatic', aromatic: symbol === 'a' }, aromatic: symbol === 'a', map: 0 };
-	if (symbol in AROMATIC_SYMBOLS) return { test: aromaticElement(AROMATIC_SYMBOLS[symbol]!), aromatic: true, map: 0 };
+	if (symbol === 'a' || symbol === 'A')
+		return {
+			test: { kind: 'aromatic', aromatic: symbol === 'a' },
+			aromatic: symbol === 'a',
+			map: 0
+		};
+	if (symbol in AROMATIC_SYMBOLS)
+		return { test: aromaticElement(AROMATIC_SYMBOLS[symbol]!), aromatic: true, map: 0 };
 	return { test: { kind: 'element', element: ORGANIC[symbol]! }, aromatic: false, map: 0 };
 }
 
-const aromaticElement = (element: number): AtomTest => ({ kind: 'all', tests: [{ kind: 'element', element }, { kind: 'aromatic', aromatic: true }] });
+const aromaticElement = (element: number): AtomTest => ({
+	kind: 'all',
+	tests: [
+		{ kind: 'element', element },
+		{ kind: 'aromatic', aromatic: true }
+	]
+});
 
 function closingBracket(smarts: string, open: number): number {
 	let depth = 0;
@@ -130,7 +174,8 @@ function closingBracket(smarts: string, open: number): number {
 function bracketAtom(inside: string): { test: AtomTest; aromatic: boolean; map: number } {
 	const mapped = /:(\d+)$/.exec(inside);
 	const body = mapped ? inside.slice(0, mapped.index) : inside;
-	if (body === '' || /^\d/.test(body) || /^H[+-]?\d*$/.test(body) || /[@]/.test(body)) throw new Unsupported();
+	if (body === '' || /^\d/.test(body) || /^H[+-]?\d*$/.test(body) || /[@]/.test(body))
+		throw new Unsupported();
 	return { test: lowAnd(body), aromatic: /^[a-z]/.test(body), map: mapped ? Number(mapped[1]) : 0 };
 }
 
@@ -152,7 +197,8 @@ function splitTop(text: string, separator: string): string[] {
 	return parts;
 }
 
-const combine = (kind: 'all' | 'any', tests: AtomTest[]): AtomTest => (tests.length === 1 ? tests[0]! : { kind, tests });
+const combine = (kind: 'all' | 'any', tests: AtomTest[]): AtomTest =>
+	tests.length === 1 ? tests[0]! : { kind, tests };
 const lowAnd = (text: string) => combine('all', splitTop(text, ';').map(or));
 const or = (text: string) => combine('any', splitTop(text, ',').map(highAnd));
 const highAnd = (text: string) => combine('all', splitTop(text, '&').flatMap(primitives));
@@ -160,7 +206,7 @@ const highAnd = (text: string) => combine('all', splitTop(text, '&').flatMap(pri
 /** A run of primitives, each maybe negated: `!$(NC=O)`, `NX3`, `CH2`, `+`, `#6`. */
 function primitives(run: string): AtomTest[] {
 	const tests: AtomTest[] = [];
-	for (let i = 0; i < run.length; ) {
+	for (let i = 0; i < run.length;) {
 		const negated = run[i] === '!';
 		if (negated) i++;
 		let test: AtomTest;
@@ -199,7 +245,8 @@ function primitive(head: string, digits: string, first: boolean): AtomTest {
 	}
 	if (head.startsWith('+') || head.startsWith('-')) {
 		const signs = head.replace(/\d+$/, '');
-		if (!/^(\++|-+)$/.test(signs) || (signs.length > 1 && signs.length !== head.length)) throw new Unsupported();
+		if (!/^(\++|-+)$/.test(signs) || (signs.length > 1 && signs.length !== head.length))
+			throw new Unsupported();
 		const magnitude = signs.length === head.length ? signs.length : Number(head.slice(1));
 		return { kind: 'charge', charge: signs[0] === '+' ? magnitude : -magnitude };
 	}
