@@ -75,6 +75,8 @@ const BRACKET_ELEMENTS: Record<string, number> = {
 
 class Unsupported extends Error {}
 
+const recursiveQueries = new Map<string, ExactQuery>();
+
 /** The exact query of a SMARTS, or null when it uses syntax read only by openchemlib, e.g. `exactQuery('[OX2H;A:1]c')`. */
 export function exactQuery(smarts: string): ExactQuery | null {
 	try {
@@ -213,7 +215,11 @@ function primitives(run: string): AtomTest[] {
 		const rest = run.slice(i);
 		if (rest.startsWith('$(')) {
 			const end = closingParen(rest, 1);
-			const inner = readChain(rest.slice(2, end));
+			const text = rest.slice(2, end);
+			// One query object per recursive text, so its per-molecule results are shared by every
+			// pattern that writes it (`!$([#6]=[O,S,N])` is in most PG patterns).
+			let inner = recursiveQueries.get(text);
+			if (!inner) recursiveQueries.set(text, (inner = readChain(text)));
 			test = { kind: 'recursive', query: inner };
 			i += end + 1;
 		} else {
