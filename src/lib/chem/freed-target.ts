@@ -89,6 +89,7 @@ export function derivedTable(
 		charge: new Int8Array(size),
 		neighbours: [],
 		bonds: [],
+		odd: new Uint8Array(size),
 		plain: true
 	};
 	for (let atom = 0; atom < count; atom++) {

@@ -83,7 +83,8 @@ export function hasFeatures(target: SearchTarget, needs: readonly (string | numb
  */
 export function findMatches(target: SearchTarget, pattern: CompiledPattern): number[][] {
 	if (!hasFeatures(target, pattern.requiredElements)) return [];
-	if (pattern.exact && target.table.plain) return distinctMatches(target.table, pattern.exact);
+	const exact = pattern.exact && distinctMatches(target.table, pattern.exact);
+	if (exact) return exact;
 	if (!target.exhaustive && pattern.loose && !mayMatch(target.table, pattern.loose)) return [];
 	target.searcher.setFragment(pattern.fragment);
 	// 'rigorous' lists every mapping, symmetric ones too: 2–5× cheaper than 'overlapping' on a

@@ -39,10 +39,12 @@ export type AtomTable = {
 	/** Bond bits to each neighbour, same order as `neighbours`. */
 	bonds: number[][];
 	/**
-	 * No charged atom, radical or hydrogen atom (deuterium) among the heavy atoms. openchemlib
-	 * reads X and H on those in ways of its own (an N+ with four carbons is X3 to it), so only a
-	 * plain molecule is searched by smarts-match.ts; the others go to openchemlib.
+	 * Atoms whose X and H openchemlib reads in ways of its own (an N+ with four carbons is X3 to
+	 * it): charged atoms, radicals, hydrogen atoms kept as atoms (deuterium) and the atoms bearing
+	 * them. smarts-match.ts hands a search to openchemlib when it would test X or H on one.
 	 */
+	odd: Uint8Array;
+	/** No odd atom at all. */
 	plain: boolean;
 };
 
@@ -64,13 +66,13 @@ export function atomTable(molecule: Molecule): AtomTable {
 	// Rings and aromaticity first (a no-op when done): a fresh molecule has no hydrogen counts yet.
 	molecule.ensureHelperArrays(Molecule.cHelperRings);
 	const count = molecule.getAtoms();
-	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), charge: new Int8Array(count), neighbours: [], bonds: [], plain: true };
+	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), charge: new Int8Array(count), neighbours: [], bonds: [], odd: new Uint8Array(count), plain: true };
 	for (let atom = 0; atom < count; atom++) {
 		table.element[atom] = molecule.getAtomicNo(atom);
 		table.aromatic[atom] = molecule.isAromaticAtom(atom) ? 1 : 0;
 		table.hydrogens[atom] = molecule.getAllHydrogens(atom);
 		table.charge[atom] = molecule.getAtomCharge(atom);
-		if (table.charge[atom] !== 0 || table.element[atom] === 1 || molecule.getAtomRadical(atom) !== 0) table.plain = false;
+		if (table.charge[atom] !== 0 || molecule.getAtomRadical(atom) !== 0) table.odd[atom] = 1;
 		const neighbours: number[] = [];
 		const bonds: number[] = [];
 		for (let i = 0; i < molecule.getConnAtoms(atom); i++) {
@@ -82,6 +84,12 @@ export function atomTable(molecule: Molecule): AtomTable {
 		table.neighbours.push(neighbours);
 		table.bonds.push(bonds);
 	}
+	for (let atom = 0; atom < count; atom++) {
+		if (table.element[atom] !== 1) continue;
+		table.odd[atom] = 1;
+		for (const other of table.neighbours[atom]!) table.odd[other] = 1;
+	}
+	table.plain = !table.odd.includes(1);
 	return table;
 }
 

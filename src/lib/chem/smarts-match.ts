@@ -43,6 +43,8 @@ type Search = {
 
 /** Working arrays per query, reused: a search leaves them clean (every step undoes itself). */
 const scratch = new WeakMap<ExactQuery, { placed: Int32Array; used: Uint8Array }>();
+/** Those a search on a table with odd atoms used: cleaned if it stops half way (OddAtom). */
+const touched = new Set<{ placed: Int32Array; used: Uint8Array }>();
 
 function startSearch(
 	table: AtomTable,
@@ -59,6 +61,7 @@ function startSearch(
 		};
 		scratch.set(query, arrays);
 	}
+	if (!table.plain) touched.add(arrays);
 	const leaves = distinct ? leafOrder(query) : null;
 	return { table, query, plan: searchPlan(query, root), ...arrays, found: [], firstOnly, leaves };
 }
@@ -74,10 +77,27 @@ export function allMappings(table: AtomTable, query: ExactQuery): number[][] {
 /**
  * The first mapping of each distinct atom set, ascending: what perception uses, e.g.
  * `distinctMatches(table, tbsQuery)` → one mapping per TBS ether where allMappings lists 12.
+ * Null when the search would test X or H on an odd atom (AtomTable.odd): openchemlib decides.
  */
-export function distinctMatches(table: AtomTable, query: ExactQuery): number[][] {
-	return firstPerAtomSet(search(table, query, true));
+export function distinctMatches(table: AtomTable, query: ExactQuery): number[][] | null {
+	try {
+		const found = firstPerAtomSet(search(table, query, true));
+		touched.clear();
+		return found;
+	} catch (caught) {
+		if (!(caught instanceof OddAtom)) throw caught;
+		// The search stopped half way: its working arrays must be clean for the next one.
+		for (const arrays of touched) {
+			arrays.placed.fill(-1);
+			arrays.used.fill(0);
+		}
+		touched.clear();
+		return null;
+	}
 }
+
+/** Thrown where X or H would be tested on an odd atom. */
+class OddAtom extends Error {}
 
 function search(table: AtomTable, query: ExactQuery, distinct: boolean): number[][] {
 	// Start on the query atom with the fewest candidates here; none at all ends the search.
@@ -199,8 +219,10 @@ function fits(table: AtomTable, atom: number, test: AtomTest): boolean {
 		case 'aromatic':
 			return (table.aromatic[atom] === 1) === test.aromatic;
 		case 'hydrogens':
+			if (table.odd[atom]) throw new OddAtom();
 			return table.hydrogens[atom] === test.count;
 		case 'connections':
+			if (table.odd[atom]) throw new OddAtom();
 			return table.neighbours[atom]!.length + table.hydrogens[atom]! === test.count;
 		case 'charge':
 			return table.charge[atom] === test.charge;
