@@ -1,8 +1,9 @@
 // The molecule perception imagines with a protecting group removed (deprotect.ts), ready for
 // searching. Copying the molecule in openchemlib, deleting atoms and perceiving rings and
 // aromaticity again cost ~60 µs a PG; deriving the atom table from the parent's costs ~3 µs.
-// The derivation is used only where it must agree with openchemlib's: a plain parent (no
-// charges), no aromatic bond cut, and every atom that gets hydrogens back at its usual valence.
+// The derivation is used only where it must agree with openchemlib's: no odd atom (a charge, a
+// radical, deuterium: AtomTable.odd) removed or touched by the removal, no aromatic bond cut, and
+// every atom that gets hydrogens back at its usual valence.
 // tests/unit/chem-freed-target.test.ts compares both over every PG match of the reference set.
 
 import { searchTarget, type SearchTarget } from './match';
@@ -25,10 +26,7 @@ export function freedTarget(
 	masked: readonly number[],
 	restore: Restore
 ): { target: SearchTarget; atomMap: number[] } {
-	const derived =
-		parent.table.plain && !parent.exhaustive
-			? derivedTable(parent.table, leaving, masked, restore)
-			: null;
+	const derived = !parent.exhaustive ? derivedTable(parent.table, leaving, masked, restore) : null;
 	if (!derived) {
 		const freed = withoutProtectingGroup(parent.molecule, [...leaving], [...masked], restore);
 		return {
@@ -76,7 +74,10 @@ export function derivedTable(
 ): { table: AtomTable; atomMap: number[] } | null {
 	const count = parent.element.length;
 	const gone = new Uint8Array(count);
-	for (const atom of leaving) gone[atom] = 1;
+	for (const atom of leaving) {
+		if (parent.odd[atom]) return null;
+		gone[atom] = 1;
+	}
 	const atomMap = new Array<number>(count);
 	let kept = 0;
 	for (let atom = 0; atom < count; atom++) atomMap[atom] = gone[atom] ? -1 : kept++;
@@ -109,7 +110,7 @@ export function derivedTable(
 				lost = -Infinity; // a ring cut open: aromaticity may change
 			else lost += bondOrder(bits);
 		});
-		if (lost < 0) return null;
+		if (lost < 0 || (lost > 0 && parent.odd[atom])) return null;
 		let hydrogens = parent.hydrogens[atom]!;
 		if (lost > 0) {
 			if (USUAL_VALENCE[parent.element[atom]!] !== valence) return null;
@@ -122,9 +123,12 @@ export function derivedTable(
 		table.element[to] = parent.element[atom]!;
 		table.aromatic[to] = parent.aromatic[atom]!;
 		table.hydrogens[to] = hydrogens;
+		table.charge[to] = parent.charge[atom]!;
+		table.odd[to] = parent.odd[atom]!;
 		table.neighbours.push(neighbours);
 		table.bonds.push(bonds);
 	}
+	table.plain = !table.odd.includes(1);
 	if (carbonyl >= 0) {
 		if (gone[carbonyl]) return null;
 		table.element[size - 1] = 8;
