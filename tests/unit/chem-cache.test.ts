@@ -21,6 +21,20 @@ describe('byte-bounded caches', () => {
 		expect(cache.get(`1999 ${filler}`)).toEqual([1999, 2000, 2001]); // the newest is kept
 		expect(cache.get(`0 ${filler}`)).toBeUndefined(); // the oldest went
 	});
+	it('getOrSet makes a value once per normalised key and keeps nothing when making it throws', () => {
+		const cache = new LruCache<number[]>('perceptionByText', 64 * 1024);
+		let made = 0;
+		const make = () => [++made];
+		expect(cache.getOrSet('CCO', make)).toEqual([1]);
+		expect(cache.getOrSet(' CCO \n', make)).toEqual([1]);
+		expect(made).toBe(1);
+		expect(() =>
+			cache.getOrSet('C1CC', () => {
+				throw new Error('unclosed ring');
+			})
+		).toThrow('unclosed ring');
+		expect(cache.get('C1CC')).toBeUndefined();
+	});
 	it('counts a value by its size: one huge value is not kept at all', () => {
 		const cache = new LruCache<string>('drawnStructures', 10_000);
 		cache.set('a', 'x'.repeat(20_000));

@@ -59,6 +59,16 @@ export class LruCache<V extends NonNullable<unknown>> {
 		this.#entries.set(digestKey(key), value);
 	}
 
+	/** The value kept for `key`, else `make()`'s, kept: one digest of the key where get + set take two. */
+	getOrSet(key: string, make: () => V): V {
+		const digest = digestKey(key);
+		const stored = this.#entries.get(digest);
+		if (stored !== undefined) return stored;
+		const fresh = make();
+		this.#entries.set(digest, fresh);
+		return fresh;
+	}
+
 	/** Entries held now. */
 	get size(): number {
 		return this.#entries.size;

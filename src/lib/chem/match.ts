@@ -1,21 +1,26 @@
-// Running compiled patterns against a molecule with openchemlib's substructure search.
+// Running compiled patterns against a molecule.
 //
-// A search costs tens of microseconds even when it fails, so before searching we check cheap
-// molecule features: the elements a pattern names, and the `needs` a rule row declares (a free
-// O–H, a C=O, a found group such as "silyl-ether", …), then the loose TypeScript walk of
-// prefilter.ts. tests/unit/chem-perceive.test.ts runs every pattern with and without these checks
-// over the reference set to prove they never hide a match.
+// Two ways to search: the exact TypeScript matcher (smarts-match.ts) over the molecule's atom
+// table, used for every pattern smarts-query.ts can read on a plain molecule (no charges), and
+// openchemlib's substructure search for the rest. Before either, cheap molecule features are
+// checked: the elements a pattern names and the `needs` a rule row declares (a free O–H, a C=O, a
+// found group such as "silyl-ether", …); before openchemlib also the loose walk of prefilter.ts.
+// tests/unit/chem-perceive.test.ts runs every pattern with and without these checks over the
+// reference set to prove they never hide a match.
 
 import { Molecule, SSSearcher } from 'openchemlib';
 import type { CompiledPattern } from './patterns';
 import { atomTable, mayMatch, type AtomTable } from './prefilter';
+import { compareMappings, distinctMatches, firstPerAtomSet, matchedAtoms } from './smarts-match';
+
+export { matchedAtoms };
 
 /** Features a rule row may list under `needs` (group ids may be listed too). */
 export const MOLECULE_FEATURES = ['O-H', 'N-H', 'S-H', 'C=O', 'C=C', 'C=N', 'triple', 'ring-3'] as const;
 
 /** One molecule prepared for many searches: its searcher and the features it has. */
 export type SearchTarget = {
-	molecule: Molecule;
+	readonly molecule: Molecule;
 	/** Made on first use: when the pre-checks rule out every pattern, no searcher is built. */
 	readonly searcher: SSSearcher;
 	/** The molecule as prefilter.ts reads it. */
@@ -71,19 +76,22 @@ export function hasFeatures(target: SearchTarget, needs: readonly (string | numb
 }
 
 /**
- * Every match with a distinct atom set, as fragment-index → molecule-atom arrays (-1 for atoms
- * openchemlib only uses to exclude), e.g. `findMatches(target, compiled)` → `[[3, 4, 5]]`.
- * 'overlapping' mode drops matches that cover exactly the same atoms, as RDKit's uniquify does.
+ * Every match with a distinct atom set, as mappings pattern atom → molecule atom (indices as the
+ * pattern's roles use them; -1 for atoms openchemlib only uses to exclude), in ascending order of
+ * the mapping arrays, e.g. `findMatches(target, compiled)` → `[[3, 4, 5]]`. Matches that cover
+ * exactly the same atoms count once (the first mapping in that order), as RDKit's uniquify does.
  */
 export function findMatches(target: SearchTarget, pattern: CompiledPattern): number[][] {
 	if (!hasFeatures(target, pattern.requiredElements)) return [];
+	const exact = pattern.exact && distinctMatches(target.table, pattern.exact);
+	if (exact) return exact;
 	if (!target.exhaustive && pattern.loose && !mayMatch(target.table, pattern.loose)) return [];
 	target.searcher.setFragment(pattern.fragment);
-	const count = target.searcher.findFragmentInMolecule({ countMode: 'overlapping' });
-	return count === 0 ? [] : target.searcher.getMatchList();
-}
-
-/** The molecule atoms of a match, without excluded placeholders, sorted, e.g. `matchedAtoms([5, -1, 2])` → `[2, 5]`. */
-export function matchedAtoms(match: number[]): number[] {
-	return match.filter((atom) => atom >= 0).sort((a, b) => a - b);
+	// 'rigorous' lists every mapping, symmetric ones too: 2–5× cheaper than 'overlapping' on a
+	// TBS pattern (12 mappings per TBS ether), and sorting gives the same order as the TS path.
+	if (target.searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) return [];
+	const mappings = target.searcher.getMatchList();
+	// An exact pattern's roles count in SMARTS order: drop the placeholders of `!$()` atoms.
+	const ordered = pattern.exact ? mappings.map((mapping) => mapping.filter((atom) => atom >= 0)) : mappings;
+	return firstPerAtomSet(ordered.sort(compareMappings));
 }

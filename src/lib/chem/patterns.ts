@@ -15,6 +15,8 @@ import { z } from 'zod';
 import { Molecule, SmilesParser } from 'openchemlib';
 import { MOLECULE_FEATURES } from './match';
 import { looseQuery, type LooseQuery } from './prefilter';
+import { exactQuery, type ExactQuery } from './smarts-query';
+import { queryElements } from './smarts-plan';
 import groupsJson from '../../../rules/groups.json';
 import protectingGroupsJson from '../../../rules/protecting-groups.json';
 
@@ -69,11 +71,14 @@ export const protectingGroupPatternSchema = z
 export type GroupPattern = z.output<typeof groupPatternSchema>;
 export type ProtectingGroupPattern = z.output<typeof protectingGroupPatternSchema>;
 
-/** A pattern ready for openchemlib's substructure search. */
+/** A pattern ready for searching (match.ts): in TypeScript when `exact` is there, else with openchemlib. */
 export type CompiledPattern = {
 	smarts: string;
 	fragment: Molecule;
-	/** Fragment atoms by role (fragment indices, not SMARTS order: openchemlib inserts excluded atoms). */
+	/**
+	 * Atoms by role, as indices into the mappings findMatches returns: SMARTS order for the exact
+	 * query, fragment order for openchemlib (which inserts the atoms of `!$()` exclusions).
+	 */
 	key: number;
 	masked: number[];
 	context: number[];
@@ -81,6 +86,8 @@ export type CompiledPattern = {
 	requiredElements: number[];
 	/** The same SMARTS as a loose TypeScript test (prefilter.ts), null when it cannot be read there. */
 	loose: LooseQuery | null;
+	/** The SMARTS as an exact TypeScript query (smarts-query.ts), null when only openchemlib reads it. */
+	exact: ExactQuery | null;
 };
 
 export type CompiledGroup = GroupPattern & { compiled: CompiledPattern };
@@ -109,14 +116,39 @@ export function compilePattern(smarts: string, file: string, path: (string | num
 		throw new RuleTableError(file, path, `openchemlib cannot read the SMARTS ${smarts}: ${String(caught)}`);
 	}
 	fragment.setFragment(true);
+	const fragmentMapNumbers = Array.from({ length: fragment.getAllAtoms() }, (_, atom) => fragment.getAtomMapNo(atom));
+	const fragmentRoles = roles(fragmentMapNumbers);
+	const exact = exactQuery(smarts);
+	// Both readings must see the same roles; if not, openchemlib's reading is the one used.
+	const exactRoles = exact && roles(exact.mapNumbers);
+	const agree = exactRoles && exactRoles.masked.length === fragmentRoles.masked.length && exactRoles.context.length === fragmentRoles.context.length;
+	const used = agree ? exactRoles : fragmentRoles;
+	return {
+		smarts,
+		fragment,
+		...used,
+		requiredElements: requiredElements(smarts, file, path),
+		loose: looseQuery(smarts),
+		exact: agree ? exact : null
+	};
+}
+
+/** Atoms by map number: `:1` masked (the first is the key), `:2` context. */
+function roles(mapNumbers: number[]): { key: number; masked: number[]; context: number[] } {
 	const masked: number[] = [];
 	const context: number[] = [];
-	for (let atom = 0; atom < fragment.getAllAtoms(); atom++) {
-		const map = fragment.getAtomMapNo(atom);
+	mapNumbers.forEach((map, atom) => {
 		if (map === 1) masked.push(atom);
 		else if (map === 2) context.push(atom);
-	}
-	return { smarts, fragment, key: masked[0] ?? 0, masked, context, requiredElements: requiredElements(smarts, file, path), loose: looseQuery(smarts) };
+	});
+	return { key: masked[0] ?? 0, masked, context };
+}
+
+/** The element of a pattern's key atom (null: not one element), whichever reading it was compiled with. */
+export function keyElement(pattern: CompiledPattern): number | null {
+	if (!pattern.exact) return pattern.fragment.getAtomicNo(pattern.key);
+	const elements = queryElements(pattern.exact)[pattern.key];
+	return elements?.length === 1 ? elements[0]! : null;
 }
 
 /** Elements named by plain (non-list, non-negated) atoms outside recursive `$()` parts. */
@@ -178,7 +210,7 @@ export function compileRules(rawGroups: unknown, rawProtectingGroups: unknown): 
 		const compiled = pg.patterns.map((smarts, p) => {
 			const pattern = compilePattern(smarts, file, [index, 'patterns', p]);
 			if (pattern.masked.length === 0) throw new RuleTableError(file, [index, 'patterns', p], 'no atom is marked :1 (masked)');
-			if (pg.restore === 'carbonyl' && pattern.fragment.getAtomicNo(pattern.key) !== 6) {
+			if (pg.restore === 'carbonyl' && keyElement(pattern) !== 6) {
 				throw new RuleTableError(file, [index, 'patterns', p], 'restore "carbonyl" needs the first :1 atom to be the acetal carbon');
 			}
 			return pattern;

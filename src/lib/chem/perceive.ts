@@ -4,7 +4,7 @@
 import type { Molecule } from 'openchemlib';
 import { findMatches, hasFeatures, matchedAtoms, searchTarget, type SearchTarget } from './match';
 import { perceptionRules, type CompiledProtectingGroup, type PerceptionRules } from './patterns';
-import { withoutProtectingGroup } from './deprotect';
+import { freedTarget } from './freed-target';
 
 export type GroupInstance = {
 	id: string;
@@ -84,7 +84,7 @@ export function findProtectingGroups(
 	const accepted: (Candidate & { masks: string })[] = [];
 	for (const candidate of candidates) {
 		if (accepted.some((taken) => overlaps(taken, candidate))) continue;
-		const masks = maskedGroup(target.molecule, candidate, rules);
+		const masks = maskedGroup(target, candidate, rules);
 		if (masks) accepted.push({ ...candidate, masks });
 	}
 	return accepted
@@ -105,8 +105,8 @@ function overlaps(a: Candidate, b: Candidate): boolean {
  * protects on the masked atoms. A match that gives back none of them is not this PG (a "benzyl
  * ether" whose removal frees a carboxylic acid is a benzyl ester), unless a fallback is declared.
  */
-function maskedGroup(molecule: Molecule, candidate: Candidate, rules: PerceptionRules): string | null {
-	const { molecule: freed, atomMap } = withoutProtectingGroup(molecule, [...candidate.leaving], candidate.masked, candidate.pg.restore);
+function maskedGroup(target: SearchTarget, candidate: Candidate, rules: PerceptionRules): string | null {
+	const { target: freed, atomMap } = freedTarget(target, [...candidate.leaving], candidate.masked, candidate.pg.restore);
 	const maskedNow = candidate.masked.map((atom) => atomMap[atom]!);
 	const groups = findGroups(freed, candidate.pg.protects, rules);
 	for (const id of candidate.pg.protects) {

@@ -26,12 +26,8 @@ export function perceiveWithKey(molecule: Molecule, form: CanonicalForm): Percep
 
 /** Perception of structure text via the text cache (parsed without coordinates), e.g. `perceiveText('OCCO')`. */
 export function perceiveText(text: string): Perception {
-	const stored = byText.get(text);
-	if (stored) return stored;
 	// Warnings are not part of a perception, and collecting them costs more than perceiving.
-	const fresh = perceive(readStructure(text, { warnings: false }).molecule);
-	byText.set(text, fresh);
-	return fresh;
+	return byText.getOrSet(text, () => perceive(readStructure(text, { warnings: false }).molecule));
 }
 
 /** Entries and bytes held by the two caches (tests and benchmarks), e.g. `perceptionCacheUse().byText.bytes`. */

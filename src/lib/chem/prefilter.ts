@@ -1,14 +1,16 @@
-// A loose substructure test in plain TypeScript, run before openchemlib's search.
+// The atom table every TypeScript search reads, and a loose substructure test run before
+// openchemlib's search (which is now used only for patterns or molecules smarts-match.ts leaves
+// to it: see match.ts).
 //
-// One openchemlib search costs ~70–100 µs even when it finds nothing (it rebuilds the fragment's
-// features on every setFragment), and most pattern × molecule pairs find nothing. This test reads
-// the pattern's SMARTS itself and walks the molecule's atom table in a few µs. It is deliberately
-// looser than openchemlib: anything it does not understand (recursive `$()`, negations, charges,
-// ring primitives) counts as "may match", bonds accept aromatic as well, and `X<n>` only caps the
-// heavy-atom neighbours. So "no" is final and "yes" still goes to openchemlib for the real match
-// list. tests/unit/chem-prefilter.test.ts proves "no" never hides a match over the reference set.
+// One openchemlib search costs tens of µs even when it finds nothing, and most pattern × molecule
+// pairs find nothing. This test reads the pattern's SMARTS itself and walks the atom table in a
+// few µs. It is deliberately looser than openchemlib: anything it does not understand (recursive
+// `$()`, negations, charges, ring primitives) counts as "may match", bonds accept aromatic as
+// well, and `X<n>` only caps the heavy-atom neighbours. So "no" is final and "yes" still goes to
+// openchemlib for the real match list. tests/unit/chem-prefilter.test.ts proves "no" never hides
+// a match over the reference set.
 
-import type { Molecule } from 'openchemlib';
+import { Molecule } from 'openchemlib';
 
 /**
  * What one pattern atom asks of a molecule atom, all of it at once: one of `elements` (null: any),
@@ -31,9 +33,19 @@ export type AtomTable = {
 	element: Int16Array;
 	aromatic: Uint8Array;
 	hydrogens: Int16Array;
+	/** Formal charge (smarts-match.ts reads it; the loose test does not). */
+	charge: Int8Array;
 	neighbours: number[][];
 	/** Bond bits to each neighbour, same order as `neighbours`. */
 	bonds: number[][];
+	/**
+	 * Atoms whose X and H openchemlib reads in ways of its own (an N+ with four carbons is X3 to
+	 * it): charged atoms, radicals, hydrogen atoms kept as atoms (deuterium) and the atoms bearing
+	 * them. smarts-match.ts hands a search to openchemlib when it would test X or H on one.
+	 */
+	odd: Uint8Array;
+	/** No odd atom at all. */
+	plain: boolean;
 };
 
 // Bond bits: a molecule bond has one order bit, plus AROMATIC when it is aromatic.
@@ -49,14 +61,18 @@ const DEFAULT_BOND = SINGLE | AROMATIC;
 const ELEMENTS: Record<string, number> = { B: 5, C: 6, N: 7, O: 8, F: 9, Si: 14, P: 15, S: 16, Cl: 17, Br: 35, I: 53 };
 const AROMATIC_ELEMENTS: Record<string, number> = { b: 5, c: 6, n: 7, o: 8, p: 15, s: 16 };
 
-/** Reads the table once per molecule (helper arrays must be ready), e.g. `atomTable(Molecule.fromSmiles('CCO'))`. */
+/** Reads the table once per molecule, e.g. `atomTable(Molecule.fromSmiles('CCO'))`. */
 export function atomTable(molecule: Molecule): AtomTable {
+	// Rings and aromaticity first (a no-op when done): a fresh molecule has no hydrogen counts yet.
+	molecule.ensureHelperArrays(Molecule.cHelperRings);
 	const count = molecule.getAtoms();
-	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), neighbours: [], bonds: [] };
+	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), charge: new Int8Array(count), neighbours: [], bonds: [], odd: new Uint8Array(count), plain: true };
 	for (let atom = 0; atom < count; atom++) {
 		table.element[atom] = molecule.getAtomicNo(atom);
 		table.aromatic[atom] = molecule.isAromaticAtom(atom) ? 1 : 0;
 		table.hydrogens[atom] = molecule.getAllHydrogens(atom);
+		table.charge[atom] = molecule.getAtomCharge(atom);
+		if (table.charge[atom] !== 0 || molecule.getAtomRadical(atom) !== 0) table.odd[atom] = 1;
 		const neighbours: number[] = [];
 		const bonds: number[] = [];
 		for (let i = 0; i < molecule.getConnAtoms(atom); i++) {
@@ -68,6 +84,12 @@ export function atomTable(molecule: Molecule): AtomTable {
 		table.neighbours.push(neighbours);
 		table.bonds.push(bonds);
 	}
+	for (let atom = 0; atom < count; atom++) {
+		if (table.element[atom] !== 1) continue;
+		table.odd[atom] = 1;
+		for (const other of table.neighbours[atom]!) table.odd[other] = 1;
+	}
+	table.plain = !table.odd.includes(1);
 	return table;
 }
 
