@@ -52,7 +52,12 @@ const stepSchema = z
 		/** "real compound(s) …" or "simplified analogue …" of the literature substrate. */
 		structures: z.string().min(1),
 		/** Book + chapter, paper (authors, journal, year, volume, page), "common practice", "— from memory". */
-		source: z.string().min(10)
+		source: z.string().min(10),
+		/**
+		 * Where the table's answer is deliberately looser than the paper's strict reading (a caution
+		 * where the paper's case needs none), why: the limit of the model, said in the open.
+		 */
+		judgement: z.string().min(20).optional()
 	})
 	.strict();
 export type CorpusStep = z.output<typeof stepSchema>;

@@ -186,8 +186,8 @@ const FACTS: [FreeGroupId, ConditionId, 'reacts' | 'caution' | undefined, string
 	[
 		'aryl-halide-br-i',
 		'hydrogenation',
-		'caution',
-		'Pd/C and H2 can dehalogenate Ar–Br and Ar–I',
+		'reacts',
+		'Pd/C and H2 hydrogenolyse Ar–I readily and Ar–Br often: neither can be counted on to survive',
 		CLAYDEN
 	],
 	[

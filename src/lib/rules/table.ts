@@ -129,15 +129,16 @@ function withReagentRatings(
 	const classAnswer: StabilityAnswer = onSite
 		? { rating, source: row.source, layer: 'default', reason: onSite.reason, site: onSite.site }
 		: { rating, source: row.source, layer: 'default' };
+	if (reagents.length === 0) return classAnswer;
 	const answers = reagents.map((name): StabilityAnswer => {
 		const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
 		return entry
 			? { rating: entry.rating, reason: entry.reason, source: row.source, layer: 'default' }
 			: classAnswer;
 	});
-	return answers.reduce(
-		(worst, next) => (SEVERITY[next.rating] > SEVERITY[worst.rating] ? next : worst),
-		classAnswer
+	// No starting value: a reagent's own rating may be milder than the class's (PPTS and TBDPS).
+	return answers.reduce((worst, next) =>
+		SEVERITY[next.rating] > SEVERITY[worst.rating] ? next : worst
 	);
 }
 

@@ -6,6 +6,9 @@ import type { ConditionId, FreeGroupId, ProtectingGroupId } from '../ids';
 import { loadRuleTable, type RuleTable } from '../table';
 import type { CheckRules } from './types';
 
+const lowerFirst = (text: string) =>
+	/^[A-Z][a-z]/.test(text) ? text[0]!.toLowerCase() + text.slice(1) : text;
+
 /** The check's view of a rule table (the defaults, or a team's layered table). */
 export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 	const perception = perceptionRules();
@@ -25,7 +28,8 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 				? { rating: answer.rating, reason: answer.reason, source: answer.source }
 				: null;
 		},
-		groupLabel: (group) => (groupLabels.get(group) ?? group).toLowerCase(),
+		// Lower-case the first letter only, for mid-sentence use: "the free alkene (non-aromatic C=C)".
+		groupLabel: (group) => lowerFirst(groupLabels.get(group) ?? group),
 		classify: (text) => {
 			const result = table.conditionsForReagents(text);
 			return {
