@@ -107,4 +107,39 @@ describe('finer condition classes', () => {
 			])
 		);
 	});
+
+	it('refine a free group row for named reagents, milder or harsher, and refuse a reagent that cannot bring the class', () => {
+		const table = buildRuleTable(copy());
+		// Aliphatic tertiary alcohols survive TFA/CH2Cl2 but not hot H2SO4 (common practice).
+		expect(table.reactivityOf('alcohol-tertiary', 'acid-strong', ['TFA'])).toBeUndefined();
+		expect(table.reactivityOf('alcohol-tertiary', 'acid-strong', ['TFA', 'H2SO4'])?.rating).toBe(
+			'caution'
+		);
+		expect(table.reactivityOf('alcohol-tertiary', 'acid-strong')?.rating).toBe('caution');
+		const raw = copy();
+		const row = reactivityRows(raw).find(
+			(r) => r.group === 'ketone' && r.condition === 'organometallic'
+		)!;
+		(row as unknown as { reagentRatings: unknown[] }).reagentRatings = [
+			{ reagent: 'TBAF', rating: 'none', reason: 'x' },
+			{ reagent: 'OG-Zinc 9', rating: 'none', reason: 'x' }
+		];
+		expect(problemsOf(raw)).toEqual(
+			expect.arrayContaining([
+				expect.stringMatching(
+					/reactivity\.json: \[\d+\]\.reagentRatings\[0\]\.reagent: "TBAF" does not bring organometallic/
+				),
+				expect.stringMatching(
+					/reactivity\.json: \[\d+\]\.reagentRatings\[1\]\.reagent: unknown reagent "OG-Zinc 9"/
+				)
+			])
+		);
+	});
+
+	it('let a PG reagent rating be milder than its class (PPTS leaves TBDPS; Miyashita et al., J. Org. Chem. 1977, 42, 3772)', () => {
+		const table = buildRuleTable(copy());
+		expect(table.stabilityOf('TBDPS', 'acid-mild').rating).toBe('caution');
+		expect(table.stabilityOf('TBDPS', 'acid-mild', ['PPTS']).rating).toBe('stable');
+		expect(table.stabilityOf('TBDPS', 'acid-mild', ['PPTS', 'CSA']).rating).toBe('caution');
+	});
 });

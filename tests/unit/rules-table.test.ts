@@ -54,6 +54,11 @@ describe('rule table: ids and coverage', () => {
 		);
 	});
 
+	it('has at least 45 protecting groups and 250 reagents (issue 11)', () => {
+		expect(table.protectingGroups.length).toBeGreaterThanOrEqual(45);
+		expect(table.reagents.length).toBeGreaterThanOrEqual(250);
+	});
+
 	it('rates every protecting group under every condition class (finer classes by inheritance where not rated)', () => {
 		for (const pg of table.protectingGroups) {
 			for (const condition of table.conditions) {
