@@ -14,6 +14,7 @@ export const MODEL_SUBSTRATES: Record<string, string> = {
 	'amine-primary': 'NCCCC',
 	'amine-secondary': 'CNCCC',
 	'indole-nh': 'c1ccc2[nH]ccc2c1',
+	'azole-nh': 'Cc1cc(C)[nH]n1',
 	'carboxylic-acid': 'OC(=O)[C@@H](C)CC',
 	'alkyne-terminal': 'C#CCCC',
 	thiol: 'SCCCC',

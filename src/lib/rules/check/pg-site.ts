@@ -32,7 +32,8 @@ export function siteOf(molecule: Molecule, atom: number): PgSite | undefined {
 // aromaticity, and a group id is enough there (a phenol's O is always on an aromatic carbon).
 const SITE_OF_GROUP: Readonly<Record<string, PgSite>> = {
 	phenol: 'aryl-oxygen',
-	'indole-nh': 'aromatic-nitrogen'
+	'indole-nh': 'aromatic-nitrogen',
+	'azole-nh': 'aromatic-nitrogen'
 };
 
 /** The site implied by a free-group id, e.g. `siteOfGroup('phenol')` → `aryl-oxygen`; undefined for an alcohol. */
