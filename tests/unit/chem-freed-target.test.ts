@@ -29,6 +29,7 @@ function described(table: AtomTable) {
 		aromatic: table.aromatic[atom],
 		hydrogens: table.hydrogens[atom],
 		charge: table.charge[atom],
+		ringSize: table.ringSize[atom],
 		odd: table.odd[atom],
 		neighbours: table.neighbours[atom]!.map(
 			(other, i) => `${other}:${table.bonds[atom]![i]}`
@@ -97,6 +98,20 @@ describe('the imagined removal of a PG', () => {
 		const freed = derivedTable(dioxolane.table, [4, 5, 6, 7], [1], 'carbonyl')!;
 		expect(Array.from(freed.table.element)).toEqual([6, 6, 6, 6, 8]);
 		expect(freed.table.neighbours[1]).toEqual([0, 2, 4]);
+		// An acetonide leaving its diol cuts the dioxolane open: the fused carbons (r5) are r6 again.
+		const acetonide = searchTarget(readStructure('CC1(C)OC2CCCCC2O1').molecule);
+		expect(Array.from(acetonide.table.ringSize)).toEqual([0, 5, 0, 5, 5, 6, 6, 6, 6, 5, 5]);
+		const diol = derivedTable(acetonide.table, [0, 1, 2], [3, 10], 'hydrogen')!;
+		expect(Array.from(diol.table.ringSize)).toEqual([0, 6, 6, 6, 6, 6, 6, 0]);
+		const diolFromOpenchemlib = withoutProtectingGroup(
+			acetonide.molecule,
+			[0, 1, 2],
+			[3, 10],
+			'hydrogen'
+		);
+		expect(Array.from(atomTable(diolFromOpenchemlib.molecule).ringSize)).toEqual([
+			0, 6, 6, 6, 6, 6, 6, 0
+		]);
 		const tbs = searchTarget(readStructure('CCO[Si](C)(C)C').molecule);
 		expect(
 			Array.from(derivedTable(tbs.table, [3, 4, 5, 6], [2], 'hydrogen')!.table.hydrogens)

@@ -121,17 +121,26 @@ describe('the TypeScript SMARTS matcher', () => {
 	}, 120_000);
 
 	it('hands a search to openchemlib where it would test X or H on a charged atom, a radical or deuterium', () => {
-		// openchemlib reads the quaternary N+ as X3, so its amine-tertiary pattern matches it (the
-		// loose pre-test, capping heavy neighbours at 3, says no first: exhaustive skips it here).
-		const ammonium = searchTarget(readStructure('C[N+](C)(C)CCO').molecule, { exhaustive: true });
-		expect(ammonium.table.plain).toBe(false);
-		expect(Array.from(ammonium.table.odd)).toEqual([0, 1, 0, 0, 0, 0, 0]);
-		const tertiary = rules.groupsById.get('amine-tertiary')!.compiled;
-		expect(distinctMatches(ammonium.table, tertiary.exact!)).toBeNull();
-		expect(findMatches(ammonium, tertiary).length).toBeGreaterThan(0);
-		// A search that never tests X or H on the odd atom still runs here: the alcohol.
-		const primary = rules.groupsById.get('alcohol-primary')!.compiled;
-		expect(distinctMatches(ammonium.table, primary.exact!)).toEqual([[6, 5, 4]]);
+		// openchemlib reads the sulfonium S+ with three carbons as X2, so its sulfide pattern matches
+		// it (the loose pre-test, capping heavy neighbours at 2, says no first: exhaustive skips it here).
+		const sulfonium = searchTarget(readStructure('C[S+](C)CC(O)=O').molecule, { exhaustive: true });
+		expect(sulfonium.table.plain).toBe(false);
+		expect(Array.from(sulfonium.table.odd)).toEqual([0, 1, 0, 0, 0, 0, 0]);
+		const sulfide = rules.groupsById.get('sulfide')!.compiled;
+		expect(distinctMatches(sulfonium.table, sulfide.exact!)).toBeNull();
+		expect(findMatches(sulfonium, sulfide)).toEqual([
+			[0, 1, 2],
+			[0, 1, 3],
+			[2, 1, 3]
+		]);
+		// A search that never tests X or H on the odd atom still runs here: the acid.
+		const acid = rules.groupsById.get('carboxylic-acid')!.compiled;
+		expect(distinctMatches(sulfonium.table, acid.exact!)).toEqual([[3, 4, 6, 5]]);
+		// O–D is an OH to openchemlib: the deuterated alcohol is still a secondary alcohol.
+		const deuterated = searchTarget(readStructure('[2H]OC(C)C').molecule, { exhaustive: true });
+		const secondary = rules.groupsById.get('alcohol-secondary')!.compiled;
+		expect(distinctMatches(deuterated.table, secondary.exact!)).toBeNull();
+		expect(findMatches(deuterated, secondary)).toEqual([[1, 2, 3, 4]]);
 		// Deuterium marks the atom bearing it too (its H count and neighbours are openchemlib's call).
 		expect(Array.from(atomTable(readStructure('[2H]OC(C)C').molecule).odd)).toEqual([
 			1, 1, 0, 0, 0
@@ -149,7 +158,18 @@ describe('the TypeScript SMARTS matcher', () => {
 			['[CX4;!$(C[OH])]', 'OCC'],
 			['[#6]~[#8]', 'CC(=O)O'],
 			['[Cl,Br,I][CH2]', 'ClCCBr'],
-			['[nH]1cccc1', 'c1cc[nH]c1']
+			['[nH]1cccc1', 'c1cc[nH]c1'],
+			// r<n>: the smallest ring's size, so indole's fused carbons are r5 and norbornane has no r6.
+			['[c;r5]', 'c1ccc2[nH]ccc2c1'],
+			['[c;r6]', 'c1ccc2[nH]ccc2c1'],
+			['[C;r5]', 'C1CC2CCC1C2'],
+			['[C;r6]', 'C1CC2CCC1C2'],
+			['[C,N;r5]C', 'C1CCCC1N'],
+			// D<n>: explicit connections, D4 also five or six of them.
+			['[O;D1]', 'CC(=O)O'],
+			['[C;!D1]', 'CC(C)C'],
+			['[S;D4]', 'FS(F)(F)(F)(F)F'],
+			['[S;D4]', 'CS(=O)(=O)C']
 		];
 		for (const [smarts, smiles] of cases) {
 			const molecule = readStructure(smiles).molecule;
@@ -162,7 +182,18 @@ describe('the TypeScript SMARTS matcher', () => {
 	});
 
 	it('leaves syntax it does not read to openchemlib, which still finds the matches', () => {
-		for (const smarts of ['[C;R]O', 'C-,:C', '[C@H](O)C', '[13C]', 'C.C', '[D2]O', '[H]'])
+		for (const smarts of [
+			'[C;R]O',
+			'C-,:C',
+			'[C@H](O)C',
+			'[13C]',
+			'C.C',
+			'[H]',
+			'[D5]C',
+			'[C;r8]',
+			'[C;!r5]',
+			'[C;r5,r6]'
+		])
 			expect(exactQuery(smarts), smarts).toBeNull();
 		const ringCarbinol = compilePattern('[C;R][OH]', 'test', []);
 		expect(ringCarbinol.exact).toBeNull();

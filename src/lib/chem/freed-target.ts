@@ -3,7 +3,9 @@
 // aromaticity again cost ~60 µs a PG; deriving the atom table from the parent's costs ~3 µs.
 // The derivation is used only where it must agree with openchemlib's: no odd atom (a charge, a
 // radical, deuterium: AtomTable.odd) removed or touched by the removal, no aromatic bond cut, and
-// every atom that gets hydrogens back at its usual valence.
+// every atom that gets hydrogens back at its usual valence. Where a ring is cut open (an acetonide
+// leaving its diol), the smallest rings that `r<n>` reads are found again, up to openchemlib's
+// small-ring limit of 7; an atom left only in a larger ring goes to openchemlib.
 // tests/unit/chem-freed-target.test.ts compares both over every PG match of the reference set.
 
 import { searchTarget, type SearchTarget } from './match';
@@ -82,12 +84,14 @@ export function derivedTable(
 	let kept = 0;
 	for (let atom = 0; atom < count; atom++) atomMap[atom] = gone[atom] ? -1 : kept++;
 	const carbonyl = restore === 'carbonyl' ? masked[0]! : -1;
+	let ringCut = false;
 	const size = kept + (carbonyl >= 0 ? 1 : 0);
 	const table: AtomTable = {
 		element: new Int16Array(size),
 		aromatic: new Uint8Array(size),
 		hydrogens: new Int16Array(size),
 		charge: new Int8Array(size),
+		ringSize: new Int16Array(size),
 		neighbours: [],
 		bonds: [],
 		odd: new Uint8Array(size),
@@ -108,7 +112,10 @@ export function derivedTable(
 				bonds.push(bits);
 			} else if (bits & AROMATIC)
 				lost = -Infinity; // a ring cut open: aromaticity may change
-			else lost += bondOrder(bits);
+			else {
+				lost += bondOrder(bits);
+				if (parent.ringSize[atom]! > 0 && parent.ringSize[other]! > 0) ringCut = true;
+			}
 		});
 		if (lost < 0 || (lost > 0 && parent.odd[atom])) return null;
 		let hydrogens = parent.hydrogens[atom]!;
@@ -124,6 +131,7 @@ export function derivedTable(
 		table.aromatic[to] = parent.aromatic[atom]!;
 		table.hydrogens[to] = hydrogens;
 		table.charge[to] = parent.charge[atom]!;
+		table.ringSize[to] = parent.ringSize[atom]!;
 		table.odd[to] = parent.odd[atom]!;
 		table.neighbours.push(neighbours);
 		table.bonds.push(bonds);
@@ -135,7 +143,44 @@ export function derivedTable(
 		table.neighbours.push([atomMap[carbonyl]!]);
 		table.bonds.push([DOUBLE]);
 	}
+	if (ringCut) {
+		for (let atom = 0; atom < size; atom++) {
+			if (table.ringSize[atom] === 0) continue;
+			const ring = smallestRing(table, atom);
+			if (ring > MAX_SMALL_RING) return null;
+			table.ringSize[atom] = ring;
+		}
+	}
 	return { table, atomMap };
+}
+
+/** openchemlib's RingCollection lists every ring up to this size; larger ones it sizes its own way. */
+const MAX_SMALL_RING = 7;
+
+/**
+ * The size of the smallest ring through `start`, 0 in none: breadth first from it, each atom
+ * tagged with the neighbour of `start` it was reached through; a bond between two atoms reached
+ * through different neighbours closes a ring of their distances plus one.
+ */
+function smallestRing(table: AtomTable, start: number): number {
+	const distance = new Int32Array(table.element.length).fill(-1);
+	const branch = new Int32Array(table.element.length).fill(-1);
+	distance[start] = 0;
+	const queue = [start];
+	let smallest = Infinity;
+	for (let head = 0; head < queue.length; head++) {
+		const atom = queue[head]!;
+		if (2 * distance[atom]! + 1 >= smallest) break;
+		for (const other of table.neighbours[atom]!) {
+			if (distance[other] === -1) {
+				distance[other] = distance[atom]! + 1;
+				branch[other] = atom === start ? other : branch[atom]!;
+				queue.push(other);
+			} else if (other !== start && atom !== start && branch[other] !== branch[atom])
+				smallest = Math.min(smallest, distance[atom]! + distance[other]! + 1);
+		}
+	}
+	return smallest === Infinity ? 0 : smallest;
 }
 
 /**

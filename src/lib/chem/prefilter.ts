@@ -35,6 +35,8 @@ export type AtomTable = {
 	hydrogens: Int16Array;
 	/** Formal charge (smarts-match.ts reads it; the loose test does not). */
 	charge: Int8Array;
+	/** Size of the smallest ring through the atom as openchemlib reports it, 0 in none (SMARTS `r<n>`). */
+	ringSize: Int16Array;
 	neighbours: number[][];
 	/** Bond bits to each neighbour, same order as `neighbours`. */
 	bonds: number[][];
@@ -66,12 +68,13 @@ export function atomTable(molecule: Molecule): AtomTable {
 	// Rings and aromaticity first (a no-op when done): a fresh molecule has no hydrogen counts yet.
 	molecule.ensureHelperArrays(Molecule.cHelperRings);
 	const count = molecule.getAtoms();
-	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), charge: new Int8Array(count), neighbours: [], bonds: [], odd: new Uint8Array(count), plain: true };
+	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), charge: new Int8Array(count), ringSize: new Int16Array(count), neighbours: [], bonds: [], odd: new Uint8Array(count), plain: true };
 	for (let atom = 0; atom < count; atom++) {
 		table.element[atom] = molecule.getAtomicNo(atom);
 		table.aromatic[atom] = molecule.isAromaticAtom(atom) ? 1 : 0;
 		table.hydrogens[atom] = molecule.getAllHydrogens(atom);
 		table.charge[atom] = molecule.getAtomCharge(atom);
+		table.ringSize[atom] = molecule.getAtomRingSize(atom);
 		if (table.charge[atom] !== 0 || molecule.getAtomRadical(atom) !== 0) table.odd[atom] = 1;
 		const neighbours: number[] = [];
 		const bonds: number[] = [];

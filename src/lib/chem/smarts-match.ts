@@ -224,6 +224,12 @@ function fits(table: AtomTable, atom: number, test: AtomTest): boolean {
 		case 'connections':
 			if (table.odd[atom]) throw new OddAtom();
 			return table.neighbours[atom]!.length + table.hydrogens[atom]! === test.count;
+		case 'degree': {
+			const connections = table.neighbours[atom]!.length;
+			return test.atLeast ? connections >= test.count : connections === test.count;
+		}
+		case 'ringSize':
+			return table.ringSize[atom] === test.size;
 		case 'charge':
 			return table.charge[atom] === test.charge;
 		case 'recursive':

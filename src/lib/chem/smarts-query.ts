@@ -1,11 +1,13 @@
 // Reading a SMARTS into an exact query that smarts-match.ts runs over the atom table in plain
-// TypeScript. It reads the SMARTS the rule tables use (element symbols, #n, a/A, H, X, charges,
-// `,` `;` `&` `!`, recursive `$()`, ring closures, the bonds - = # : ~) with openchemlib's
+// TypeScript. It reads the SMARTS the rule tables use (element symbols, #n, a/A, H, X, D, r,
+// charges, `,` `;` `&` `!`, recursive `$()`, ring closures, the bonds - = # : ~) with openchemlib's
 // meaning where it differs from Daylight's: an upper-case symbol names the element only (aromatic
-// atoms match too), and an unwritten bond is aromatic between two aromatic atoms, single
-// otherwise. Anything else (chirality, isotopes, ring primitives, bond expressions, '.') makes
-// the reader give up with null, and the pattern stays with openchemlib. That the two agree on
-// every mapping is tests/unit/chem-smarts-match.test.ts.
+// atoms match too), an unwritten bond is aromatic between two aromatic atoms, single otherwise,
+// `r<n>` is the size of the atom's smallest ring, `D4` is four or more connections. Anything else
+// (chirality, isotopes, R, x, v, bond expressions, '.', and the `r`/`D` forms openchemlib reads
+// loosely or not at all, see ringSizeTest and degreeTest) makes the reader give up with null, and
+// the pattern stays with openchemlib. That the two agree on every mapping is
+// tests/unit/chem-smarts-match.test.ts.
 
 export const SINGLE = 1;
 export const DOUBLE = 2;
@@ -30,6 +32,10 @@ export type AtomTest =
 	| { kind: 'aromatic'; aromatic: boolean }
 	| { kind: 'hydrogens'; count: number }
 	| { kind: 'connections'; count: number }
+	/** Explicit connections (SMARTS `D`): exactly `count`, or at least it when `atLeast`. */
+	| { kind: 'degree'; count: number; atLeast: boolean }
+	/** The size of the atom's smallest ring (SMARTS `r<n>`). */
+	| { kind: 'ringSize'; size: number }
 	| { kind: 'charge'; charge: number }
 	| { kind: 'recursive'; query: ExactQuery };
 
@@ -202,7 +208,12 @@ function splitTop(text: string, separator: string): string[] {
 const combine = (kind: 'all' | 'any', tests: AtomTest[]): AtomTest =>
 	tests.length === 1 ? tests[0]! : { kind, tests };
 const lowAnd = (text: string) => combine('all', splitTop(text, ';').map(or));
-const or = (text: string) => combine('any', splitTop(text, ',').map(highAnd));
+function or(text: string): AtomTest {
+	const alternatives = splitTop(text, ',').map(highAnd);
+	// openchemlib keeps one ring size per atom: it reads `[C;r5,r6]` as r5 and refuses `[C;r5,N]`.
+	if (alternatives.length > 1 && alternatives.some(testsRingSize)) throw new Unsupported();
+	return combine('any', alternatives);
+}
 const highAnd = (text: string) => combine('all', splitTop(text, '&').flatMap(primitives));
 
 /** A run of primitives, each maybe negated: `!$(NC=O)`, `NX3`, `CH2`, `+`, `#6`. */
@@ -228,6 +239,8 @@ function primitives(run: string): AtomTest[] {
 			test = primitive(token[1]!, token[2]!, tests.length === 0 && !negated);
 			i += token[0].length;
 		}
+		// openchemlib ignores a negated ring size (`[*;!r5]` matches every atom).
+		if (negated && testsRingSize(test)) throw new Unsupported();
 		tests.push(negated ? { kind: 'not', test } : test);
 	}
 	return tests;
@@ -263,8 +276,37 @@ function primitive(head: string, digits: string, first: boolean): AtomTest {
 		if (digits !== '') throw new Unsupported();
 		return { kind: 'aromatic', aromatic: head === 'a' };
 	}
-	if (digits !== '' || !first) throw new Unsupported(); // isotopes, D, R, r, v, x, …
+	if (head === 'D') return degreeTest(digits);
+	if (head === 'r') return ringSizeTest(digits);
+	if (digits !== '' || !first) throw new Unsupported(); // isotopes, R, v, x, …
 	if (head in BRACKET_ELEMENTS) return { kind: 'element', element: BRACKET_ELEMENTS[head]! };
 	if (head in AROMATIC_SYMBOLS) return aromaticElement(AROMATIC_SYMBOLS[head]!);
 	throw new Unsupported();
+}
+
+/** Whether a test (outside recursive parts) asks for a ring size. */
+function testsRingSize(test: AtomTest): boolean {
+	if (test.kind === 'all' || test.kind === 'any') return test.tests.some(testsRingSize);
+	if (test.kind === 'not') return testsRingSize(test.test);
+	return test.kind === 'ringSize';
+}
+
+/**
+ * `D<n>` as openchemlib reads it: D0 to D3 exactly, D4 four or more (S with six F is D4, D5 and
+ * D6 alike); it ignores D5 and up and a bare D, so those stay with it.
+ */
+function degreeTest(digits: string): AtomTest {
+	const count = Number(digits);
+	if (digits === '' || count > 4) throw new Unsupported();
+	return { kind: 'degree', count, atLeast: count === 4 };
+}
+
+/**
+ * `r<n>` as openchemlib reads it: the atom's smallest ring has n atoms, so the fused carbons of
+ * indole are r5, not r6. It ignores r8 and up and a bare r (every atom matches), so those stay with it.
+ */
+function ringSizeTest(digits: string): AtomTest {
+	const size = Number(digits);
+	if (digits === '' || size < 3 || size > 7) throw new Unsupported();
+	return { kind: 'ringSize', size };
 }
