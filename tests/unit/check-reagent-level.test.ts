@@ -157,3 +157,27 @@ describe('steps whose reagent still hits the group', () => {
 		expect(flagged(step)).toContain('clash Fmoc fluoride');
 	});
 });
+
+describe('the ligand decides whether an aryl chloride stands by a palladium coupling', () => {
+	// Surry & Buchwald, Chem. Sci. 2011, 2, 27: dialkylbiaryl phosphines (XPhos …) let Pd(0) insert
+	// into Ar–Cl; triarylphosphines and BINAP do not at these temperatures (from memory).
+	const amination = {
+		substrate: ['Clc1ccc(Br)cc1', 'C1COCCN1'],
+		product: 'Clc1ccc(cc1)N1CCOCC1'
+	};
+	const onArCl = (reagents: string) =>
+		flagged({ ...amination, reagents }).filter((f) => f.includes('aryl-halide-f-cl'));
+
+	it('is quiet with Pd2(dba)3 and BINAP, and recognises the ligand', () => {
+		expect(onArCl('Pd2(dba)3, BINAP, NaOtBu, toluene, 100 °C')).toEqual([]);
+		expect(
+			check({ ...amination, reagents: 'Pd2(dba)3, BINAP, NaOtBu, toluene' }).unrecognized
+		).toEqual([]);
+	});
+
+	it('keeps a caution with Pd2(dba)3 and XPhos, which couples aryl chlorides', () => {
+		expect(onArCl('Pd2(dba)3, XPhos, NaOtBu, toluene, 100 °C')).toEqual([
+			'caution aryl-halide-f-cl palladium-zero'
+		]);
+	});
+});
