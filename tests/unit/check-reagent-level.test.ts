@@ -181,3 +181,26 @@ describe('the ligand decides whether an aryl chloride stands by a palladium coup
 		]);
 	});
 });
+
+describe('a Grignard reagent with a copper(I) salt reacts as a cuprate', () => {
+	// Lipshutz & Sengupta, Org. React. 1992, 41, 135: RMgX with catalytic CuI adds 1,4 to an enone
+	// and leaves esters alone at low temperature (from memory).
+	const step = {
+		substrate: 'O=C1C=CCCC1CCC(=O)OC',
+		product: 'CC1CC(=O)C(CCC(=O)OC)CC1',
+		reagents: 'MeMgBr, CuI (10 mol%), THF, -78 °C'
+	};
+
+	it('reads as organometallic-soft, not as a Grignard reagent', () => {
+		const answer = check(step);
+		expect(answer.conditions).toContain('organometallic-soft');
+		expect(answer.conditions).not.toContain('organometallic-grignard');
+	});
+
+	it('leaves the ester quiet, where MeMgBr alone attacks it', () => {
+		expect(flagged(step).filter((f) => f.includes('ester'))).toEqual([]);
+		expect(
+			flagged({ ...step, reagents: 'MeMgBr, THF, 0 °C' }).filter((f) => f.includes('ester'))
+		).not.toEqual([]);
+	});
+});

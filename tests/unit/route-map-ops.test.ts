@@ -134,3 +134,19 @@ describe('a step’s verdict on the map', () => {
 		expect(unrecognizedText(undefined)).toBeNull();
 	});
 });
+
+describe('the canvas shows the editor’s selection', () => {
+	it('marks exactly the intermediate the editor selected, and follows a new selection', async () => {
+		const { toNodes } = await import('../../src/lib/components/route-map/flow');
+		const first = toNodes(base, [], true, 'g');
+		expect(first.filter((n) => n.selected).map((n) => n.id)).toEqual(['g']);
+		// The canvas marked another node itself (a click); the editor's choice wins on the next pass.
+		const clicked = first.map((n) => ({ ...n, selected: n.id === 'a' }));
+		const next = toNodes(base, clicked, true, 'g');
+		expect(next.filter((n) => n.selected).map((n) => n.id)).toEqual(['g']);
+		expect(toNodes(base, next, true, null).some((n) => n.selected)).toBe(false);
+		// Nothing changed: the same objects come back, so the canvas does not redraw.
+		expect(toNodes(base, next, true, 'g')).toEqual(next);
+		expect(toNodes(base, next, true, 'g')[0]).toBe(next[0]);
+	});
+});

@@ -204,3 +204,16 @@ describe('classifier: hazards shown beside the step', () => {
 		expect(read.hazards.map((h) => h.reagent)).toEqual(['n-BuLi', 'THF']);
 	});
 });
+
+describe('unrecognised text is read back as the chemist wrote the name', () => {
+	// The loading in brackets is an amount, not part of the name; a name whose brackets pair up
+	// ((DHQD)2PHAL, the Sharpless ligand; [Rh(cod)Cl]2) is kept whole (common practice).
+	it.each([
+		['OG-Cat 7 (5 mol%), K2CO3, DMF', ['OG-Cat 7']],
+		['OG-Phos 3 (10 mol %)', ['OG-Phos 3']],
+		['(DHQD)2PHAL, K2CO3, tBuOH/H2O', ['(DHQD)2PHAL']],
+		['[Rh(cod)Cl]2, H2', ['[Rh(cod)Cl]2']]
+	])('%s → %j', (text, unknown) => {
+		expect(conditionsForReagents(text).unknown).toEqual(unknown);
+	});
+});

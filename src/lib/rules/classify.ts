@@ -191,8 +191,34 @@ function scan(
 	return taken;
 }
 
+/**
+ * An unrecognised fragment as the chemist should read it back: a bracketed amount dropped
+ * ("OG-Cat 7 (5 mol%)" → "OG-Cat 7"), brackets without a partner dropped, and a name whose
+ * brackets pair up kept whole ("(DHQD)2PHAL", not "DHQD)2PHAL").
+ */
 function trimFragment(fragment: string): string {
-	return fragment.replace(/^[\s()[\]{}.:/+&~–-]+|[\s()[\]{}.:/+&~–-]+$/gu, '');
+	const withoutAmounts = fragment.replace(/\(([^()]*)\)/gu, (whole, inner: string) =>
+		isNoiseFragment(inner) ? ' ' : whole
+	);
+	return dropUnpairedBrackets(withoutAmounts).replace(EDGE_PUNCTUATION, '');
+}
+
+const EDGE_PUNCTUATION = /^[\s.:/+&~–-]+|[\s.:/+&~–-]+$/gu;
+const PARTNER: Record<string, string> = { ')': '(', ']': '[', '}': '{' };
+
+function dropUnpairedBrackets(text: string): string {
+	const chars = [...text];
+	const open: number[] = [];
+	for (const [i, ch] of chars.entries()) {
+		if ('([{'.includes(ch)) open.push(i);
+		else if (ch in PARTNER) {
+			const last = open.at(-1);
+			if (last !== undefined && chars[last] === PARTNER[ch]) open.pop();
+			else chars[i] = '';
+		}
+	}
+	for (const i of open) chars[i] = '';
+	return chars.join('');
 }
 
 /** Compiles the classifier, e.g. `compileClassifier(reagents)('TBAF, THF, 0 °C')`. */

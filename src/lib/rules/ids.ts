@@ -201,7 +201,8 @@ export const REAGENT_TAGS = [
 	'nitroxyl',
 	'epoxidation-metal',
 	'poisoned-catalyst',
-	'homogeneous-catalyst'
+	'homogeneous-catalyst',
+	'copper'
 ] as const;
 export type ReagentTag = (typeof REAGENT_TAGS)[number];
 

@@ -22,17 +22,22 @@ export function intentLabel(step: RouteStep): string | null {
 export function toNodes(
 	doc: RouteDocument,
 	previous: IntermediateFlowNode[],
-	draggable: boolean
+	draggable: boolean,
+	selectedIntermediate: string | null = null
 ): IntermediateFlowNode[] {
 	const before = new Map(previous.map((node) => [node.id, node]));
 	return doc.intermediates.map((node, index) => {
 		const old = before.get(node.id);
 		const position = node.position ?? old?.position ?? { x: index * 320, y: 0 };
+		// The editor owns the selection: the canvas shows it (and its Delete key acts on it), so a
+		// node cannot look selected on the canvas while the side panel shows something else.
+		const selected = node.id === selectedIntermediate;
 		if (
 			old &&
 			old.position.x === position.x &&
 			old.position.y === position.y &&
-			old.draggable === draggable
+			old.draggable === draggable &&
+			Boolean(old.selected) === selected
 		)
 			return old;
 		return {
@@ -41,6 +46,7 @@ export function toNodes(
 			type: 'intermediate',
 			position,
 			draggable,
+			selected,
 			data: old?.data ?? { intermediateId: node.id }
 		};
 	});
