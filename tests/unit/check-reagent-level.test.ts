@@ -204,3 +204,26 @@ describe('a Grignard reagent with a copper(I) salt reacts as a cuprate', () => {
 		).not.toEqual([]);
 	});
 });
+
+describe('weak amine bases do not epimerise a ketone', () => {
+	// Corey & Venkateswarlu, J. Am. Chem. Soc. 1972, 94, 6190 (TBSCl, imidazole, DMF); DBU
+	// epimerises α-stereocentres of ketones (Clayden, Greeves & Warren, 2nd ed., enolisation) —
+	// from memory.
+	const silylation = {
+		substrate: 'C[C@@H]1CCCC(=O)[C@H]1CCO',
+		product: 'C[C@@H]1CCCC(=O)[C@H]1CCO[Si](C)(C)C(C)(C)C'
+	};
+	const onKetone = (reagents: string) =>
+		flagged({ ...silylation, reagents }).filter((f) => f.includes(' ketone '));
+
+	it('leaves the ketone quiet under TBSCl with imidazole, or with DMAP and pyridine', () => {
+		expect(onKetone('TBSCl, imidazole, DMF')).toEqual([]);
+		expect(onKetone('TBSCl, DMAP, pyridine')).toEqual([]);
+		// TBSOTf itself is a silyl triflate that can make a silyl enol ether: its caution stays.
+		expect(onKetone('TBSOTf, 2,6-lutidine, CH2Cl2, -78 °C')).toEqual(['caution ketone lewis-acid']);
+	});
+
+	it('keeps the caution where DBU is in the flask', () => {
+		expect(onKetone('TBSCl, DBU, CH2Cl2')).toEqual(['caution ketone base-amine']);
+	});
+});
