@@ -21,6 +21,7 @@ import { referenceMolecules } from '../reference/molecules';
 import { PROTECTING_GROUP_IDS } from '../../src/lib/rules/ids';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
 import { routeOG2031 } from '../../scripts/bench/route-og2031';
+import { OXYGEN_PG_IDS } from '../factories/pg-ids';
 
 const of = (smiles: string) => perceive(readStructure(smiles).molecule);
 const pgIds = (p: Perception) => p.protectingGroups.map((pg) => pg.id).sort();
@@ -59,23 +60,6 @@ const PG_IDS = [
 	'allyl-ester',
 	'TMS-alkyne',
 	'S-Tr'
-];
-
-// The oxygen PGs of issue 11 (rules/protecting-groups.json); pinned by id, not by total, since
-// other parts of issue 11 add PGs too.
-const OXYGEN_PG_IDS = [
-	'methyl-ether',
-	'allyl-ether',
-	'SEM',
-	'MEM',
-	'BOM',
-	'tBu-ether',
-	'TIPDS',
-	'DTBS',
-	'PMP-acetal',
-	'cyclic-carbonate',
-	'ethyl-ester',
-	'PMB-ester'
 ];
 
 describe('the rule table', () => {

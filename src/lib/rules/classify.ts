@@ -191,6 +191,9 @@ function scan(
 	return taken;
 }
 
+const EDGE_PUNCTUATION = /^[\s.:/+&~–-]+|[\s.:/+&~–-]+$/gu;
+const PARTNER: Record<string, string> = { ')': '(', ']': '[', '}': '{' };
+
 /**
  * An unrecognised fragment as the chemist should read it back: a bracketed amount dropped
  * ("OG-Cat 7 (5 mol%)" → "OG-Cat 7"), brackets without a partner dropped, and a name whose
@@ -202,9 +205,6 @@ function trimFragment(fragment: string): string {
 	);
 	return dropUnpairedBrackets(withoutAmounts).replace(EDGE_PUNCTUATION, '');
 }
-
-const EDGE_PUNCTUATION = /^[\s.:/+&~–-]+|[\s.:/+&~–-]+$/gu;
-const PARTNER: Record<string, string> = { ')': '(', ']': '[', '}': '{' };
 
 function dropUnpairedBrackets(text: string): string {
 	const chars = [...text];

@@ -5,21 +5,21 @@
 import { z } from 'zod';
 import { formatIssue, formatZodIssues, RuleTableError } from './issues';
 import { FREE_GROUP_ALIASES, FREE_GROUP_IDS, type FreeGroupAlias, type FreeGroupId } from './ids';
-import { conditionIdSchema, protectingGroupIdSchema, stabilityRatingSchema } from './schemas';
+import {
+	conditionIdSchema,
+	idEnum,
+	protectingGroupIdSchema,
+	stabilityRatingSchema
+} from './schemas';
 
 const text = z.string().trim().min(1, 'must not be empty');
 
 const groupIdsAccepted = [
 	...FREE_GROUP_IDS,
 	...(Object.keys(FREE_GROUP_ALIASES) as FreeGroupAlias[])
-];
+] as const;
 /** A free group id, or a retired id that stands for the groups it was split into (`aryl-halide`). */
-const overrideGroupIdSchema = z.enum(groupIdsAccepted as [string, ...string[]], {
-	error: (issue) =>
-		issue.input === undefined
-			? 'missing free group id'
-			: `unknown free group id ${JSON.stringify(issue.input)} (valid: ${groupIdsAccepted.join(', ')})`
-});
+const overrideGroupIdSchema = idEnum('free group id', groupIdsAccepted);
 const isAlias = (id: string): id is FreeGroupAlias => Object.hasOwn(FREE_GROUP_ALIASES, id);
 
 /**

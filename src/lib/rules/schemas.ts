@@ -15,7 +15,7 @@ import {
 } from './ids';
 
 /** An enum whose error names the bad value and lists the valid ones. */
-function idEnum<const T extends readonly [string, ...string[]]>(what: string, values: T) {
+export function idEnum<const T extends readonly [string, ...string[]]>(what: string, values: T) {
 	return z.enum(values, {
 		error: (issue) =>
 			issue.input === undefined

@@ -116,9 +116,23 @@ function prepare(data: RuleData): Base {
 }
 
 /**
- * A PG's default rating under one class, refined for the reagents that brought it where the row
- * names them (each reagent its own rating, else the class rating; the worst one applies).
+ * The answer for the reagents that brought a class: each reagent its own entry where the row
+ * names it, else the row's answer; the worst one applies. No starting value, so a reagent's own
+ * rating may be milder than the row's (PPTS and TBDPS; TFA and a tertiary alcohol).
  */
+function worstForReagents<A extends { rating: string }>(
+	rowAnswer: A,
+	reagents: readonly string[],
+	own: (reagent: string) => A | undefined,
+	severity: Readonly<Record<string, number>>
+): A {
+	if (reagents.length === 0) return rowAnswer;
+	return reagents
+		.map((name) => own(name) ?? rowAnswer)
+		.reduce((worst, next) => (severity[next.rating]! > severity[worst.rating]! ? next : worst));
+}
+
+/** A PG's default rating under one class, refined for the reagents that brought it. */
 function withReagentRatings(
 	row: ProtectingGroupConditions,
 	condition: ConditionId,
@@ -129,37 +143,39 @@ function withReagentRatings(
 	const classAnswer: StabilityAnswer = onSite
 		? { rating, source: row.source, layer: 'default', reason: onSite.reason, site: onSite.site }
 		: { rating, source: row.source, layer: 'default' };
-	if (reagents.length === 0) return classAnswer;
-	const answers = reagents.map((name): StabilityAnswer => {
-		const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
-		return entry
-			? { rating: entry.rating, reason: entry.reason, source: row.source, layer: 'default' }
-			: classAnswer;
-	});
-	// No starting value: a reagent's own rating may be milder than the class's (PPTS and TBDPS).
-	return answers.reduce((worst, next) =>
-		SEVERITY[next.rating] > SEVERITY[worst.rating] ? next : worst
+	return worstForReagents(
+		classAnswer,
+		reagents,
+		(name) => {
+			const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
+			return (
+				entry && {
+					rating: entry.rating,
+					reason: entry.reason,
+					source: row.source,
+					layer: 'default'
+				}
+			);
+		},
+		SEVERITY
 	);
 }
 
 const REACTS: Record<ReactivityRowRating, number> = { none: 0, caution: 1, reacts: 2 };
 
 /**
- * A free group's default rating under one class, refined for the reagents that brought it where
- * the row names them (each reagent its own rating, else the row's; the worst one applies), e.g.
+ * A free group's default rating under one class, refined for the reagents that brought it, e.g.
  * a tertiary alcohol under TFA alone is `none`, under TFA and H2SO4 the row's `caution`.
  */
 function reactivityForReagents(
 	entry: ReactivityEntry,
 	reagents: readonly string[]
 ): { rating: ReactivityRowRating; reason: string } {
-	const row = { rating: entry.rating, reason: entry.reason };
-	if (reagents.length === 0 || entry.reagentRatings.length === 0) return row;
-	const answers = reagents.map(
-		(name) => entry.reagentRatings.find((r) => r.reagent === name) ?? row
-	);
-	return answers.reduce((worst, next) =>
-		REACTS[next.rating] > REACTS[worst.rating] ? next : worst
+	return worstForReagents<{ rating: ReactivityRowRating; reason: string }>(
+		{ rating: entry.rating, reason: entry.reason },
+		reagents,
+		(name) => entry.reagentRatings.find((r) => r.reagent === name),
+		REACTS
 	);
 }
 
