@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import conditions from '../../rules/conditions.json';
 import protectingGroups from '../../rules/protecting-groups.json';
+import preferences from '../../rules/preferences.json';
 import reactivity from '../../rules/reactivity.json';
 import reagents from '../../rules/reagents.json';
 import {
@@ -14,7 +15,7 @@ import {
 } from '../../src/lib/rules';
 
 const good = (): RawRuleFiles =>
-	structuredClone({ conditions, reagents, reactivity, protectingGroups });
+	structuredClone({ conditions, reagents, reactivity, protectingGroups, preferences });
 
 /** The problems a broken copy of the files produces. */
 function problemsOf(raw: RawRuleFiles): readonly string[] {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import conditions from '../../rules/conditions.json';
 import protectingGroups from '../../rules/protecting-groups.json';
+import preferences from '../../rules/preferences.json';
 import reactivity from '../../rules/reactivity.json';
 import reagents from '../../rules/reagents.json';
 import { parseRuleFiles, RuleTableError, type RawRuleFiles } from '../../src/lib/rules';
@@ -66,7 +67,7 @@ describe('spelling: a bare metal stands alone only beside amounts and forms', ()
 
 describe('rule-table loader: formulas that differ only in case are two spellings', () => {
 	const good = (): RawRuleFiles =>
-		structuredClone({ conditions, reagents, reactivity, protectingGroups });
+		structuredClone({ conditions, reagents, reactivity, protectingGroups, preferences });
 
 	it('loads the bundled files, which list both CoCl2 and COCl2', () => {
 		const names = (reagents as { name: string; synonyms: string[] }[])

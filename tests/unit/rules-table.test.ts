@@ -95,7 +95,7 @@ describe('rule table: protecting groups come off the way their rows say', () => 
 		});
 
 		it(`${pg.id}: its install and removal reagents read as the conditions listed`, () => {
-			for (const method of [pg.install, ...pg.remove]) {
+			for (const method of [...pg.install.methods, ...pg.remove]) {
 				const reads = method.reagents.map((text) => table.conditionsForReagents(text));
 				for (const [i, read] of reads.entries()) {
 					const reagents = method.reagents[i];

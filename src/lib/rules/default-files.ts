@@ -3,6 +3,7 @@
  * tests and scripts read the same data; nothing touches the file system at runtime.
  */
 import conditions from '../../../rules/conditions.json';
+import preferences from '../../../rules/preferences.json';
 import protectingGroups from '../../../rules/protecting-groups.json';
 import reactivity from '../../../rules/reactivity.json';
 import reagents from '../../../rules/reagents.json';
@@ -12,5 +13,6 @@ export const DEFAULT_RULE_FILES: RawRuleFiles = {
 	conditions,
 	reagents,
 	reactivity,
-	protectingGroups
+	protectingGroups,
+	preferences
 };

@@ -218,3 +218,20 @@ export function isConditionId(value: unknown): value is ConditionId {
  */
 export const PG_SITES = ['aromatic-nitrogen', 'aryl-oxygen'] as const;
 export type PgSite = (typeof PG_SITES)[number];
+
+/**
+ * A protecting group's own drawbacks, which the planner weighs above a bystander caution
+ * (rules/protecting-groups.json `drawbacks`): `new-stereocentre` makes diastereomers on a chiral
+ * substrate (THP) and counts only there; `fragile` is lost on silica, in work-up or in traces of
+ * acid (TMS, dimethyl acetal); `migrates` moves between neighbouring OH groups (acetate on a diol).
+ */
+export const PG_DRAWBACKS = ['new-stereocentre', 'fragile', 'migrates'] as const;
+export type PgDrawback = (typeof PG_DRAWBACKS)[number];
+
+/**
+ * Why a reagent is more than a routine hazard to the people who use it (rules/reagents.json
+ * `concerns`); a PG recipe that needs such a reagent carries it as a drawback of the recipe,
+ * e.g. MOMCl (`carcinogen`) or HgCl2 (`toxic-metal`).
+ */
+export const REAGENT_CONCERNS = ['carcinogen', 'toxic-metal', 'highly-toxic', 'explosive', 'pyrophoric'] as const;
+export type ReagentConcern = (typeof REAGENT_CONCERNS)[number];

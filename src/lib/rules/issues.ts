@@ -50,5 +50,6 @@ export const RULE_FILES = {
 	conditions: 'rules/conditions.json',
 	reagents: 'rules/reagents.json',
 	reactivity: 'rules/reactivity.json',
-	protectingGroups: 'rules/protecting-groups.json'
+	protectingGroups: 'rules/protecting-groups.json',
+	preferences: 'rules/preferences.json'
 } as const;

@@ -6,8 +6,10 @@ import { z } from 'zod';
 import {
 	CONDITION_IDS,
 	FREE_GROUP_IDS,
+	PG_DRAWBACKS,
 	PG_SITES,
 	PROTECTING_GROUP_IDS,
+	REAGENT_CONCERNS,
 	REACTIVITY_ROW_RATINGS,
 	REAGENT_KINDS,
 	REAGENT_TAGS,
@@ -81,6 +83,11 @@ export const reagentSchema = z
 		when: z.array(reagentContextSchema).min(1).optional(),
 		exactCase: z.array(text).optional(),
 		hazard: text.optional(),
+		/**
+		 * What makes the reagent more than a routine hazard (carcinogen, toxic metal, …): a PG
+		 * recipe that uses it carries it as a drawback when the planner ranks plans.
+		 */
+		concerns: z.array(idEnum('reagent concern', REAGENT_CONCERNS)).min(1).optional(),
 		/** Where the row comes from: a book and chapter, a paper, "common practice" or "from memory". */
 		source: text.optional()
 	})
@@ -178,8 +185,43 @@ export const whereOnSchema = z
 		});
 	});
 
-/** The usual install method, with the transforms that draw its result. */
-export const installSchema = methodSchema.extend({ transforms: z.array(transformSchema).min(1) });
+/**
+ * Which free groups an install recipe's reagent converts when they are present, e.g. TBDPSCl,
+ * imidazole takes primary and secondary alcohols and phenols (`takes`) and a primary alcohol
+ * before a secondary one (`prefers`). `takes` defaults to every group the PG's transforms draw;
+ * groups it takes and does not tell apart all get the PG (DHP takes every free OH). A recipe is
+ * offered only for a group it takes.
+ */
+export const installMethodSchema = methodSchema.extend({
+	takes: z.array(freeGroupIdSchema).min(1).optional(),
+	prefers: z
+		.array(
+			z.strictObject({
+				group: freeGroupIdSchema,
+				over: z.array(freeGroupIdSchema).min(1),
+				reason: text
+			})
+		)
+		.default([])
+});
+
+/**
+ * How a PG goes on: the transforms that draw its result (one per protected group type) and the
+ * install recipes, usual one first; the planner tries each and uses the one that fits the molecule.
+ */
+export const installSchema = z.strictObject({
+	transforms: z.array(transformSchema).min(1),
+	methods: z.array(installMethodSchema).min(1)
+});
+
+/**
+ * A PG's own drawback, weighed above a bystander caution when plans are ranked, e.g.
+ * `{ kind: 'fragile', note: 'Dimethyl acetals hydrolyse in traces of aqueous acid …' }`.
+ */
+export const pgDrawbackSchema = z.strictObject({
+	kind: idEnum('drawback', PG_DRAWBACKS),
+	note: text
+});
 
 /**
  * The condition half of a protecting-group row (rules/protecting-groups.json): `install` is the
@@ -219,18 +261,34 @@ export const protectingGroupConditionsSchema = z
 			.default([]),
 		whereOn: whereOnSchema,
 		notes: z.array(text),
-		/** Installing it makes a new stereocentre (THP): said, and counted as a caution, on a chiral substrate. */
-		newStereocentre: text.optional(),
+		/** Its own drawbacks (a new stereocentre, fragility); `new-stereocentre` counts only on a chiral substrate. */
+		drawbacks: z.array(pgDrawbackSchema).default([]),
 		source: text
 	})
 	.loose();
 export const protectingGroupConditionsFileSchema = z.array(protectingGroupConditionsSchema);
+
+/**
+ * One row of rules/preferences.json: for these group types, the PGs a chemist reaches for first
+ * when plans are otherwise equal (robustness and commonness), best first, e.g. TBS before TES
+ * for an alcohol. PGs not listed come after the listed ones.
+ */
+export const preferenceSchema = z.strictObject({
+	groups: z.array(freeGroupIdSchema).min(1),
+	order: z.array(protectingGroupIdSchema).min(1),
+	reason: text,
+	source: text
+});
+export const preferencesFileSchema = z.array(preferenceSchema);
 
 export type Condition = z.output<typeof conditionSchema>;
 export type Reagent = z.output<typeof reagentSchema>;
 export type ReagentContext = z.output<typeof reagentContextSchema>;
 export type ReactivityEntry = z.output<typeof reactivitySchema>;
 export type Method = z.output<typeof methodSchema>;
+export type InstallMethod = z.output<typeof installMethodSchema>;
+export type PgDrawbackEntry = z.output<typeof pgDrawbackSchema>;
+export type Preference = z.output<typeof preferenceSchema>;
 export type Transform = z.output<typeof transformSchema>;
 export type ProtectingGroupConditions = z.output<typeof protectingGroupConditionsSchema>;
 export type WhereOnEntry = z.output<typeof whereOnSchema>[number];

@@ -20,6 +20,7 @@ import type {
 import { parseOverrides, type RuleOverrides, type RuleOverridesInput } from './overrides';
 import type {
 	Condition,
+	Preference,
 	ProtectingGroupConditions,
 	ReactivityEntry,
 	Reagent,
@@ -51,6 +52,8 @@ export interface RuleTable {
 	readonly reagents: readonly Reagent[];
 	readonly reactivity: readonly ReactivityEntry[];
 	readonly protectingGroups: readonly ProtectingGroupConditions[];
+	/** Which PGs a chemist reaches for first, per group type (rules/preferences.json). */
+	readonly preferences: readonly Preference[];
 	readonly overrides: RuleOverrides | null;
 	condition(id: ConditionId): Condition;
 	protectingGroup(id: ProtectingGroupId): ProtectingGroupConditions;
@@ -198,6 +201,7 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 		reagents: base.data.reagents,
 		reactivity: base.data.reactivity,
 		protectingGroups: base.data.protectingGroups,
+		preferences: base.data.preferences,
 		overrides,
 		condition(id) {
 			const found = base.conditions.get(id);

@@ -7,13 +7,16 @@ import type { z } from 'zod';
 import { CONDITION_IDS, PROTECTING_GROUP_IDS } from './ids';
 import { formatIssue, formatZodIssues, RuleTableError, RULE_FILES } from './issues';
 import { checkReactivityReagentRatings, checkReagentRatings } from './validate-reagent-ratings';
+import { checkInstallMethods, checkPreferences } from './validate-planning';
 import { spellingKey } from './spelling';
 import {
 	conditionsFileSchema,
+	preferencesFileSchema,
 	protectingGroupConditionsFileSchema,
 	reactivityFileSchema,
 	reagentsFileSchema,
 	type Condition,
+	type Preference,
 	type ProtectingGroupConditions,
 	type ReactivityEntry,
 	type Reagent
@@ -28,6 +31,7 @@ export interface RuleData {
 	reagents: Reagent[];
 	reactivity: ReactivityEntry[];
 	protectingGroups: ProtectingGroupConditions[];
+	preferences: Preference[];
 }
 
 function parseFile<S extends z.ZodType>(schema: S, file: string, raw: unknown, problems: string[]) {
@@ -125,6 +129,12 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 		raw.protectingGroups,
 		problems
 	);
+	const preferences = parseFile(
+		preferencesFileSchema,
+		RULE_FILES.preferences,
+		raw.preferences,
+		problems
+	);
 
 	// Other files name condition classes through the schema's enum; this makes sure each of those
 	// ids is also defined (label, description) in conditions.json, so every reference resolves.
@@ -157,11 +167,20 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 		checkReactivityReagentRatings(reactivity, reagents, conditions, problems);
 	if (protectingGroups) checkTransformCoverage(protectingGroups, problems);
 	if (reactivity) checkReactivityPairs(reactivity, problems);
+	if (protectingGroups) checkInstallMethods(protectingGroups, problems);
+	if (protectingGroups && preferences) checkPreferences(protectingGroups, preferences, problems);
 
-	if (problems.length > 0 || !conditions || !reagents || !reactivity || !protectingGroups) {
+	if (
+		problems.length > 0 ||
+		!conditions ||
+		!reagents ||
+		!reactivity ||
+		!protectingGroups ||
+		!preferences
+	) {
 		throw new RuleTableError(problems);
 	}
-	return { conditions, reagents, reactivity, protectingGroups };
+	return { conditions, reagents, reactivity, protectingGroups, preferences };
 }
 
 /** A `when` tag that no reagent carries could never apply: a typo, or a tag not yet given out. */

@@ -40,7 +40,13 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 					context: m.context && { reagent: m.context.reagent, why: m.context.why }
 				});
 		}
-		origins.set(id, { reagents: [...bringers.values()], explicit: explicit.includes(id) });
+		// An explicit class that a named reagent also brings is judged by that reagent (TBSCl,
+		// imidazole tagged `base-amine` is imidazole's base-amine): only a class no reagent brings
+		// stands for the whole class.
+		origins.set(id, {
+			reagents: [...bringers.values()],
+			explicit: explicit.includes(id) && bringers.size === 0
+		});
 	}
 
 	const substrates = Array.isArray(step.substrate) ? step.substrate : [step.substrate];

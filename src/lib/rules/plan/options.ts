@@ -85,18 +85,20 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of ${tree.stepName(killer.step)} would remove it`;
 			return { pg: row.id, options: [], rejected, killedAt: killer.step };
 		}
-		const installConditions = [...row.install.conditions];
-		const install = { reagents: row.install.reagents[0] ?? '', conditions: installConditions };
+		const method = row.install.methods[0]!;
+		const installConditions = [...method.conditions];
+		const install = { reagents: method.reagents[0] ?? '', conditions: installConditions };
 		const installHarm = harm(rules, tree, needs, index, need.installAt, 'install', install.reagents, installConditions);
 		if (installHarm.blocked) return { pg: row.id, options: [], rejected: `${row.id} rejected: installing it (${install.reagents}) ${installHarm.blocked}` };
 		// A PG that makes a new stereocentre turns a chiral substrate into a mixture of diastereomers.
-		const diastereomers = row.newStereocentre !== undefined && isChiral(tree.byId.get(need.installAt)!.structure);
+		const stereocentre = row.drawbacks.find((d) => d.kind === 'new-stereocentre');
+		const diastereomers = stereocentre !== undefined && isChiral(tree.byId.get(need.installAt)!.structure);
 		const options: Option[] = [];
 		let firstRemovalProblem = '';
 		for (const point of points) {
-			for (const method of row.remove) {
-				const reagents = method.reagents[0] ?? '';
-				const removalHarm = harm(rules, tree, needs, index, point.node, 'removal', reagents, [...method.conditions]);
+			for (const removal of row.remove) {
+				const reagents = removal.reagents[0] ?? '';
+				const removalHarm = harm(rules, tree, needs, index, point.node, 'removal', reagents, [...removal.conditions]);
 				if (removalHarm.blocked) {
 					firstRemovalProblem ||= `removing it (${reagents}) ${removalHarm.blocked}`;
 					continue;
@@ -105,11 +107,13 @@ export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: Route
 					pg: row.id,
 					transform,
 					install,
-					removal: { reagents, conditions: [...method.conditions] },
+					removal: { reagents, conditions: [...removal.conditions] },
 					removeAt: point.node,
 					cautions: point.cautions + installHarm.cautions + removalHarm.cautions + (diastereomers ? 1 : 0),
-					harshness: harshnessOf(installConditions) + harshnessOf([...method.conditions]),
-					why: diastereomers ? row.newStereocentre! : ''
+					harshness: harshnessOf(installConditions) + harshnessOf([...removal.conditions]),
+					drawbacks: diastereomers ? [stereocentre] : [],
+					preference: 0,
+					why: diastereomers ? stereocentre.note : ''
 				});
 			}
 		}

@@ -200,7 +200,8 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 			installAt,
 			freeAt: track.end,
 			removableFrom,
-			attackedAt
+			attackedAt,
+			level: 'reacts'
 		});
 	}
 	return needs;

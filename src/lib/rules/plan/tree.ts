@@ -92,11 +92,11 @@ export function stepConditions(
 			...classified.conditions
 		])
 	];
-	return ids.map((id) => ({
-		id,
-		reagents: [
+	return ids.map((id) => {
+		const reagents = [
 			...new Set(classified.matched.filter((m) => m.conditions.includes(id)).map((m) => m.reagent))
-		],
-		explicit: explicit.includes(id)
-	}));
+		];
+		// As in the check: a class some reagent brings is judged by its reagents, even if also set explicitly.
+		return { id, reagents, explicit: explicit.includes(id) && reagents.length === 0 };
+	});
 }

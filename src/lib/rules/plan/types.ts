@@ -2,6 +2,7 @@
 // the ranked answer in the shape of `POST /api/plan`.
 
 import type { RouteDocument } from '../../route/document';
+import type { PgDrawback, ReagentConcern } from '../ids';
 
 /** One free-group instance followed through the route, from the intermediate where it is first seen. */
 export type Need = {
@@ -23,7 +24,19 @@ export type Need = {
 	removableFrom: string;
 	/** Ids of the steps that attack it while it stands by. */
 	attackedAt: string[];
+	/**
+	 * `reacts`: a step's conditions react with it (rated `reacts`), so every plan masks it.
+	 * `caution`: only caution ratings (an N–H that consumes a Grignard reagent): plans offer to
+	 * mask it and say why, and the answer never reads "nothing needs masking".
+	 */
+	level: 'reacts' | 'caution';
 };
+
+/**
+ * A drawback of a PG or of the recipe that puts it on or takes it off, weighed above a bystander
+ * caution, e.g. `{ kind: 'toxic-metal', note: 'HgCl2 removal: mercury waste' }`.
+ */
+export type Drawback = { kind: PgDrawback | ReagentConcern; note: string };
 
 /** A way to mask one need: the PG and one install and one removal option. */
 export type Option = {
@@ -36,6 +49,10 @@ export type Option = {
 	removeAt: string;
 	cautions: number;
 	harshness: number;
+	/** The PG's own drawbacks that apply here and those of the recipes chosen, e.g. THP's new stereocentre on a chiral alcohol. */
+	drawbacks: Drawback[];
+	/** Place of the PG in the preference list for the need's group (rules/preferences.json); 0 is first. */
+	preference: number;
 	/** A drawback to say alongside the choice, e.g. THP's new stereocentre on a chiral alcohol; often empty. */
 	why: string;
 };
