@@ -227,3 +227,29 @@ describe('weak amine bases do not epimerise a ketone', () => {
 		expect(onKetone('TBSCl, DBU, CH2Cl2')).toEqual(['caution ketone base-amine']);
 	});
 });
+
+describe('a class set by hand that a named reagent also brings is judged by that reagent', () => {
+	// The planner writes its recipes' classes onto the steps it adds ("TBSCl, imidazole, DMF" with
+	// `base-amine`): such a step must read as the chemist's own step with the same text. Corey &
+	// Venkateswarlu, J. Am. Chem. Soc. 1972, 94, 6190 (imidazole beside ketones) — from memory.
+	const silylation = {
+		substrate: 'C[C@@H]1CCCC(=O)[C@H]1CCO',
+		product: 'C[C@@H]1CCCC(=O)[C@H]1CCO[Si](C)(C)C(C)(C)C'
+	};
+
+	it('reads imidazole tagged base-amine as imidazole', () => {
+		const step = {
+			...silylation,
+			reagents: 'TBSCl, imidazole, DMF',
+			conditions: ['acylating', 'base-amine']
+		};
+		expect(flagged(step).filter((f) => f.includes(' ketone '))).toEqual([]);
+	});
+
+	it('still reads a class that no reagent brings as the whole class', () => {
+		const step = { ...silylation, reagents: 'TBSCl, DMF', conditions: ['acylating', 'base-amine'] };
+		expect(flagged(step).filter((f) => f.includes(' ketone '))).toEqual([
+			'caution ketone base-amine'
+		]);
+	});
+});

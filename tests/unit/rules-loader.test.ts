@@ -250,3 +250,15 @@ describe('rule-table override layer', () => {
 		}).toThrow(TypeError);
 	});
 });
+
+describe('rule-table loader: usuallyMasked', () => {
+	it('accepts it only on a caution row', () => {
+		const raw = good();
+		const rows = raw.reactivity as { group: string; condition: string; rating: string; usuallyMasked?: boolean }[];
+		const index = rows.findIndex((r) => r.rating === 'reacts');
+		rows[index]!.usuallyMasked = true;
+		expect(problemsOf(raw)).toEqual([
+			`rules/reactivity.json: [${index}].usuallyMasked: only a caution row can say the group is usually masked (a reacts row always is)`
+		]);
+	});
+});

@@ -233,5 +233,11 @@ export type PgDrawback = (typeof PG_DRAWBACKS)[number];
  * `concerns`); a PG recipe that needs such a reagent carries it as a drawback of the recipe,
  * e.g. MOMCl (`carcinogen`) or HgCl2 (`toxic-metal`).
  */
-export const REAGENT_CONCERNS = ['carcinogen', 'toxic-metal', 'highly-toxic', 'explosive', 'pyrophoric'] as const;
+export const REAGENT_CONCERNS = [
+	'carcinogen',
+	'toxic-metal',
+	'highly-toxic',
+	'explosive',
+	'pyrophoric'
+] as const;
 export type ReagentConcern = (typeof REAGENT_CONCERNS)[number];

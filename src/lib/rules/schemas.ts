@@ -125,21 +125,32 @@ export const reagentsFileSchema = z.array(reagentSchema);
  * One row of rules/reactivity.json: a free group under a condition class. A finer class with no
  * row of its own inherits the broader class's row; `none` (finer classes only) says it does not.
  */
-export const reactivitySchema = z.strictObject({
-	group: freeGroupIdSchema,
-	condition: conditionIdSchema,
-	rating: reactivityRatingSchema,
-	reason: text,
-	source: text,
-	/**
-	 * Exceptions for named reagents (names as in rules/reagents.json) that bring this class, e.g.
-	 * a tertiary alcohol `caution` under strong acid but `none` under TFA in CH2Cl2. Where a step
-	 * has several reagents of the class, the worst rating among them applies.
-	 */
-	reagentRatings: z
-		.array(z.strictObject({ reagent: text, rating: reactivityRatingSchema, reason: text }))
-		.default([])
-});
+export const reactivitySchema = z
+	.strictObject({
+		group: freeGroupIdSchema,
+		condition: conditionIdSchema,
+		rating: reactivityRatingSchema,
+		reason: text,
+		source: text,
+		/**
+		 * Exceptions for named reagents (names as in rules/reagents.json) that bring this class, e.g.
+		 * a tertiary alcohol `caution` under strong acid but `none` under TFA in CH2Cl2. Where a step
+		 * has several reagents of the class, the worst rating among them applies.
+		 */
+		reagentRatings: z
+			.array(z.strictObject({ reagent: text, rating: reactivityRatingSchema, reason: text }))
+			.default([]),
+		/**
+		 * On a `caution` row: chemists usually mask the group rather than accept the caution (a free
+		 * amine beside a Swern oxidation or a Grignard reagent), so the planner's first plans mask it;
+		 * without it the first plan leaves the group free and later plans offer the mask.
+		 */
+		usuallyMasked: z.literal(true).optional()
+	})
+	.refine((row) => !row.usuallyMasked || row.rating === 'caution', {
+		path: ['usuallyMasked'],
+		message: 'only a caution row can say the group is usually masked (a reacts row always is)'
+	});
 export const reactivityFileSchema = z.array(reactivitySchema);
 
 /** A way to install or remove a protecting group: typical reagents and the classes they bring. */

@@ -45,6 +45,8 @@ export interface ReactivityAnswer {
 	reason: string;
 	source: string;
 	layer: RuleLayer;
+	/** A caution chemists usually mask for rather than accept (the row's `usuallyMasked`). */
+	usuallyMasked?: true;
 }
 
 export interface RuleTable {
@@ -257,7 +259,9 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 				if (!entry) continue;
 				const { rating, reason } = reactivityForReagents(entry, reagents);
 				if (rating === 'none') return undefined;
-				return { rating, reason, source: entry.source, layer: 'default' };
+				const answer: ReactivityAnswer = { rating, reason, source: entry.source, layer: 'default' };
+				if (rating === 'caution' && entry.usuallyMasked) answer.usuallyMasked = true;
+				return answer;
 			}
 			return undefined;
 		},

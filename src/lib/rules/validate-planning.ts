@@ -68,7 +68,9 @@ export function checkPreferences(
 		const listed = new Set<string>();
 		row.order.forEach((id, i) => {
 			if (listed.has(id))
-				problems.push(formatIssue(RULE_FILES.preferences, [index, 'order', i], `${id} listed twice`));
+				problems.push(
+					formatIssue(RULE_FILES.preferences, [index, 'order', i], `${id} listed twice`)
+				);
 			listed.add(id);
 			const pg = byId.get(id);
 			const missing = pg ? row.groups.filter((g) => !protectsOf(pg).includes(g)) : [];

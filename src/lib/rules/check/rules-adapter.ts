@@ -24,9 +24,9 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 		reactivity: (group, condition, reagents) => {
 			// Perception may know groups the reactivity table has no row for: no row, no problem known.
 			const answer = table.reactivityOf(group as FreeGroupId, condition as ConditionId, reagents);
-			return answer
-				? { rating: answer.rating, reason: answer.reason, source: answer.source }
-				: null;
+			if (!answer) return null;
+			const { rating, reason, source, usuallyMasked } = answer;
+			return usuallyMasked ? { rating, reason, source, usuallyMasked } : { rating, reason, source };
 		},
 		// Lower-case the first letter only, for mid-sentence use: "the free alkene (non-aromatic C=C)".
 		groupLabel: (group) => lowerFirst(groupLabels.get(group) ?? group),

@@ -97,7 +97,13 @@ export type CheckRules = {
 		groupId: string,
 		conditionId: string,
 		reagents?: readonly string[]
-	): { rating: 'reacts' | 'caution'; reason: string; source: string } | null;
+	): {
+		rating: 'reacts' | 'caution';
+		reason: string;
+		source: string;
+		/** A caution chemists usually mask for (the planner's first plans mask it). */
+		usuallyMasked?: true;
+	} | null;
 	groupLabel(groupId: string): string;
 	classify(reagents: string): {
 		conditions: string[];

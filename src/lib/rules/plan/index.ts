@@ -3,6 +3,7 @@
 
 import type { RouteDocument } from '../../route/document';
 import { checkRulesFrom } from '../check/rules-adapter';
+import { cannotMask, leftFree, maskedBecause } from './cautions';
 import type { CheckRules } from '../check/types';
 import { loadRuleTable, type RuleTable } from '../table';
 import { clearDrawCache } from './draw';
@@ -29,17 +30,60 @@ const MAX_PLANS = 5;
 // More joint choices than plans are drawn, because the re-check may still drop some.
 const SEARCH_WIDTH = 20;
 
+type Context = { doc: RouteDocument; table: RuleTable; rules: CheckRules; tree: RouteTree; verify: Verify };
+type Solved = { plans: Plan[]; unsolved?: Unsolved[] };
+
 /** Ranked plans for a route, e.g. a ketone standing by a Grignard step → dioxolane on before it, off at the end. */
 export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer {
 	const table = options.table ?? loadRuleTable();
 	const rules = options.rules ?? checkRulesFrom(table);
 	const tree = routeTree(doc, rules);
 	if (typeof tree === 'string') return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: tree }] };
+	const ctx: Context = { doc, table, rules, tree, verify: options.verify };
+	const limit = options.plans ?? MAX_PLANS;
 	const needs = findNeeds(tree, rules);
+	const required = needs.filter((n) => n.level === 'reacts');
+	const cautions = needs.filter((n) => n.level === 'caution');
+	if (cautions.length === 0) return solve(ctx, required, limit);
+	// Caution-level needs that some PG can mask (judged beside the others) are offered a mask;
+	// the rest stay free and every plan says so.
+	const maskable = cautions.filter((_, k) => judgeCandidates(table, rules, tree, needs, required.length + k).some((j) => j.options.length));
+	const cannot = cautions.filter((n) => !maskable.includes(n)).map((n) => cannotMask(rules, tree, n, 'no protecting group in the rule table fits it here'));
+	const usual = maskable.filter((n) => n.usuallyMasked);
+	const other = maskable.filter((n) => !n.usuallyMasked);
+	// Tiers, best first: mask what chemists usually mask; leave every caution free; mask them all.
+	// Each tier holds the one before it or is held by it, so equal sizes mean equal tiers.
+	const tiers = [[...required, ...usual], required, [...required, ...usual, ...other]].filter(
+		(tier, i, all) => all.findIndex((t) => t.length === tier.length) === i
+	);
+	const plans: Plan[] = [];
+	const seen = new Set<string>();
+	let firstUnsolved: Solved | undefined;
+	tiers.forEach((tier, i) => {
+		const room = limit - plans.length - (tiers.length - 1 - i);
+		if (room <= 0) return;
+		const notes = [...maskable.filter((n) => !tier.includes(n)).map((n) => leftFree(rules, tree, n)), ...cannot];
+		const solved = solve(ctx, tier, room, notes);
+		if (!solved.plans.length) firstUnsolved ??= solved;
+		for (const plan of solved.plans) {
+			const key = plan.protections.map((p) => `${p.protectingGroup}@${p.atoms.join(',')}`).join('|');
+			if (!seen.has(key)) plans.push(plan);
+			seen.add(key);
+		}
+	});
+	if (plans.length) return { plans: plans.map((plan, i) => ({ ...plan, rank: i + 1 })) };
+	return firstUnsolved ?? { plans: [] };
+}
+
+/** The plans that mask exactly `needs`, best first, each re-checked; `notes` are added to every plan's rationale. */
+function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = []): Solved {
+	const { doc, table, rules, tree } = ctx;
 	if (needs.length === 0) {
-		const problem = options.verify(doc);
+		const problem = ctx.verify(doc);
 		if (problem) return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: `No free group needs masking, but the route still clashes: ${problem}` }] };
-		return { plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale: ['No step attacks a free group that stands by: nothing needs masking.'] }] };
+		// Never "nothing needs masking" while cautions stand: the notes name them.
+		const rationale = notes.length ? notes : ['No step attacks a free group that stands by: nothing needs masking.'];
+		return { plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale }] };
 	}
 	const judged = needs.map((_, i) => judgeCandidates(table, rules, tree, needs, i));
 	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, tree, need, judged[i]!)]));
@@ -48,9 +92,9 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 	const plans: Plan[] = [];
 	let firstProblem: string | null = null;
 	for (const choice of searchChoices(rules, needs, optionLists, SEARCH_WIDTH)) {
-		if (plans.length >= (options.plans ?? MAX_PLANS)) break;
+		if (plans.length >= limit) break;
 		const drawn = drawRoute(doc, tree, needs, choice.options);
-		const problem = options.verify(drawn.route);
+		const problem = ctx.verify(drawn.route);
 		if (problem) {
 			firstProblem ??= problem;
 			continue;
@@ -60,7 +104,8 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 			...drawn.shared.map(({ pg, count }) => `One protection step puts ${pg} on ${count} groups of the same kind at once.`),
 			...drawn.merged.map((pgs) => `One deprotection step takes off ${together(pgs)}: they come off under the same conditions.`),
 			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`)),
-			...notTogether(rules, needs, judged, choice.options)
+			...notTogether(rules, needs, judged, choice.options),
+			...notes
 		];
 		plans.push({ rank: plans.length + 1, score: scoreOf(choice.addedSteps, choice.cautions, choice.harshness), protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
 	}
@@ -78,7 +123,8 @@ function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option)
 				? 'at the end'
 				: `before ${tree.stepName(tree.next.get(need.freeAt)!.id)}, where it reacts`;
 	const cautions = option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : '';
-	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${cautions}.${option.why ? ` ${option.why}` : ''}`;
+	const level = need.level === 'caution' ? ` ${maskedBecause(rules, tree, need)}` : '';
+	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${cautions}.${option.why ? ` ${option.why}` : ''}${level}`;
 }
 
 function whyUnsolved(rules: CheckRules, tree: RouteTree, need: Need, judged: Judged[]): Unsolved {

@@ -173,36 +173,52 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 	}
 	const needs: Need[] = [];
 	for (const track of tracks) {
-		const attackedAt: string[] = [];
-		let installAt: string | undefined;
-		let removableFrom = track.end;
-		track.path.forEach((node, i) => {
-			if (i >= track.path.indexOf(track.end)) return;
-			const step = tree.next.get(node)!;
-			const hit = tree.conditions
-				.get(step.id)!
-				.some((c) =>
-					track.unit.members.some((g) => rules.reactivity(g, c.id)?.rating === 'reacts')
-				);
-			if (!hit) return;
-			attackedAt.push(step.id);
-			installAt ??= node;
-			removableFrom = track.path[i + 1]!;
-		});
-		if (!installAt) continue;
-		const path = track.path.slice(0, track.path.indexOf(track.end) + 1);
+		const end = track.path.indexOf(track.end);
+		// How hard each step it stands by hits it: reacts, caution or not at all (judged by the
+		// reagents that brought each class, as the check does).
+		const hits = track.path.slice(0, end).map((node) => ({
+			node,
+			step: tree.next.get(node)!.id,
+			...worstRating(rules, tree, tree.next.get(node)!.id, track.unit.members)
+		}));
+		// Masking is needed where a step reacts with it; where steps are only cautions, plans offer it.
+		const level = hits.some((h) => h.rating === 'reacts') ? 'reacts' : 'caution';
+		const attacks = hits.filter((h) => h.rating === level);
+		if (attacks.length === 0) continue;
+		const last = track.path.indexOf(attacks.at(-1)!.node);
 		needs.push({
 			group: track.unit.id,
 			members: track.unit.members,
 			atoms: track.unit.atoms,
-			path,
+			path: track.path.slice(0, end + 1),
 			atomsAt: track.atomsAt,
-			installAt,
+			installAt: attacks[0]!.node,
 			freeAt: track.end,
-			removableFrom,
-			attackedAt,
-			level: 'reacts'
+			removableFrom: track.path[last + 1]!,
+			attackedAt: attacks.map((h) => h.step),
+			level,
+			usuallyMasked: attacks.some((h) => h.usuallyMasked)
 		});
 	}
 	return needs;
+}
+
+/**
+ * The worst rating a step's conditions give any of a unit's groups, e.g. MeMgBr on a ketone →
+ * `reacts`; a caution that chemists usually mask for (a free amine in a Swern oxidation) says so.
+ */
+function worstRating(rules: CheckRules, tree: RouteTree, stepId: string, members: string[]) {
+	let worst: 'reacts' | 'caution' | null = null;
+	let usuallyMasked = false;
+	for (const c of tree.conditions.get(stepId)!) {
+		for (const group of members) {
+			const rule = rules.reactivity(group, c.id, c.explicit ? [] : c.reagents);
+			if (rule?.rating === 'reacts') return { rating: rule.rating, usuallyMasked: false };
+			if (rule?.rating === 'caution') {
+				worst = rule.rating;
+				usuallyMasked ||= rule.usuallyMasked === true;
+			}
+		}
+	}
+	return { rating: worst, usuallyMasked };
 }

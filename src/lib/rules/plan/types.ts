@@ -30,6 +30,12 @@ export type Need = {
 	 * mask it and say why, and the answer never reads "nothing needs masking".
 	 */
 	level: 'reacts' | 'caution';
+	/**
+	 * A caution chemists usually mask for rather than accept (rules/reactivity.json `usuallyMasked`):
+	 * the first plans mask it, then one plan leaves it free. Other caution-level needs are left free
+	 * by the first plan, and later plans offer the mask.
+	 */
+	usuallyMasked: boolean;
 };
 
 /**
