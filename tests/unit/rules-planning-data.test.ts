@@ -56,6 +56,15 @@ describe('loader: planning data is cross-checked, with file and path', () => {
 		]);
 	});
 
+	it('refuses a preference PG that no install recipe can put on the group (Fmoc on an indole N–H)', () => {
+		const raw = good();
+		const row = rawPrefs(raw).findIndex((r) => r.groups.includes('indole-nh'));
+		const at = rawPrefs(raw)[row]!.order.push('Fmoc') - 1;
+		expect(problemsOf(raw)).toEqual([
+			`rules/preferences.json: [${row}].order[${at}]: no install recipe of Fmoc takes "indole-nh"`
+		]);
+	});
+
 	it('refuses a group type with two preference rows', () => {
 		const raw = good();
 		rawPrefs(raw).push({
@@ -78,6 +87,17 @@ describe('loader: planning data is cross-checked, with file and path', () => {
 		];
 		expect(problemsOf(raw)).toEqual([
 			`rules/protecting-groups.json: [${index}].install.methods[0].prefers[0]: "alcohol-tertiary" is not a group this recipe takes`
+		]);
+	});
+
+	it('refuses a recipe that prefers a group over itself', () => {
+		const raw = good();
+		const index = rawPgs(raw).findIndex((pg) => pg.id === 'dioxolane');
+		rawPgs(raw)[index]!.install.methods[0]!.prefers = [
+			{ group: 'ketone', over: ['ketone'], reason: 'x' }
+		];
+		expect(problemsOf(raw)).toEqual([
+			`rules/protecting-groups.json: [${index}].install.methods[0].prefers[0]: "ketone" cannot be preferred over itself`
 		]);
 	});
 
@@ -247,13 +267,16 @@ describe('install recipes read right in the check', () => {
 		}
 	});
 
-	it('Ag2O with BnBr does not oxidise a neighbouring primary alcohol — Bouzide & Sauvé 1997 (from memory)', () => {
+	it('Ag2O with BnBr neither oxidises a free alcohol nor adds to an alkene — Bouzide & Sauvé 1997 (from memory)', () => {
 		const step = {
-			substrate: 'OCCCC(C)O',
-			product: 'OCCCC(C)OCc1ccccc1',
+			substrate: 'OCC/C=C/CC(C)O',
+			product: 'OCC/C=C/CC(C)OCc1ccccc1',
 			reagents: 'Ag2O, BnBr, CH2Cl2'
 		};
-		expect(flagged(step).filter((f) => f.endsWith('oxidant-mild'))).toEqual([]);
+		const said = flagged(step);
+		expect(said.filter((f) => f.endsWith('oxidant-mild') || f.includes('alkene'))).toEqual([]);
+		// The other alcohol may still be benzylated: that stays a caution.
+		expect(said).toContain('caution alcohol-primary alkylating');
 	});
 });
 
