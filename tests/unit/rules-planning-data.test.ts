@@ -227,6 +227,15 @@ describe('install recipes: selectivity as data', () => {
 			expect(table.reactivityOf(group, 'acylating-amine', ['Boc2O'])).toBeUndefined();
 	});
 
+	it('names a source beside every recipe whose selectivity is data (`takes`, `prefers`)', () => {
+		for (const pg of table.protectingGroups)
+			pg.install.methods.forEach((m) => {
+				const sources = [m.note ?? '', ...m.prefers.map((p) => p.reason)].join(' ');
+				if (m.takes || m.prefers.length)
+					expect(sources, `${pg.id}: ${m.reagents[0]}`).toMatch(/from memory|common practice/);
+			});
+	});
+
 	it('offers each alternative a chemist uses where the usual recipe fails', () => {
 		const all = (id: string) =>
 			pgRow(id)
