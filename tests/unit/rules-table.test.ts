@@ -112,6 +112,21 @@ describe('rule table: protecting groups come off the way their rows say', () => 
 				}
 			}
 		});
+
+		it(`${pg.id}: each install recipe brings no class its method does not list (issue 12)`, () => {
+			// The planner offers recipes method by method, so recipes that bring different classes
+			// (TBSCl, imidazole vs TBSOTf, 2,6-lutidine, a Lewis acid too) must be separate methods.
+			const broaderOf = new Map(table.conditions.map((c) => [c.id as string, c.refines]));
+			for (const method of pg.install.methods) {
+				const listed = new Set<string>(method.conditions);
+				for (const text of method.reagents) {
+					const unlisted = table
+						.conditionsForReagents(text)
+						.conditions.filter((c) => !listed.has(c) && !listed.has(broaderOf.get(c) ?? ''));
+					expect(unlisted, `${pg.id}: ${text}`).toEqual([]);
+				}
+			}
+		});
 	}
 });
 

@@ -11,6 +11,12 @@ const protectsOf = (pg: ProtectingGroupConditions): readonly string[] => {
 	return Array.isArray(protects) ? (protects as string[]) : [];
 };
 
+/** Whether some install recipe of `pg` takes `group` (`takes`, else every group its transforms draw). */
+function takenBy(pg: ProtectingGroupConditions, group: string): boolean {
+	const drawn = pg.install.transforms.flatMap((t) => t.groups as readonly string[]);
+	return pg.install.methods.some((m) => ((m.takes ?? drawn) as readonly string[]).includes(group));
+}
+
 /** A recipe's `takes` and `prefers` name only groups its PG's transforms draw. */
 export function checkInstallMethods(pgs: ProtectingGroupConditions[], problems: string[]) {
 	pgs.forEach((pg, index) => {
@@ -29,6 +35,14 @@ export function checkInstallMethods(pgs: ProtectingGroupConditions[], problems: 
 			});
 			const takes = new Set<string>(method.takes ?? drawn);
 			method.prefers.forEach((entry, i) => {
+				if ((entry.over as readonly string[]).includes(entry.group))
+					problems.push(
+						formatIssue(
+							RULE_FILES.protectingGroups,
+							[...where, 'prefers', i],
+							`"${entry.group}" cannot be preferred over itself`
+						)
+					);
 				for (const group of [entry.group, ...entry.over]) {
 					if (!takes.has(group))
 						problems.push(
@@ -44,7 +58,10 @@ export function checkInstallMethods(pgs: ProtectingGroupConditions[], problems: 
 	});
 }
 
-/** Each group type has at most one preference row, and every PG listed protects each of its groups. */
+/**
+ * Each group type has at most one preference row, and every PG listed protects each of its groups
+ * and has an install recipe that takes it.
+ */
 export function checkPreferences(
 	pgs: ProtectingGroupConditions[],
 	rows: Preference[],
@@ -80,6 +97,16 @@ export function checkPreferences(
 						RULE_FILES.preferences,
 						[index, 'order', i],
 						`${id} does not protect ${missing.map((g) => `"${g}"`).join(', ')}`
+					)
+				);
+			// A PG no recipe can put on the group would never be offered for it: a stale row.
+			const uninstallable = pg && !missing.length ? row.groups.filter((g) => !takenBy(pg, g)) : [];
+			if (uninstallable.length)
+				problems.push(
+					formatIssue(
+						RULE_FILES.preferences,
+						[index, 'order', i],
+						`no install recipe of ${id} takes ${uninstallable.map((g) => `"${g}"`).join(', ')}`
 					)
 				);
 		});
