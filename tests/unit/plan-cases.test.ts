@@ -7,10 +7,16 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { MainModule } from '@rdkit/rdkit';
 import { perceiveText } from '../../src/lib/chem';
-import { planRoute, type PlanAnswer } from '../../src/lib/rules/plan';
+import { planRoute, type Plan, type PlanAnswer } from '../../src/lib/rules/plan';
 import { checkRouteDocument, defaultCheckRules } from '../../src/lib/server/services/check';
 import { firstClash } from '../../src/lib/server/services/plan';
-import { loadPlanCases, namedGroups, type PlanCase } from '../corpus/plans/cases';
+import {
+	loadPlanCases,
+	namedGroups,
+	planCaseSchema,
+	type LoadedCase,
+	type PlanCase
+} from '../corpus/plans/cases';
 import { line } from '../factories/plan-routes';
 import { rdkit } from '../reference/rdkit';
 
@@ -51,6 +57,84 @@ describe('the planner case corpus', () => {
 	it('says what must never be offered in at least a third of its cases', () => {
 		const withNever = cases.filter((c) => c.expect.never || c.expect.neverFirst).length;
 		expect(withNever).toBeGreaterThanOrEqual(cases.length / 3);
+	});
+});
+
+describe('how a planner answer is read against a case', () => {
+	const base: PlanCase = {
+		id: 'reading',
+		title: 'a case only for reading answers',
+		route: { structures: ['CC(=O)CCO', 'CC(C)(O)CCO'], reagents: ['MeMgBr, THF'] },
+		expect: {},
+		source: 'common practice',
+		why: 'checks how expectations are read'
+	};
+	const plan = (rank: number, ...pgs: [string, string, string?][]): Plan => ({
+		rank,
+		score: rank,
+		protections: pgs.map(([group, protectingGroup, reagents]) => ({
+			group,
+			atoms: [],
+			intermediate: 'i0',
+			protectingGroup,
+			install: { before: 's1', reagents: reagents ?? '', conditions: [] },
+			removal: { after: 'end', reagents: '', conditions: [] }
+		})),
+		route: line(base.route.structures, base.route.reagents),
+		addedSteps: pgs.length * 2,
+		rationale: [`plan ${rank}`]
+	});
+	const read = (expect: PlanCase['expect'], answer: PlanAnswer) =>
+		judge({ ...base, expect }, answer);
+
+	it('holds plan 1 to the first choice, and any of a list will do', () => {
+		const answer = {
+			plans: [plan(1, ['alcohol-primary', 'THP']), plan(2, ['alcohol-primary', 'TBS'])]
+		};
+		expect(read({ firstChoice: { 'alcohol-primary': ['TBS', 'TBDPS'] } }, answer)).toEqual([
+			'plan 1 puts THP on the alcohol-primary; expected TBS or TBDPS'
+		]);
+		expect(read({ firstChoice: { 'alcohol-primary': ['THP', 'TBS'] } }, answer)).toEqual([]);
+	});
+	it('finds a never-offered PG below the first five plans', () => {
+		const plans = [1, 2, 3, 4, 5, 6].map((rank) =>
+			plan(rank, ['ketone', rank === 6 ? 'dithiane' : 'dioxolane'])
+		);
+		expect(read({ never: ['dithiane'] }, { plans })).toEqual(['dithiane is offered (plan 6)']);
+	});
+	it('reads a recipe on every plan that uses the PG', () => {
+		const answer = {
+			plans: [
+				plan(1, ['alcohol-primary', 'TBS']),
+				plan(2, ['alcohol-primary', 'Bn', 'NaH, BnBr, DMF'])
+			]
+		};
+		expect(read({ installs: { Bn: { not: 'NaH' } } }, answer)).toEqual([
+			'plan 2 puts Bn on with "NaH, BnBr, DMF"'
+		]);
+	});
+	it('tells unsolved, nothing to mask and a missing mask apart', () => {
+		const unsolved = {
+			plans: [],
+			unsolved: [{ group: 'ketone', atoms: [], reason: 'no PG fits' }]
+		};
+		const nothing = { plans: [plan(1)] };
+		expect(read({ unsolved: true }, unsolved)).toEqual([]);
+		expect(read({ unsolved: true }, nothing)).toEqual(['expected unsolved, a plan came back']);
+		expect(read({ nothingToMask: true }, unsolved)).toEqual([
+			'expected a plan, the answer is unsolved'
+		]);
+		expect(read({ nothingToMask: true }, nothing)).toEqual([]);
+		expect(read({ masks: ['amine-primary'] }, nothing)).toEqual([
+			'plan 1 does not mask the amine-primary'
+		]);
+	});
+	it('refuses a case with an unknown PG id, a broken pattern or no expectation', () => {
+		const parse = (expect: unknown) => planCaseSchema.safeParse({ ...base, expect }).success;
+		expect(parse({ never: ['TBS'] })).toBe(true);
+		expect(parse({ never: ['OG-silyl'] })).toBe(false);
+		expect(parse({ rationaleMatches: '(unclosed' })).toBe(false);
+		expect(parse({})).toBe(false);
 	});
 });
 
@@ -148,7 +232,7 @@ function judge(c: PlanCase, answer: PlanAnswer): string[] {
 }
 
 /** The case, its failures and what the planner answered, for the lead to reconcile. */
-function report(c: PlanCase, failures: string[], answer: PlanAnswer): string {
+function report(c: LoadedCase, failures: string[], answer: PlanAnswer): string {
 	const plans = answer.plans.slice(0, 5).map((plan) => {
 		const pgs = plan.protections
 			.map((p) => `${p.group}→${p.protectingGroup} (${p.install.reagents})`)

@@ -77,11 +77,13 @@ export const planCaseSchema = z
 	})
 	.strict();
 export type PlanCase = z.output<typeof planCaseSchema>;
+/** A case as loaded, with the theme file it came from. */
+export type LoadedCase = PlanCase & { file: string };
 
 const folder = new URL('./', import.meta.url);
 
 /** Every case of every theme file, in file order, e.g. `{ id: 'primary-oh-beside-ketone-grignard', … }`. */
-export function loadPlanCases(): (PlanCase & { file: string })[] {
+export function loadPlanCases(): LoadedCase[] {
 	return readdirSync(folder)
 		.filter((name) => name.endsWith('.json'))
 		.sort()
