@@ -1,0 +1,70 @@
+import { Molecule } from 'openchemlib';
+import { afterAll, describe, expect, it, vi } from 'vitest';
+import type { RouteDocument } from '../../src/lib/route/document';
+import { line } from '../factories/plan-routes';
+import { STRESS_ROUTE, TEXTBOOK_ROUTES } from '../../scripts/bench/plan-routes';
+
+// Drawing protected intermediates by editing the SMILES (chem/smiles-splice.ts) must not change
+// any answer of the planner: the same plans, protections, steps, rationale and re-check results,
+// and the same molecules (openchemlib ID codes, stereo included) as the Reactor path, which is
+// what the planner runs when the splicer is switched off. Routes: the bench's textbook and stress
+// routes and one with stereocentres and an E alkene (invented OG-2031 intermediates).
+
+type PlanDocument = (doc: RouteDocument) => unknown;
+
+async function planner(splice: boolean): Promise<PlanDocument> {
+	vi.resetModules();
+	if (splice) vi.doUnmock('../../src/lib/chem/smiles-splice');
+	else
+		vi.doMock('../../src/lib/chem/smiles-splice', async (original) => {
+			const real = await original<typeof import('../../src/lib/chem/smiles-splice')>();
+			return {
+				...real,
+				spliceTransforms: () => {
+					throw new real.SpliceUnsupported('the Reactor path, for comparison');
+				}
+			};
+		});
+	return (await import('../../src/lib/server/services/plan')).planRouteDocument;
+}
+
+/** The answer with every structure as its ID code, so two writings of one molecule compare equal. */
+function byMolecule(answer: unknown): unknown {
+	return JSON.parse(JSON.stringify(answer), (key, value) =>
+		key === 'structure' && typeof value === 'string'
+			? Molecule.fromSmiles(value).getIDCode()
+			: value
+	);
+}
+
+const STEREO_ROUTE = line(
+	[
+		'C/C=C/[C@H](O)[C@@H](C)CC(=O)OC',
+		'C/C=C/[C@H](O)[C@@H](C)CC(C)(C)O',
+		'C/C=C/C(=O)[C@@H](C)CC(C)(C)O'
+	],
+	['MeMgBr, THF', 'DMP, CH2Cl2']
+);
+
+afterAll(() => {
+	vi.doUnmock('../../src/lib/chem/smiles-splice');
+	vi.resetModules();
+});
+
+describe('the spliced drawing answers as the Reactor drawing did', () => {
+	const routes: [string, RouteDocument][] = [
+		...TEXTBOOK_ROUTES.map((doc, i): [string, RouteDocument] => [`textbook route ${i + 1}`, doc]),
+		['route with stereocentres and an E alkene', STEREO_ROUTE],
+		['10-group stress route', STRESS_ROUTE]
+	];
+	for (const [name, doc] of routes) {
+		it(`on the ${name}`, { timeout: 60_000 }, async () => {
+			const reactor = (await planner(false))(doc);
+			const spliced = (await planner(true))(doc);
+			expect((spliced as { plans: unknown[] }).plans.length).toBeGreaterThan(0);
+			expect(byMolecule(spliced)).toEqual(byMolecule(reactor));
+			// The splicer did run: a drawn intermediate keeps the chemist's writing around the PG.
+			expect(JSON.stringify(spliced)).not.toEqual(JSON.stringify(reactor));
+		});
+	}
+});
