@@ -9,6 +9,8 @@
 // A molfile, or a transform the splicer does not handle, goes through the Reactor as before.
 
 import { LruCache } from '../../chem/cache';
+import { detectFormat } from '../../chem/format';
+import { sharedMolecule } from '../../chem/molecule-cache';
 import { readStructure } from '../../chem/parse';
 import { spliceTransforms, SpliceUnsupported } from '../../chem/smiles-splice';
 import { applyTransforms, type SiteTransform } from '../../chem/transform';
@@ -30,10 +32,11 @@ export function protectedStructure(structure: string, masks: Mask[]): string {
 
 /** The SMILES edited in place, or null for a molfile or a transform the splicer leaves to the Reactor. */
 function drawnBySplice(structure: string, transforms: SiteTransform[]): string | null {
-	const parsed = readStructure(structure, { warnings: false });
-	if (parsed.smiles === undefined) return null;
+	if (detectFormat(structure) !== 'smiles') return null;
+	// As readStructure reads it: a title after the SMILES is dropped.
+	const smiles = structure.trim().split(/\s+/)[0]!;
 	try {
-		return spliceTransforms(parsed.smiles, parsed.molecule, transforms);
+		return spliceTransforms(smiles, sharedMolecule(structure), transforms);
 	} catch (caught) {
 		if (caught instanceof SpliceUnsupported) return null;
 		throw caught;
