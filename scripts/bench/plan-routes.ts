@@ -1,5 +1,6 @@
-// The routes `npm run bench` times the planner on, shared with the test that the fast drawing
-// path answers exactly as the Reactor path did (tests/unit/plan-draw-equivalence.test.ts).
+// The routes `npm run bench` times the planner on, shared with the test that the planner's fast
+// paths (SMILES splicing, text atom maps) answer exactly as the slow ones did
+// (tests/unit/plan-fast-paths.test.ts).
 
 import type { RouteDocument } from '../../src/lib/route/document';
 import { line } from '../../tests/factories/plan-routes';

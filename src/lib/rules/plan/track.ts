@@ -4,6 +4,7 @@
 import { mapAtoms, type AtomMap } from '../../chem/atom-map';
 import { LruCache } from '../../chem/cache';
 import { sharedMolecule } from '../../chem/molecule-cache';
+import { mapAtomsByText } from '../../chem/text-atom-map';
 import { perceiveText } from '../../chem/perception-cache';
 import type { CheckRules } from '../check/types';
 import { combinedMolecule } from '../check/transformation';
@@ -53,13 +54,24 @@ function follow(
 	if (stored) return stored;
 	const count = (list: Unit[], id: string) => list.filter((u) => u.id === id).length;
 	const ids = [...new Set(before.map((u) => u.id))];
-	const needsMap = ids.some(
+	const mapped = ids.filter(
 		(id) => count(after, id) > 0 && !(count(before, id) === 1 && count(after, id) === 1)
 	);
 	const substrate = () =>
 		substrates.length === 1 ? sharedMolecule(substrates[0]!) : combinedMolecule(substrates);
-	const map: AtomMap | null = needsMap
-		? mapAtoms(substrate(), sharedMolecule(product))
+	// The atoms both texts write alike, when they pair every unit that needs it; else the MCS.
+	const byText = () =>
+		substrates.length === 1
+			? mapAtomsByText(
+					substrates[0]!,
+					product,
+					substrate(),
+					sharedMolecule(product),
+					before.filter((u) => mapped.includes(u.id)).flatMap((u) => u.atoms)
+				)
+			: null;
+	const map: AtomMap | null = mapped.length
+		? (byText() ?? mapAtoms(substrate(), sharedMolecule(product)))
 		: null;
 	const result: (number | undefined)[] = before.map(() => undefined);
 	const used = new Set<number>();
@@ -108,8 +120,7 @@ function substrateUnits(
 	let offset = 0;
 	return from.flatMap((node) => {
 		const shift = offset;
-		if (from.length > 1)
-			offset += sharedMolecule(tree.byId.get(node)!.structure).getAllAtoms();
+		if (from.length > 1) offset += sharedMolecule(tree.byId.get(node)!.structure).getAllAtoms();
 		return units.get(node)!.map((unit, index) => ({
 			unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) },
 			node,

@@ -4,18 +4,22 @@ import type { RouteDocument } from '../../src/lib/route/document';
 import { line } from '../factories/plan-routes';
 import { STRESS_ROUTE, TEXTBOOK_ROUTES } from '../../scripts/bench/plan-routes';
 
-// Drawing protected intermediates by editing the SMILES (chem/smiles-splice.ts) must not change
-// any answer of the planner: the same plans, protections, steps, rationale and re-check results,
-// and the same molecules (openchemlib ID codes, stereo included) as the Reactor path, which is
-// what the planner runs when the splicer is switched off. Routes: the bench's textbook and stress
-// routes and one with stereocentres and an E alkene (invented OG-2031 intermediates).
+// The planner's fast paths must not change any answer: drawing protected intermediates by editing
+// the SMILES (chem/smiles-splice.ts) instead of the Reactor, and mapping a step's atoms through the
+// text both SMILES share (chem/text-atom-map.ts) instead of the MCS. Switched off, the planner
+// runs the slow paths; both must give the same plans, protections, steps, rationale and re-check
+// results, and the same molecules (openchemlib ID codes, stereo included). Routes: the bench's
+// textbook and stress routes and one with stereocentres and an E alkene (invented OG-2031).
 
 type PlanDocument = (doc: RouteDocument) => unknown;
 
-async function planner(splice: boolean): Promise<PlanDocument> {
+async function planner(fast: boolean): Promise<PlanDocument> {
 	vi.resetModules();
-	if (splice) vi.doUnmock('../../src/lib/chem/smiles-splice');
-	else
+	if (fast) {
+		vi.doUnmock('../../src/lib/chem/smiles-splice');
+		vi.doUnmock('../../src/lib/chem/text-atom-map');
+	} else {
+		vi.doMock('../../src/lib/chem/text-atom-map', () => ({ mapAtomsByText: () => null }));
 		vi.doMock('../../src/lib/chem/smiles-splice', async (original) => {
 			const real = await original<typeof import('../../src/lib/chem/smiles-splice')>();
 			return {
@@ -25,6 +29,7 @@ async function planner(splice: boolean): Promise<PlanDocument> {
 				}
 			};
 		});
+	}
 	return (await import('../../src/lib/server/services/plan')).planRouteDocument;
 }
 
@@ -48,10 +53,11 @@ const STEREO_ROUTE = line(
 
 afterAll(() => {
 	vi.doUnmock('../../src/lib/chem/smiles-splice');
+	vi.doUnmock('../../src/lib/chem/text-atom-map');
 	vi.resetModules();
 });
 
-describe('the spliced drawing answers as the Reactor drawing did', () => {
+describe('the fast paths answer as the slow ones did', () => {
 	const routes: [string, RouteDocument][] = [
 		...TEXTBOOK_ROUTES.map((doc, i): [string, RouteDocument] => [`textbook route ${i + 1}`, doc]),
 		['route with stereocentres and an E alkene', STEREO_ROUTE],
@@ -59,12 +65,12 @@ describe('the spliced drawing answers as the Reactor drawing did', () => {
 	];
 	for (const [name, doc] of routes) {
 		it(`on the ${name}`, { timeout: 60_000 }, async () => {
-			const reactor = (await planner(false))(doc);
-			const spliced = (await planner(true))(doc);
-			expect((spliced as { plans: unknown[] }).plans.length).toBeGreaterThan(0);
-			expect(byMolecule(spliced)).toEqual(byMolecule(reactor));
+			const slow = (await planner(false))(doc);
+			const fast = (await planner(true))(doc);
+			expect((fast as { plans: unknown[] }).plans.length).toBeGreaterThan(0);
+			expect(byMolecule(fast)).toEqual(byMolecule(slow));
 			// The splicer did run: a drawn intermediate keeps the chemist's writing around the PG.
-			expect(JSON.stringify(spliced)).not.toEqual(JSON.stringify(reactor));
+			expect(JSON.stringify(fast)).not.toEqual(JSON.stringify(slow));
 		});
 	}
 });
