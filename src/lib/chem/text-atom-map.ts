@@ -85,10 +85,11 @@ function misfitsOf(substrate: Molecule, product: Molecule, map: AtomMap): Set<nu
 	// Both sides in substrate numbering.
 	const inSubstrate = bondsAmong(substrate, (atom) => (map.has(atom) ? atom : undefined));
 	const inProduct = bondsAmong(product, (atom) => back.get(atom));
-	for (const [one, other] of [
+	const pairs: [typeof inSubstrate, typeof inProduct][] = [
 		[inSubstrate, inProduct],
 		[inProduct, inSubstrate]
-	])
+	];
+	for (const [one, other] of pairs)
 		for (const [key, bond] of one)
 			if (other.get(key)?.order !== bond.order) bond.ends.forEach((atom) => misfits.add(atom));
 	return misfits;
