@@ -13,18 +13,27 @@ import { STRESS_ROUTE, TEXTBOOK_ROUTES } from '../../scripts/bench/plan-routes';
 
 type PlanDocument = (doc: RouteDocument) => unknown;
 
+// How often the switched-off fast paths were asked: proof that the slow run took the slow paths.
+const asked = { splice: 0, textMap: 0 };
+
 async function planner(fast: boolean): Promise<PlanDocument> {
 	vi.resetModules();
 	if (fast) {
 		vi.doUnmock('../../src/lib/chem/smiles-splice');
 		vi.doUnmock('../../src/lib/chem/text-atom-map');
 	} else {
-		vi.doMock('../../src/lib/chem/text-atom-map', () => ({ mapAtomsByText: () => null }));
+		vi.doMock('../../src/lib/chem/text-atom-map', () => ({
+			mapAtomsByText: () => {
+				asked.textMap++;
+				return null;
+			}
+		}));
 		vi.doMock('../../src/lib/chem/smiles-splice', async (original) => {
 			const real = await original<typeof import('../../src/lib/chem/smiles-splice')>();
 			return {
 				...real,
 				spliceTransforms: () => {
+					asked.splice++;
 					throw new real.SpliceUnsupported('the Reactor path, for comparison');
 				}
 			};
@@ -52,6 +61,8 @@ const STEREO_ROUTE = line(
 );
 
 afterAll(() => {
+	// The stress route's steps pair five ketones and five alcohols each: the text map was asked.
+	expect(asked.textMap).toBeGreaterThan(0);
 	vi.doUnmock('../../src/lib/chem/smiles-splice');
 	vi.doUnmock('../../src/lib/chem/text-atom-map');
 	vi.resetModules();
@@ -71,6 +82,7 @@ describe('the fast paths answer as the slow ones did', () => {
 			expect(byMolecule(fast)).toEqual(byMolecule(slow));
 			// The splicer did run: a drawn intermediate keeps the chemist's writing around the PG.
 			expect(JSON.stringify(fast)).not.toEqual(JSON.stringify(slow));
+			expect(asked.splice).toBeGreaterThan(0);
 		});
 	}
 });
