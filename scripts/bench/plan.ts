@@ -47,7 +47,10 @@ console.log(
 	`plan (10 sensitive instances): cold ${cold.ms.toFixed(0)} ms, first sight ${fresh.toFixed(0)} ms (${verdict(fresh, AIM_STRESS_FIRST_SIGHT_MS)}), warm ${warm.toFixed(0)} ms (${verdict(warm, AIM_STRESS_WARM_MS)}), ${cold.plans} plans masking ${cold.needs} groups`
 );
 
-// Each textbook route at first sight, the median of three.
+// Each textbook route at first sight, the median of three, in the order of plan-routes.ts. As for
+// the stress route, the process has planned such routes before (the code is compiled), so each is
+// planned once before the caches are emptied and it is timed.
+for (const doc of TEXTBOOK_ROUTES) planRouteDocument(doc);
 const textbook = TEXTBOOK_ROUTES.map((doc) => {
 	const runs = Array.from({ length: 3 }, () => {
 		clearAll();
@@ -56,7 +59,8 @@ const textbook = TEXTBOOK_ROUTES.map((doc) => {
 		return performance.now() - start;
 	});
 	return runs.sort((a, b) => a - b)[1]!;
-}).sort((a, b) => a - b);
+});
+const slowest = Math.max(...textbook);
 console.log(
-	`plan (textbook routes, 1–3 sensitive instances): first sight ${textbook.map((ms) => ms.toFixed(0)).join(', ')} ms (slowest ${textbook.at(-1)!.toFixed(0)} ms; ${verdict(textbook.at(-1)!, AIM_TEXTBOOK_FIRST_SIGHT_MS)})`
+	`plan (textbook routes 1–${textbook.length}, 1–3 sensitive instances): first sight ${textbook.map((ms) => ms.toFixed(0)).join(', ')} ms (slowest ${slowest.toFixed(0)} ms; ${verdict(slowest, AIM_TEXTBOOK_FIRST_SIGHT_MS)})`
 );
