@@ -1,38 +1,30 @@
-// The strategy planner on one invented OG-2031 route with 10 sensitive group instances (five
-// ketones and five primary alcohols standing by a Grignard addition, then a Swern oxidation of
-// the alcohol it makes). Cold = the first plan in a fresh process; first sight = a route the
-// warm server has never seen (every cache emptied); warm = the median of later runs, as when a
-// chemist asks again after an edit elsewhere. Aim: ≤ 250 ms. First sight is dominated by drawing
-// the protected intermediates with openchemlib's Reactor (about 60 ms per 130-atom product, most
-// of it inventing 2D coordinates), so the textbook routes of tests/unit/plan-strategies.test.ts
-// are timed at first sight too: that is what planning an ordinary route costs.
+// The strategy planner on the routes of plan-routes.ts. Cold = the first plan in a fresh process;
+// first sight = a route the warm server has never seen (every cache emptied); warm = the median of
+// later runs, as when a chemist asks again after an edit elsewhere. Aims (issue 12): the 10-group
+// stress route ≤ 250 ms at first sight and ≤ 50 ms warm; every textbook route ≤ 100 ms at first
+// sight, which is what planning an ordinary route costs. Protected intermediates are drawn by
+// editing the SMILES text (chem/smiles-splice.ts); openchemlib's Reactor, which invented 2D
+// coordinates (~60 ms per 130-atom product), took most of first sight before.
 
 import { clearPerceptionCache } from '../../src/lib/chem';
 import { clearTransformationCache } from '../../src/lib/rules/check';
 import { clearPlanCaches } from '../../src/lib/rules/plan';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
-import type { RouteDocument } from '../../src/lib/route/document';
-import { line } from '../../tests/factories/plan-routes';
+import { STRESS_ROUTE, TEXTBOOK_ROUTES } from './plan-routes';
 
-const ARMS = 'C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C';
-export const route: RouteDocument = {
-	name: 'OG-2031 ten-arm bench',
-	intermediates: [
-		{ id: 'a', structure: `O=CC${ARMS}` },
-		{ id: 'b', structure: `CC(O)C${ARMS}` },
-		{ id: 'c', structure: `CC(=O)C${ARMS}` }
-	],
-	steps: [
-		{ id: 'grignard', from: ['a'], to: 'b', reagents: 'MeMgBr, THF' },
-		{ id: 'swern', from: ['b'], to: 'c', reagents: '(COCl)2, DMSO, Et3N' }
-	]
-};
+const AIM_STRESS_FIRST_SIGHT_MS = 250;
+const AIM_STRESS_WARM_MS = 50;
+const AIM_TEXTBOOK_FIRST_SIGHT_MS = 100;
 
 function timed(): { ms: number; plans: number; needs: number } {
 	const start = performance.now();
-	const answer = planRouteDocument(route);
+	const answer = planRouteDocument(STRESS_ROUTE);
 	const ms = performance.now() - start;
-	return { ms, plans: answer.plans.length, needs: answer.plans[0]?.protections.length ?? -(answer.unsolved?.length ?? 0) };
+	return {
+		ms,
+		plans: answer.plans.length,
+		needs: answer.plans[0]?.protections.length ?? -(answer.unsolved?.length ?? 0)
+	};
 }
 
 function clearAll(): void {
@@ -41,31 +33,34 @@ function clearAll(): void {
 	clearPlanCaches();
 }
 
+const verdict = (ms: number, aim: number) =>
+	ms <= aim ? `≤ ${aim} ms, met` : `aim ≤ ${aim} ms, MISSED`;
+
 clearAll();
 const cold = timed();
-const warm = Array.from({ length: 7 }, timed).map((r) => r.ms).sort((a, b) => a - b)[3]!;
+const warm = Array.from({ length: 7 }, timed)
+	.map((r) => r.ms)
+	.sort((a, b) => a - b)[3]!;
 // First sight of a route in a warm process: every cache emptied, the code already compiled.
-const fresh = Array.from({ length: 3 }, () => (clearAll(), timed().ms)).sort((a, b) => a - b)[1]!;
+const fresh = Array.from({ length: 5 }, () => (clearAll(), timed().ms)).sort((a, b) => a - b)[2]!;
 console.log(
-	`plan (10 sensitive instances): cold ${cold.ms.toFixed(0)} ms, first sight ${fresh.toFixed(0)} ms, warm ${warm.toFixed(0)} ms, ${cold.plans} plans masking ${cold.needs} groups (aim ≤ 250 ms)`
+	`plan (10 sensitive instances): cold ${cold.ms.toFixed(0)} ms, first sight ${fresh.toFixed(0)} ms (${verdict(fresh, AIM_STRESS_FIRST_SIGHT_MS)}), warm ${warm.toFixed(0)} ms (${verdict(warm, AIM_STRESS_WARM_MS)}), ${cold.plans} plans masking ${cold.needs} groups`
 );
 
-// Ordinary routes from the textbook cases (invented OG-2031 intermediates).
-const TEXTBOOK: RouteDocument[] = [
-	line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, THF']),
-	line(['OCC(O)CC=CCCO', 'OCC(O)CC=CCC=O', 'OCC(O)CCCCC=O', 'OCC(O)CCCCC(C)O'], ['(COCl)2, DMSO, Et3N', 'H2, Pd/C, EtOH', 'MeMgBr, THF']),
-	line(
-		['NCCC(CC(=O)O)CCN=[N+]=[N-]', 'NCCC(CC(=O)OC)CCN=[N+]=[N-]', 'NCCC(CC(=O)OC)CCN', 'CC(=O)NCCC(CC(=O)OC)CCN', 'CC(=O)NCCC(CC(=O)OC)CCNC(=O)c1ccccc1'],
-		['MeI, K2CO3, DMF', 'PPh3, THF, H2O', 'Ac2O, pyridine', 'BzCl, Et3N, CH2Cl2']
-	),
-	line(['OCCCCC(=O)OC', 'OCCCCC(C)(C)O', 'OCCCCC(C)=C'], ['MeMgBr, THF', 'TsOH, toluene, reflux'])
-];
-const textbook = TEXTBOOK.map((doc) => {
-	clearAll();
-	const start = performance.now();
-	planRouteDocument(doc);
-	return performance.now() - start;
-}).sort((a, b) => a - b);
+// Each textbook route at first sight, the median of three, in the order of plan-routes.ts. As for
+// the stress route, the process has planned such routes before (the code is compiled), so each is
+// planned once before the caches are emptied and it is timed.
+for (const doc of TEXTBOOK_ROUTES) planRouteDocument(doc);
+const textbook = TEXTBOOK_ROUTES.map((doc) => {
+	const runs = Array.from({ length: 3 }, () => {
+		clearAll();
+		const start = performance.now();
+		planRouteDocument(doc);
+		return performance.now() - start;
+	});
+	return runs.sort((a, b) => a - b)[1]!;
+});
+const slowest = Math.max(...textbook);
 console.log(
-	`plan (textbook routes, 1–3 sensitive instances): first sight ${textbook.map((ms) => ms.toFixed(0)).join(', ')} ms (slowest ${textbook.at(-1)!.toFixed(0)} ms; aim ≤ 250 ms)`
+	`plan (textbook routes 1–${textbook.length}, 1–3 sensitive instances): first sight ${textbook.map((ms) => ms.toFixed(0)).join(', ')} ms (slowest ${slowest.toFixed(0)} ms; ${verdict(slowest, AIM_TEXTBOOK_FIRST_SIGHT_MS)})`
 );

@@ -24,7 +24,7 @@ describe('drawing protected intermediates', () => {
 		});
 	}
 
-	it('draws a dioxolane in place of a ketone oxygen — Greene\'s (from memory)', () => {
-		expect(protectedStructure('CC(=O)CCC', [{ pg: 'dioxolane', transform: '[C:1]=O>>[C:1]1OCCO1', atoms: [0, 1, 2, 3] }])).toBe('CCCC1(C)OCCO1');
+	it('draws a dioxolane in place of a ketone oxygen, editing the chemist\'s SMILES in place — Greene\'s (from memory)', () => {
+		expect(protectedStructure('CC(=O)CCC', [{ pg: 'dioxolane', transform: '[C:1]=O>>[C:1]1OCCO1', atoms: [0, 1, 2, 3] }])).toBe('CC1(OCCO1)CCC');
 	});
 });

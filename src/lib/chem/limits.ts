@@ -31,6 +31,8 @@ export type StructureLimit = keyof typeof STRUCTURE_LIMITS;
 export const CACHE_BYTES = {
 	/** Perceptions by structure text (src/lib/chem/perception-cache.ts). */
 	perceptionByText: 32 * 2 ** 20,
+	/** Parsed molecules by structure text (src/lib/chem/molecule-cache.ts); 1 KB an atom. */
+	moleculesByText: 8 * 2 ** 20,
 	/** Perceptions by canonical key (src/lib/chem/perception-cache.ts). */
 	perceptionByKey: 16 * 2 ** 20,
 	/** Survival of groups across a step (src/lib/rules/check/transformation.ts). */

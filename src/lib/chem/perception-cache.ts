@@ -8,7 +8,7 @@
 
 import type { Molecule } from 'openchemlib';
 import { LruCache } from './cache';
-import { readStructure } from './parse';
+import { clearMoleculeCache, sharedMolecule } from './molecule-cache';
 import { perceive, type Perception } from './perceive';
 import type { CanonicalForm } from './properties';
 
@@ -27,7 +27,7 @@ export function perceiveWithKey(molecule: Molecule, form: CanonicalForm): Percep
 /** Perception of structure text via the text cache (parsed without coordinates), e.g. `perceiveText('OCCO')`. */
 export function perceiveText(text: string): Perception {
 	// Warnings are not part of a perception, and collecting them costs more than perceiving.
-	return byText.getOrSet(text, () => perceive(readStructure(text, { warnings: false }).molecule));
+	return byText.getOrSet(text, () => perceive(sharedMolecule(text)));
 }
 
 /** Entries and bytes held by the two caches (tests and benchmarks), e.g. `perceptionCacheUse().byText.bytes`. */
@@ -38,10 +38,11 @@ export function perceptionCacheUse() {
 	};
 }
 
-/** Empties both caches (tests and benchmarks measure cold runs with it), e.g. `clearPerceptionCache()`. */
+/** Empties both caches and the parsed molecules (tests and benchmarks measure cold runs with it), e.g. `clearPerceptionCache()`. */
 export function clearPerceptionCache(): void {
 	byCanonicalKey.clear();
 	byText.clear();
+	clearMoleculeCache();
 }
 
 function renumber(perception: Perception, map: number[]): Perception {

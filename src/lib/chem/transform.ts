@@ -102,6 +102,17 @@ export function applyTransforms(
 
 /** The atoms a transform's mapped pattern atoms land on: the first match inside the chosen atoms. */
 function siteOf(molecule: Molecule, transform: SiteTransform): number[] {
+	return matchSite(molecule, transform).site;
+}
+
+/**
+ * The first match of a transform's reactant pattern whose mapped atoms all lie among the chosen
+ * atoms: `match[q]` is the molecule atom of pattern atom q, `site` the mapped ones in order.
+ */
+export function matchSite(
+	molecule: Molecule,
+	transform: SiteTransform
+): { site: number[]; match: number[] } {
 	const { reactant, mapped } = compileTransform(transform.smarts);
 	const allowed = new Set(transform.atoms);
 	const searcher = new SSSearcher();
@@ -110,7 +121,7 @@ function siteOf(molecule: Molecule, transform: SiteTransform): number[] {
 	if (searcher.findFragmentInMolecule({ countMode: 'overlapping' }) > 0) {
 		for (const match of searcher.getMatchList()) {
 			const site = mapped.map((q) => match[q]!);
-			if (site.every((a) => allowed.has(a))) return site;
+			if (site.every((a) => allowed.has(a))) return { site, match };
 		}
 	}
 	throw new TransformError(

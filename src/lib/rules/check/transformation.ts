@@ -5,7 +5,7 @@
 import type { Molecule } from 'openchemlib';
 import { mapAtoms, type AtomMap } from '../../chem/atom-map';
 import { LruCache } from '../../chem/cache';
-import { readStructure } from '../../chem/parse';
+import { sharedMolecule } from '../../chem/molecule-cache';
 import { perceive, type Perception } from '../../chem/perceive';
 import { perceiveText } from '../../chem/perception-cache';
 import type { PgSite } from '../ids';
@@ -16,14 +16,13 @@ export type Site = { id: string; atoms: number[]; survives: boolean; on?: PgSite
 export type Transformation = { protectingGroups: Site[]; freeGroups: Site[]; mapped: boolean };
 
 const cache = new LruCache<Transformation>('transformations');
-// The texts were read and checked when perceived; mapping needs the atoms, not the warnings.
-const MAP_ONLY = { warnings: false } as const;
 
-/** Joins several substrate texts into one molecule; atom indices follow the order given. */
+/** Joins several substrate texts into one new molecule; atom indices follow the order given. */
 export function combinedMolecule(texts: string[]): Molecule {
-	const [first, ...rest] = texts.map((text) => readStructure(text, MAP_ONLY).molecule);
-	for (const other of rest) first!.addMolecule(other);
-	return first!;
+	const [first, ...rest] = texts.map(sharedMolecule);
+	const combined = first!.getCompactCopy();
+	for (const other of rest) combined.addMolecule(other);
+	return combined;
 }
 
 /** Survival of every PG and free group of the substrate, e.g. a ketone left by a Grignard on an ester survives. */
@@ -31,19 +30,17 @@ export function transformation(substrates: string[], product: string): Transform
 	const key = `${substrates.join('\u0000')}\u0001${product}`;
 	const stored = cache.get(key);
 	if (stored) return stored;
-	// The intermediates of a route recur as substrate and product, so perceive through the text
-	// cache; molecules are read again only when the atoms must be mapped.
+	// The intermediates of a route recur as substrate and product, so perceive and read molecules
+	// through the text caches.
 	const combined = substrates.length === 1 ? null : combinedMolecule(substrates);
 	const before = combined ? perceive(combined) : perceiveText(substrates[0]!);
 	const after = perceiveText(product);
 	// Counting decides most steps: a group id that keeps its count survives, one that vanishes
 	// changed. Only when some but not all instances of an id vanish must the atoms be mapped
 	// (the maximum common substructure is the slow part) to tell which one reacted.
-	// Read at most once, for the atom map and for what each PG sits on.
-	let substrate = combined;
-	const substrateMolecule = () => (substrate ??= readStructure(substrates[0]!, MAP_ONLY).molecule);
+	const substrateMolecule = () => combined ?? sharedMolecule(substrates[0]!);
 	const map = ambiguous(before, after)
-		? mapAtoms(substrateMolecule(), readStructure(product, MAP_ONLY).molecule)
+		? mapAtoms(substrateMolecule(), sharedMolecule(product))
 		: null;
 	const result = compare(before, after, map);
 	if (result.protectingGroups.length) {

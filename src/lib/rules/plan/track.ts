@@ -3,7 +3,8 @@
 
 import { mapAtoms, type AtomMap } from '../../chem/atom-map';
 import { LruCache } from '../../chem/cache';
-import { readStructure } from '../../chem/parse';
+import { sharedMolecule } from '../../chem/molecule-cache';
+import { mapAtomsByText } from '../../chem/text-atom-map';
 import { perceiveText } from '../../chem/perception-cache';
 import type { CheckRules } from '../check/types';
 import { combinedMolecule } from '../check/transformation';
@@ -14,8 +15,6 @@ import type { Need } from './types';
 export type Unit = { id: string; atoms: number[]; members: string[] };
 
 const DIOLS = ['diol-1,2', 'diol-1,3'];
-// The texts were read and checked when perceived; mapping needs the atoms, not the warnings.
-const MAP_ONLY = { warnings: false } as const;
 const key = (atoms: number[]) => [...atoms].sort((a, b) => a - b).join(',');
 
 /** The free units of a structure: a diol absorbs the alcohols inside it, e.g. `OCC(O)C` → one `diol-1,2`. */
@@ -55,15 +54,24 @@ function follow(
 	if (stored) return stored;
 	const count = (list: Unit[], id: string) => list.filter((u) => u.id === id).length;
 	const ids = [...new Set(before.map((u) => u.id))];
-	const needsMap = ids.some(
+	const mapped = ids.filter(
 		(id) => count(after, id) > 0 && !(count(before, id) === 1 && count(after, id) === 1)
 	);
 	const substrate = () =>
+		substrates.length === 1 ? sharedMolecule(substrates[0]!) : combinedMolecule(substrates);
+	// The atoms both texts write alike, when they pair every unit that needs it; else the MCS.
+	const byText = () =>
 		substrates.length === 1
-			? readStructure(substrates[0]!, MAP_ONLY).molecule
-			: combinedMolecule(substrates);
-	const map: AtomMap | null = needsMap
-		? mapAtoms(substrate(), readStructure(product, MAP_ONLY).molecule)
+			? mapAtomsByText(
+					substrates[0]!,
+					product,
+					substrate(),
+					sharedMolecule(product),
+					before.filter((u) => mapped.includes(u.id)).flatMap((u) => u.atoms)
+				)
+			: null;
+	const map: AtomMap | null = mapped.length
+		? (byText() ?? mapAtoms(substrate(), sharedMolecule(product)))
 		: null;
 	const result: (number | undefined)[] = before.map(() => undefined);
 	const used = new Set<number>();
@@ -112,8 +120,7 @@ function substrateUnits(
 	let offset = 0;
 	return from.flatMap((node) => {
 		const shift = offset;
-		if (from.length > 1)
-			offset += readStructure(tree.byId.get(node)!.structure, MAP_ONLY).molecule.getAllAtoms();
+		if (from.length > 1) offset += sharedMolecule(tree.byId.get(node)!.structure).getAllAtoms();
 		return units.get(node)!.map((unit, index) => ({
 			unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) },
 			node,
