@@ -8,6 +8,7 @@ import { mapAtomsByText } from '../../chem/text-atom-map';
 import { perceiveText } from '../../chem/perception-cache';
 import type { CheckRules } from '../check/types';
 import { combinedMolecule } from '../check/transformation';
+import { diolMemberPairs } from './diol-members';
 import type { RouteTree } from './tree';
 import type { Need } from './types';
 
@@ -155,15 +156,32 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 	for (const step of tree.steps) {
 		const before = substrateUnits(tree, step.from, units);
 		const after = units.get(step.to)!;
+		const substrates = step.from.map((id) => tree.byId.get(id)!.structure);
+		const product = tree.byId.get(step.to)!.structure;
 		const next = follow(
 			before.map((b) => b.unit),
 			after,
-			step.from.map((id) => tree.byId.get(id)!.structure),
-			tree.byId.get(step.to)!.structure
+			substrates,
+			product
+		);
+		const members = diolMemberPairs(
+			before.map((b) => b.unit),
+			after,
+			next,
+			substrates,
+			product
 		);
 		const continued: (Track | undefined)[] = after.map(() => undefined);
 		next.forEach((target, i) => {
 			const followed = open.get(before[i]!.node)![before[i]!.index]!;
+			const into = members.into.find((m) => m.before === i);
+			if (into) {
+				// It stands by the step and becomes one OH of a new diol: free again there.
+				followed.path.push(step.to);
+				followed.atomsAt.set(step.to, into.atoms);
+				followed.end = step.to;
+				return;
+			}
 			if (target === undefined || continued[target]) {
 				followed.end = before[i]!.node;
 				return;
@@ -172,6 +190,18 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 			followed.atomsAt.set(step.to, after[target]!.atoms);
 			continued[target] = followed;
 		});
+		// One OH of a substrate diol that stands by while the other reacts: its track starts at
+		// the substrate, so the step counts as attacking it (a convergent step's atoms would need
+		// unshifting, and diols rarely split there: those start at the product as before).
+		if (step.from.length === 1) {
+			for (const out of members.outOf) {
+				const unit = after[out.after]!;
+				const made = track(step.from[0]!, { id: unit.id, atoms: out.atoms, members: [unit.id] });
+				made.path.push(step.to);
+				made.atomsAt.set(step.to, unit.atoms);
+				continued[out.after] = made;
+			}
+		}
 		// Units the step makes (or that no substrate unit became) start their own tracks here.
 		open.set(
 			step.to,
