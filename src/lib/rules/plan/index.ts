@@ -8,7 +8,8 @@ import { loadRuleTable, type RuleTable } from '../table';
 import { clearDrawCache } from './draw';
 import { judgeCandidates, type Judged } from './options';
 import { drawRoute } from './route';
-import { conflict, scoreOf, searchChoices } from './search';
+import { withRanking } from './rationale';
+import { conflict, searchChoices, type Choice } from './search';
 import { clearFollowCache, findNeeds } from './track';
 import { routeTree, type RouteTree } from './tree';
 import type { Need, Option, Plan, PlanAnswer, Unsolved } from './types';
@@ -46,6 +47,7 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 	if (unsolved.length) return { plans: [], unsolved };
 	const optionLists = judged.map((list) => list.flatMap((j) => j.options).sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness));
 	const plans: Plan[] = [];
+	const ranked: Choice[] = [];
 	let firstProblem: string | null = null;
 	for (const choice of searchChoices(rules, needs, optionLists, SEARCH_WIDTH)) {
 		if (plans.length >= (options.plans ?? MAX_PLANS)) break;
@@ -62,9 +64,10 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`)),
 			...notTogether(rules, needs, judged, choice.options)
 		];
-		plans.push({ rank: plans.length + 1, score: scoreOf(choice.addedSteps, choice.cautions, choice.harshness), protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
+		ranked.push(choice);
+		plans.push({ rank: plans.length + 1, score: choice.score, protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
 	}
-	if (plans.length) return { plans };
+	if (plans.length) return { plans: withRanking(table, rules, needs, plans, ranked) };
 	const reason = firstProblem ? `Every combination of admissible protecting groups still clashes when re-checked: ${firstProblem}` : 'No combination of protecting groups is orthogonal: each choice for one group would strip another.';
 	return { plans: [], unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason })) };
 }
