@@ -289,6 +289,18 @@ function undominated(options: Option[]): Option[] {
 	return options.filter((o) => !options.some((other) => other !== o && beats(other, o)));
 }
 
+// Reading a recipe's text is the same for every need and every point: read it once per rule view.
+const readRecipes = new WeakMap<CheckRules, Map<string, ReturnType<typeof stepConditions>>>();
+function recipeConditions(rules: CheckRules, recipe: Recipe) {
+	let read = readRecipes.get(rules);
+	if (!read) readRecipes.set(rules, (read = new Map()));
+	const key = `${recipe.reagents}\u0001${recipe.conditions.join('+')}`;
+	let conditions = read.get(key);
+	if (!conditions)
+		read.set(key, (conditions = stepConditions(rules, recipe.reagents, recipe.conditions)));
+	return conditions;
+}
+
 const isChiral = (structure: string) =>
 	stereocentres(readStructure(structure, { stereo: true, warnings: false }).molecule).length > 0;
 
@@ -311,7 +323,7 @@ function harm(
 	drawn: readonly string[]
 ) {
 	const structure = tree.byId.get(node)!.structure;
-	const conds = stepConditions(rules, recipe.reagents, recipe.conditions);
+	const conds = recipeConditions(rules, recipe);
 	const need = needs[index]!;
 	const takes = phase === 'install' ? recipe.takes : [];
 	// Units are told apart by their whole atom sets: neighbouring groups share atoms (an amino

@@ -73,6 +73,23 @@ export function recipeDrawbacks(
 	text: string,
 	role: 'install' | 'removal'
 ): Drawback[] {
+	let known = drawbacksByRules.get(rules);
+	if (!known) drawbacksByRules.set(rules, (known = new Map()));
+	const key = `${role}\u0001${text}`;
+	let drawbacks = known.get(key);
+	if (!drawbacks) known.set(key, (drawbacks = readDrawbacks(table, rules, text, role)));
+	return drawbacks;
+}
+
+// Per rule view (a team's layered table gets its own), as the same recipes recur for every need.
+const drawbacksByRules = new WeakMap<CheckRules, Map<string, Drawback[]>>();
+
+function readDrawbacks(
+	table: RuleTable,
+	rules: CheckRules,
+	text: string,
+	role: 'install' | 'removal'
+): Drawback[] {
 	const names = new Set(rules.classify(text).matched.map((m) => m.reagent));
 	const drawbacks: Drawback[] = [];
 	for (const name of names) {
