@@ -90,12 +90,36 @@ describe('the first plan is the one a chemist would sign', () => {
 	it("protects a primary alcohol beside a free secondary one only with a recipe that takes the primary first, never THP or MOM — Greene's; Chaudhary & Hernandez, Tetrahedron Lett. 1979, 95 (TrCl, DMAP)", () => {
 		const answer = plan(line(['OCCCCC(C)O', 'OCCCCC(C)=O'], ['(COCl)2, DMSO, Et3N']));
 		expect(answer.plans.length).toBeGreaterThan(0);
-		expect(['TBDPS', 'TBS', 'Tr']).toContain(pgs(answer.plans[0]!));
+		expect(pgs(answer.plans[0]!)).toBe('TBDPS');
+		expect(answer.plans.map(pgs)).toContain('Tr');
 		for (const p of answer.plans) expect(['THP', 'MOM', 'TMS', 'TES']).not.toContain(pgs(p));
 		const said = answer.plans[0]!.rationale.join(' ');
 		expect(said).toMatch(
 			/TBS rejected: installing it \(TBSCl, imidazole, DMF\) would also put TBS on the free secondary alcohol/
 		);
+	});
+
+	it('reads a selective silylation as a caution on the slower alcohol, not a clash — Hanessian & Lavallée, Can. J. Chem. 1975, 53, 2975', () => {
+		const [step] = checkRouteDocument(
+			line(
+				['OCCCCC(C)O', 'CC(C)(C)[Si](c1ccccc1)(c1ccccc1)OCCCCC(C)O'],
+				['TBDPSCl, imidazole, DMF']
+			),
+			rules
+		);
+		const onSecondary = step!.clashes.filter((c) => c.subject === 'alcohol-secondary');
+		expect(onSecondary.map((c) => c.severity)).toEqual(['caution']);
+		expect(onSecondary[0]!.message).toMatch(
+			/^TBDPSCl takes the free primary alcohol before the free secondary alcohol, which this step leaves alone: The bulky chloride/
+		);
+		// The bundled table says nothing about selectivity yet: there the same step still clashes.
+		const [plain] = checkRouteDocument(
+			line(
+				['OCCCCC(C)O', 'CC(C)(C)[Si](c1ccccc1)(c1ccccc1)OCCCCC(C)O'],
+				['TBDPSCl, imidazole, DMF']
+			)
+		);
+		expect(plain!.clashes.find((c) => c.subject === 'alcohol-secondary')!.severity).toBe('clash');
 	});
 
 	it("does not ketalise a ketone beside a free aldehyde — Greene's, aldehydes are acetalised before ketones", () => {

@@ -361,7 +361,8 @@ function harm(
 						cautions
 					};
 			}
-			continue; // taken selectively: the recipe's own classes leave it alone
+			cautions++; // taken selectively: the slower group is worth watching (the check says so too)
+			continue;
 		}
 		if (phase === 'install' && unit.members.every((g) => drawn.includes(g))) continue;
 		for (const c of conds) {
