@@ -216,11 +216,11 @@ export function searchChoices(
 		scoreOf({ addedSteps: steps, drawbacks: 0, cautions: 0, preference: 0, harshness: 0 });
 	const visit = (depth: number, below: number) => {
 		const added = installs.size + removals.size;
-		if (
-			best.length >= keep &&
-			stepScore(added + stepsStillToCome(depth)) + below + (rest[depth] ?? 0) >= worst()
-		)
-			return;
+		if (best.length >= keep) {
+			// The steps still to come cost most to count: first try the bound without them.
+			const known = stepScore(added) + below + (rest[depth] ?? 0);
+			if (known >= worst() || known + stepScore(stepsStillToCome(depth)) >= worst()) return;
+		}
 		if (depth === needs.length) {
 			const picked = chosen.map((i, x) => options[x]![i]!);
 			const sum = (part: (o: Option) => number) => picked.reduce((total, o) => total + part(o), 0);
@@ -254,15 +254,24 @@ export function searchChoices(
 	};
 	// Plans that differ only in which recipe takes the same PGs off read as one plan to a chemist:
 	// keep the cheapest of each assignment, so the list offers real alternatives.
+	const signatures: string[] = [];
 	const record = (choice: Choice) => {
-		const same = best.findIndex((other) => signature(other.options) === signature(choice.options));
+		const mine = signature(choice.options);
+		const same = signatures.indexOf(mine);
 		if (same >= 0) {
 			if (best[same]!.score <= choice.score) return;
 			best.splice(same, 1);
+			signatures.splice(same, 1);
 		}
-		best.push(choice);
-		best.sort((a, b) => a.score - b.score);
-		if (best.length > keep) best.pop();
+		// Insert in score order, after equal scores: ties stay in the order they were found.
+		let at = best.length;
+		while (at > 0 && best[at - 1]!.score > choice.score) at--;
+		best.splice(at, 0, choice);
+		signatures.splice(at, 0, mine);
+		if (best.length > keep) {
+			best.pop();
+			signatures.pop();
+		}
 	};
 	visit(0, 0);
 	return best;
