@@ -67,6 +67,18 @@ describe('the first plan is the one a chemist would sign', () => {
 		);
 	});
 
+	it("benzylates an alcohol beside an isopropyl ester with the trichloroacetimidate, as NaH would attack the ester — Iversen & Bundle, J. Chem. Soc., Chem. Commun. 1981, 1240; Greene's, benzyl ethers", () => {
+		const answer = plan(
+			line(['OCCCCC(=O)OC(C)C', 'OCCCCC(C)C(=O)OC(C)C'], ['LDA, THF, –78 °C; then MeI'])
+		);
+		const bn = answer.plans.find((p) => pgs(p) === 'Bn');
+		expect(bn?.protections[0]!.install.reagents).toBe('BnOC(=NH)CCl3, TfOH, CH2Cl2');
+		for (const p of answer.plans) expect(p.protections[0]!.install.reagents).not.toMatch(/NaH/);
+		expect(answer.plans[0]!.rationale.join(' ')).toContain(
+			'PMB rejected: installing it (NaH, PMBCl, DMF) would also attack the free carboxylic ester'
+		);
+	});
+
 	it('benzylates an alcohol beside a ketone with the trichloroacetimidate under acid, not NaH/BnBr — Iversen & Bundle, J. Chem. Soc., Chem. Commun. 1981, 1240', () => {
 		const answer = plan(line(['OCCCCC(C)=O', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']));
 		const bn = answer.plans.find((p) => pgs(p) === 'Bn');
