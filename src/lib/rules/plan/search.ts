@@ -19,8 +19,16 @@ export type Cost = {
 export type Choice = Cost & { options: Option[]; score: number };
 
 // Keys join with \u0001: intermediate ids are the chemist's own and may hold any other character.
-const removalKey = (option: Option) =>
-	`${option.removeAt}\u0001${[...option.removal.conditions].sort().join('+')}`;
+const knownRemovalKeys = new WeakMap<Option, string>();
+const removalKey = (option: Option) => {
+	let key = knownRemovalKeys.get(option);
+	if (key === undefined)
+		knownRemovalKeys.set(
+			option,
+			(key = `${option.removeAt}\u0001${[...option.removal.conditions].sort().join('+')}`)
+		);
+	return key;
+};
 /** Needs that take the same PG by the same recipe at the same gap share one step (five ketones, one ketalisation; DHP on two alcohols). */
 export const installKey = (need: Need, option: Option) =>
 	`${need.installAt}\u0001${option.pg}\u0001${option.install.reagents}`;
@@ -77,11 +85,7 @@ export function conflict(
 	const nb = needs[b]!;
 	const sameRemoval = removalKey(oa) === removalKey(ob);
 	const sameInstall = installKey(na, oa) === installKey(nb, ob);
-	const reacts = (group: string, conditions: string[]) =>
-		conditions.some((c) => rules.reactivity(group, c)?.rating === 'reacts');
-	const putting = `putting the ${oa.pg} on (${oa.install.reagents})`;
-	const taking = `taking the ${oa.pg} off (${oa.removal.reagents})`;
-	const label = rules.groupLabel(nb.group);
+	// No closures and no words unless there is a conflict: the search asks this tens of thousands of times.
 	// A neighbour still free at this install whose group the recipe also takes gets the PG too,
 	// unless it shares the step or the recipe takes a's group first (TBDPSCl: primary before secondary).
 	if (
@@ -91,40 +95,47 @@ export function conflict(
 	) {
 		const taken = nb.members.filter((g) => oa.selectivity.takes.includes(g));
 		if (taken.some((g) => !prefersOver(oa.selectivity, na.group, g)))
-			return `${putting} would also put ${oa.pg} on the ${label} beside it unless both take the same protecting group`;
+			return `putting the ${oa.pg} on (${oa.install.reagents}) would also put ${oa.pg} on the ${rules.groupLabel(nb.group)} beside it unless both take the same protecting group`;
 	}
 	// A group whose mask came off early is free again for a's install or removal.
 	if (
 		freedEarlyAt(nb, ob.removeAt, na.installAt) &&
-		nb.members.some((g) => reacts(g, oa.install.conditions))
+		nb.members.some((g) => reacts(rules, g, oa.install.conditions))
 	) {
-		return `${putting} would attack the ${label} once its ${ob.pg} is off`;
+		return `putting the ${oa.pg} on (${oa.install.reagents}) would attack the ${rules.groupLabel(nb.group)} once its ${ob.pg} is off`;
 	}
 	if (
 		freedEarlyAt(nb, ob.removeAt, oa.removeAt) &&
-		nb.members.some((g) => reacts(g, oa.removal.conditions))
+		nb.members.some((g) => reacts(rules, g, oa.removal.conditions))
 	) {
-		return `${taking} would attack the ${label} once its ${ob.pg} is off`;
+		return `taking the ${oa.pg} off (${oa.removal.reagents}) would attack the ${rules.groupLabel(nb.group)} once its ${ob.pg} is off`;
 	}
-	const stripped = (conditions: string[]) =>
-		conditions.some(
-			(c) => rules.stability(ob.pg, c, [], siteOfGroup(nb.group)).rating === 'labile'
-		);
 	if (
 		maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) &&
 		!sameInstall &&
-		stripped(oa.install.conditions)
+		strips(rules, oa.install.conditions, ob.pg, nb.group)
 	) {
-		return `${putting} would strip the ${ob.pg} on the ${label}`;
+		return `putting the ${oa.pg} on (${oa.install.reagents}) would strip the ${ob.pg} on the ${rules.groupLabel(nb.group)}`;
 	}
 	if (
 		maskedAt(needs, b, oa.removeAt, a, 'removal', ob.removeAt) &&
 		!sameRemoval &&
-		stripped(oa.removal.conditions)
+		strips(rules, oa.removal.conditions, ob.pg, nb.group)
 	) {
-		return `${taking} would strip the ${ob.pg} on the ${label}`;
+		return `taking the ${oa.pg} off (${oa.removal.reagents}) would strip the ${ob.pg} on the ${rules.groupLabel(nb.group)}`;
 	}
 	return null;
+}
+
+function reacts(rules: CheckRules, group: string, conditions: string[]): boolean {
+	for (const c of conditions) if (rules.reactivity(group, c)?.rating === 'reacts') return true;
+	return false;
+}
+
+function strips(rules: CheckRules, conditions: string[], pg: string, group: string): boolean {
+	for (const c of conditions)
+		if (rules.stability(pg, c, [], siteOfGroup(group)).rating === 'labile') return true;
+	return false;
 }
 
 /** Counts of keys in use, so a step shared by several needs is counted once. */
@@ -175,7 +186,8 @@ export function searchChoices(
 	};
 	// Lower bounds for the needs from `depth` on: their cheapest options, one install per install
 	// class (see `installClasses`) and the removals no choice so far already brings (see `removalsStillToCome`).
-	const floor = options.map((list) => Math.min(...list.map(optionScore)));
+	const optionScores = options.map((list) => list.map(optionScore));
+	const floor = optionScores.map((scores) => Math.min(...scores));
 	const rest = floor.map((_, i) => floor.slice(i).reduce((sum, v) => sum + v, 0));
 	const classOf = installClasses(needs, installKeys);
 	const classesFrom = needs.map((_, d) => [...new Set(classOf.slice(d))]);
@@ -234,8 +246,18 @@ export function searchChoices(
 			record({ ...cost, options: picked, score: scoreOf(cost) });
 			return;
 		}
-		options[depth]!.forEach((option, i) => {
-			for (let j = 0; j < depth; j++) if (!fits(depth, i, j, chosen[j]!)) return;
+		const list = options[depth]!;
+		const scores = optionScores[depth]!;
+		const steps = stepScore(installs.size + removals.size);
+		for (let i = 0; i < list.length; i++) {
+			// Options come cheapest first and adding one never removes a step: once one cannot
+			// beat the worst kept choice, none after it can.
+			if (best.length >= keep && steps + below + scores[i]! + (rest[depth + 1] ?? 0) >= worst())
+				break;
+			let fitsAll = true;
+			for (let j = 0; j < depth && fitsAll; j++) fitsAll = fits(depth, i, j, chosen[j]!);
+			if (!fitsAll) continue;
+			const option = list[i]!;
 			const install = installKeys[depth]![i]!;
 			const removal = removalKeys[depth]![i]!;
 			const installClass = classOf[depth]!;
@@ -244,13 +266,13 @@ export function searchChoices(
 			removals.add(removal);
 			installClassesUsed.add(installClass);
 			removalPlaces.add(option.removeAt);
-			visit(depth + 1, below + optionScore(option));
+			visit(depth + 1, below + scores[i]!);
 			removalPlaces.remove(option.removeAt);
 			installClassesUsed.remove(installClass);
 			removals.remove(removal);
 			installs.remove(install);
 			chosen.pop();
-		});
+		}
 	};
 	// Plans that differ only in which recipe takes the same PGs off read as one plan to a chemist:
 	// keep the cheapest of each assignment, so the list offers real alternatives.
