@@ -4,7 +4,7 @@
 
 import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
-import { freedEarlyAt, maskedAt } from './options';
+import { freedEarlyAt, maskedAt } from './exposure';
 import { prefersOver } from './recipes';
 import type { Need, Option } from './types';
 
