@@ -27,7 +27,7 @@ describe('step names in prose', () => {
 
 	it("names canvas steps by place in the planner's rationale — common practice (a ketone through a Grignard step)", () => {
 		const uuid = '0b5c3e2a-6f1d-4c1e-9a7b-2d8e4f6a1c3b';
-		const text = planRouteDocument(route(uuid)).plans[0]!.rationale[0]!;
+		const text = planRouteDocument(route(uuid)).plans[0]!.rationale.join(' ');
 		expect(text).toContain('through step 2 (MeMgBr, THF)');
 		expect(text).not.toContain(uuid);
 	});

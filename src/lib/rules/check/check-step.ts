@@ -77,13 +77,19 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		for (const group of change.freeGroups.filter(standsBy)) {
 			const rule = rules.reactivity(group.id, condition, named);
 			if (!rule) continue;
+			// A selective install (TBDPSCl on the primary alcohol beside a secondary one) leaves the
+			// slower group: still worth watching, no longer a clash.
+			const selective =
+				rule.rating === 'reacts'
+					? takenFirst(rules, change.freeGroups, group.id, condition, named)
+					: null;
 			clashes.push({
-				severity: rule.rating === 'reacts' ? 'clash' : 'caution',
+				severity: rule.rating === 'reacts' && !selective ? 'clash' : 'caution',
 				kind: 'attacks-free-group',
 				subject: group.id,
 				condition,
 				atoms: group.atoms,
-				message: freeGroupMessage(rules, group.id, condition, rule, origin)
+				message: selective ?? freeGroupMessage(rules, group.id, condition, rule, origin)
 			});
 		}
 	}
@@ -101,6 +107,27 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 }
 
 const standsBy = (site: Site) => site.survives;
+
+/**
+ * Why the step's install recipe takes a group it converts before the standing-by `over`, as a
+ * caution message, or null, e.g. "TBDPSCl takes the free primary alcohol before the free
+ * secondary alcohol, which this step leaves alone: …".
+ */
+function takenFirst(
+	rules: CheckRules,
+	groups: Site[],
+	over: string,
+	condition: string,
+	reagents: string[]
+): string | null {
+	if (!rules.installPreference || reagents.length === 0) return null;
+	for (const converted of groups.filter((g) => !g.survives)) {
+		const reason = rules.installPreference(reagents, condition, converted.id, over);
+		if (reason)
+			return `${reagents.join(', ')} takes the free ${rules.groupLabel(converted.id)} before the free ${rules.groupLabel(over)}, which this step leaves alone: ${reason.trim().replace(/\.$/, '')}; some of the ${rules.groupLabel(over)} may react as well.`;
+	}
+	return null;
+}
 
 /** What one matched reagent brought, and (when a `when` entry decided) which reagent decided it. */
 function readingOf(m: ReagentMatch): ReagentReading {

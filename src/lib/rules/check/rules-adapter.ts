@@ -15,6 +15,7 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 	const groupLabels = new Map(perception.groups.map((g) => [g.id, g.label]));
 	const pgLabels = new Map(perception.protectingGroups.map((pg) => [pg.id, pg.label]));
 	const conditionIds = table.conditions.map((c) => c.id);
+	let selective: SelectiveInstall[] | undefined;
 	return {
 		conditionIds,
 		conditionLabel: (id) => table.condition(id as ConditionId).label,
@@ -30,6 +31,17 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 		},
 		// Lower-case the first letter only, for mid-sentence use: "the free alkene (non-aromatic C=C)".
 		groupLabel: (group) => lowerFirst(groupLabels.get(group) ?? group),
+		installPreference: (reagents, condition, first, over) => {
+			selective ??= selectiveInstalls(table);
+			const found = selective.find(
+				(s) =>
+					s.first === first &&
+					s.over.includes(over) &&
+					s.condition === condition &&
+					reagents.some((r) => s.reagents.has(r))
+			);
+			return found?.reason ?? null;
+		},
 		classify: (text) => {
 			const result = table.conditionsForReagents(text);
 			return {
@@ -40,4 +52,34 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 			};
 		}
 	};
+}
+
+/** One `prefers` entry of an install method, per class the method brings, with the reagents that bring it. */
+type SelectiveInstall = {
+	first: string;
+	over: readonly string[];
+	reason: string;
+	condition: string;
+	reagents: Set<string>;
+};
+
+/** The selective install recipes of a table, e.g. TBDPSCl (acylating): primary before secondary alcohol. */
+function selectiveInstalls(table: RuleTable): SelectiveInstall[] {
+	return table.protectingGroups.flatMap((row) =>
+		row.install.methods.flatMap((method) => {
+			if (method.prefers.length === 0) return [];
+			const matched = method.reagents.flatMap((text) => table.conditionsForReagents(text).matched);
+			return method.prefers.flatMap((p) =>
+				method.conditions.map((condition) => ({
+					first: p.group,
+					over: p.over,
+					reason: p.reason,
+					condition,
+					reagents: new Set(
+						matched.filter((m) => m.conditions.includes(condition)).map((m) => m.reagent)
+					)
+				}))
+			);
+		})
+	);
 }

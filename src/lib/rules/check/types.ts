@@ -105,6 +105,17 @@ export type CheckRules = {
 		usuallyMasked?: true;
 	} | null;
 	groupLabel(groupId: string): string;
+	/**
+	 * Why a PG install recipe that brings `condition` through one of `reagents` takes free group
+	 * `first` before `over` (rules/protecting-groups.json `prefers`), or null, e.g. TBDPSCl, a
+	 * primary alcohol before a secondary one. Optional: a rule view without install data has none.
+	 */
+	installPreference?(
+		reagents: readonly string[],
+		condition: string,
+		first: string,
+		over: string
+	): string | null;
 	classify(reagents: string): {
 		conditions: string[];
 		matched: ReagentMatch[];

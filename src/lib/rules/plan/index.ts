@@ -9,7 +9,8 @@ import { loadRuleTable, type RuleTable } from '../table';
 import { clearDrawCache } from './draw';
 import { judgeCandidates, type Judged } from './options';
 import { drawRoute } from './route';
-import { conflict, scoreOf, searchChoices } from './search';
+import { withRanking } from './rationale';
+import { conflict, searchChoices, type Choice } from './search';
 import { clearFollowCache, findNeeds } from './track';
 import { routeTree, type RouteTree } from './tree';
 import type { Need, Option, Plan, PlanAnswer, Unsolved } from './types';
@@ -90,6 +91,7 @@ function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = [])
 	if (unsolved.length) return { plans: [], unsolved };
 	const optionLists = judged.map((list) => list.flatMap((j) => j.options).sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness));
 	const plans: Plan[] = [];
+	const ranked: Choice[] = [];
 	let firstProblem: string | null = null;
 	for (const choice of searchChoices(rules, needs, optionLists, SEARCH_WIDTH)) {
 		if (plans.length >= limit) break;
@@ -107,9 +109,10 @@ function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = [])
 			...notTogether(rules, needs, judged, choice.options),
 			...notes
 		];
-		plans.push({ rank: plans.length + 1, score: scoreOf(choice.addedSteps, choice.cautions, choice.harshness), protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
+		ranked.push(choice);
+		plans.push({ rank: plans.length + 1, score: choice.score, protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
 	}
-	if (plans.length) return { plans };
+	if (plans.length) return { plans: withRanking(table, rules, needs, plans, ranked) };
 	const reason = firstProblem ? `Every combination of admissible protecting groups still clashes when re-checked: ${firstProblem}` : 'No combination of protecting groups is orthogonal: each choice for one group would strip another.';
 	return { plans: [], unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason })) };
 }

@@ -3,49 +3,41 @@
 
 import { perceptionRules } from '../../chem/patterns';
 import { readStructure } from '../../chem/parse';
-import { perceiveText } from '../../chem/perception-cache';
 import { stereocentres } from '../../chem/properties';
 import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
 import type { RuleTable } from '../table';
-import { stepConditions, type RouteTree } from './tree';
-import { freeUnits } from './track';
-import type { Need, Option } from './types';
+import { harm } from './exposure';
+import type { RouteTree } from './tree';
+import { preferenceRank } from '../preferences';
+import {
+	drawnGroups,
+	installRecipes,
+	recipeDrawbacks,
+	removalRecipes,
+	type Recipe
+} from './recipes';
+import type { Drawback, Need, Option } from './types';
 
 // How hard a condition class is on a molecule, for ranking only (why: a chemist prefers the
 // milder of two otherwise equal plans). Unlisted classes count 1.
 const HARSHNESS: Record<string, number> = {
-	'acid-strong': 3, 'base-strong': 3, 'hydride-strong': 3, organometallic: 3, 'dissolving-metal': 3, 'oxidant-strong': 3,
-	'lewis-acid': 2, 'base-aqueous': 2, heat: 2, 'oxidant-electron-transfer': 2
+	'acid-strong': 3,
+	'base-strong': 3,
+	'hydride-strong': 3,
+	organometallic: 3,
+	'dissolving-metal': 3,
+	'oxidant-strong': 3,
+	'lewis-acid': 2,
+	'base-aqueous': 2,
+	heat: 2,
+	'oxidant-electron-transfer': 2
 };
 /** Summed harshness of condition classes, e.g. `harshnessOf(['acid-strong', 'fluoride'])` → 4. */
-export const harshnessOf = (conditions: string[]) => conditions.reduce((sum, id) => sum + (HARSHNESS[id] ?? 1), 0);
+export const harshnessOf = (conditions: string[]) =>
+	conditions.reduce((sum, id) => sum + (HARSHNESS[id] ?? 1), 0);
 
 export type Judged = { pg: string; options: Option[]; rejected: string | null; killedAt?: string };
-
-/**
- * Whether need `other` is masked at intermediate `node` while need `index` is worked on there,
- * its mask coming off at `removeAt` (by default where it must be free again). At an intermediate
- * the installs run first (in need order) and the removals after, so a group that must come off
- * here can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc amine freed
- * before step 3 is still masked while Fmoc goes on the other amine there. A need on another
- * branch of a convergent route is not in that intermediate at all.
- */
-export function maskedAt(needs: Need[], other: number, node: string, index: number, phase: 'install' | 'removal', removeAt = needs[other]!.freeAt): boolean {
-	const y = needs[other]!;
-	const here = y.path.indexOf(node);
-	if (here < 0) return false;
-	const on = y.path.indexOf(y.installAt);
-	const off = y.path.indexOf(removeAt);
-	if (phase === 'removal') return on <= here && here <= off;
-	return (on < here || (on === here && other < index)) && here <= off;
-}
-
-/** Whether a need's group is back, free, at `node` because its mask came off early at `removeAt`. */
-export function freedEarlyAt(need: Need, removeAt: string, node: string): boolean {
-	const here = need.path.indexOf(node);
-	return here > need.path.indexOf(removeAt) && here <= need.path.indexOf(need.freeAt);
-}
 
 /**
  * Where a PG on `need` may come off, latest first, with the cautions it collects on the way: from
@@ -53,7 +45,12 @@ export function freedEarlyAt(need: Need, removeAt: string, node: string): boolea
  * as the PG survives the steps in between. Empty, with the step that removes it, when it cannot
  * even reach the end of the last attack.
  */
-function removalPoints(rules: CheckRules, tree: RouteTree, need: Need, pg: string): { points: { node: string; cautions: number }[]; killer?: { step: string; condition: string } } {
+function removalPoints(
+	rules: CheckRules,
+	tree: RouteTree,
+	need: Need,
+	pg: string
+): { points: { node: string; cautions: number }[]; killer?: { step: string; condition: string } } {
 	const on = need.path.indexOf(need.installAt);
 	const earliest = need.path.indexOf(need.removableFrom);
 	const latest = need.path.indexOf(need.freeAt);
@@ -64,101 +61,200 @@ function removalPoints(rules: CheckRules, tree: RouteTree, need: Need, pg: strin
 		if (at === latest) break;
 		const step = tree.next.get(need.path[at]!)!;
 		for (const c of tree.conditions.get(step.id)!) {
-			const rating = rules.stability(pg, c.id, c.explicit ? [] : c.reagents, siteOfGroup(need.group)).rating;
-			if (rating === 'labile') return points.length ? { points } : { points, killer: { step: step.id, condition: c.id } };
+			const rating = rules.stability(
+				pg,
+				c.id,
+				c.explicit ? [] : c.reagents,
+				siteOfGroup(need.group)
+			).rating;
+			if (rating === 'labile')
+				return points.length ? { points } : { points, killer: { step: step.id, condition: c.id } };
 			if (rating === 'caution') cautions++;
 		}
 	}
 	return { points };
 }
 
-/** Every candidate PG for `needs[index]` with its admissible options or why it fails, e.g. Bn for an alcohol → "Bn rejected: … hydrogenation …". */
-export function judgeCandidates(table: RuleTable, rules: CheckRules, tree: RouteTree, needs: Need[], index: number): Judged[] {
+/** An install or removal recipe judged on the molecule: what it attacks, what it brings. */
+type Judgement = { recipe: Recipe; cautions: number; drawbacks: Drawback[]; harshness: number };
+
+/**
+ * Every candidate PG for `needs[index]` with its admissible options or why it fails, e.g. Bn for
+ * an alcohol → "Bn rejected: … hydrogenation …". Every install recipe that takes the group and
+ * every removal recipe is tried; an option is one install recipe, one removal recipe and one
+ * removal point, and options another of the same PG beats on every count are dropped.
+ */
+export function judgeCandidates(
+	table: RuleTable,
+	rules: CheckRules,
+	tree: RouteTree,
+	needs: Need[],
+	index: number
+): Judged[] {
 	const need = needs[index]!;
 	const protects = new Map(perceptionRules().protectingGroups.map((pg) => [pg.id, pg.protects]));
 	const rows = table.protectingGroups.filter((row) => protects.get(row.id)?.includes(need.group));
+	let chiral: boolean | undefined;
+	const isChiralSubstrate = () => (chiral ??= isChiral(tree.byId.get(need.installAt)!.structure));
 	return rows.map((row): Judged => {
-		const transform = row.install.transforms.find((t) => (t.groups as readonly string[]).includes(need.group))?.smarts;
-		if (!transform) return { pg: row.id, options: [], rejected: `${row.id} rejected: the rule table has no install transform to draw it on a ${rules.groupLabel(need.group)}` };
+		const transform = row.install.transforms.find((t) =>
+			(t.groups as readonly string[]).includes(need.group)
+		)?.smarts;
+		if (!transform)
+			return {
+				pg: row.id,
+				options: [],
+				rejected: `${row.id} rejected: the rule table has no install transform to draw it on a ${rules.groupLabel(need.group)}`
+			};
 		const { points, killer } = removalPoints(rules, tree, need, row.id);
 		if (killer) {
 			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of ${tree.stepName(killer.step)} would remove it`;
 			return { pg: row.id, options: [], rejected, killedAt: killer.step };
 		}
-		const method = row.install.methods[0]!;
-		const installConditions = [...method.conditions];
-		const install = { reagents: method.reagents[0] ?? '', conditions: installConditions };
-		const installHarm = harm(rules, tree, needs, index, need.installAt, 'install', install.reagents, installConditions);
-		if (installHarm.blocked) return { pg: row.id, options: [], rejected: `${row.id} rejected: installing it (${install.reagents}) ${installHarm.blocked}` };
-		// A PG that makes a new stereocentre turns a chiral substrate into a mixture of diastereomers.
-		const stereocentre = row.drawbacks.find((d) => d.kind === 'new-stereocentre');
-		const diastereomers = stereocentre !== undefined && isChiral(tree.byId.get(need.installAt)!.structure);
+		const recipes = installRecipes(row, need.group);
+		if (recipes.length === 0)
+			return {
+				pg: row.id,
+				options: [],
+				rejected: `${row.id} rejected: none of its install recipes takes a ${rules.groupLabel(need.group)}`
+			};
+		const drawn = drawnGroups(row);
+		let firstInstallProblem = '';
+		const installs = bestOfEach(recipes, (recipe) => {
+			const installHarm = harm(
+				rules,
+				tree,
+				needs,
+				index,
+				need.installAt,
+				'install',
+				recipe,
+				row.id,
+				drawn
+			);
+			if (!installHarm.blocked)
+				return judged(table, rules, recipe, installHarm.cautions, 'install');
+			firstInstallProblem ||= `installing it (${recipe.reagents}) ${installHarm.blocked}`;
+			return null;
+		});
+		if (installs.length === 0)
+			return { pg: row.id, options: [], rejected: `${row.id} rejected: ${firstInstallProblem}` };
+		// The PG's own drawbacks; a new stereocentre matters only on a chiral substrate, which it
+		// turns into a mixture of diastereomers.
+		const own = row.drawbacks.filter((d) => d.kind !== 'new-stereocentre' || isChiralSubstrate());
+		const preference = preferenceRank(table, need.group, row.id);
+		const removals = removalRecipes(row);
 		const options: Option[] = [];
 		let firstRemovalProblem = '';
 		for (const point of points) {
-			for (const removal of row.remove) {
-				const reagents = removal.reagents[0] ?? '';
-				const removalHarm = harm(rules, tree, needs, index, point.node, 'removal', reagents, [...removal.conditions]);
+			const here: Option[] = [];
+			for (const removal of bestOfEach(removals, (recipe) => {
+				const removalHarm = harm(
+					rules,
+					tree,
+					needs,
+					index,
+					point.node,
+					'removal',
+					recipe,
+					row.id,
+					[]
+				);
 				if (removalHarm.blocked) {
-					firstRemovalProblem ||= `removing it (${reagents}) ${removalHarm.blocked}`;
-					continue;
+					firstRemovalProblem ||= `removing it (${recipe.reagents}) ${removalHarm.blocked}`;
+					return null;
 				}
-				options.push({
-					pg: row.id,
-					transform,
-					install,
-					removal: { reagents, conditions: [...removal.conditions] },
-					removeAt: point.node,
-					cautions: point.cautions + installHarm.cautions + removalHarm.cautions + (diastereomers ? 1 : 0),
-					harshness: harshnessOf(installConditions) + harshnessOf([...removal.conditions]),
-					drawbacks: diastereomers ? [stereocentre] : [],
-					preference: 0,
-					why: diastereomers ? stereocentre.note : ''
-				});
+				return judged(table, rules, recipe, removalHarm.cautions, 'removal');
+			})) {
+				for (const install of installs) {
+					const drawbacks = [...own, ...install.drawbacks, ...removal.drawbacks];
+					here.push({
+						pg: row.id,
+						transform,
+						install: {
+							reagents: install.recipe.reagents,
+							conditions: [...install.recipe.conditions]
+						},
+						removal: {
+							reagents: removal.recipe.reagents,
+							conditions: [...removal.recipe.conditions]
+						},
+						removeAt: point.node,
+						cautions: point.cautions + install.cautions + removal.cautions,
+						harshness: install.harshness + removal.harshness,
+						drawbacks,
+						preference,
+						why: drawbacks.map((d) => sentence(d.note)).join(' '),
+						selectivity: { takes: install.recipe.takes, prefers: install.recipe.prefers }
+					});
+				}
 			}
+			options.push(...undominated(here));
 		}
-		if (options.length === 0) return { pg: row.id, options, rejected: `${row.id} rejected: ${firstRemovalProblem}` };
+		if (options.length === 0)
+			return { pg: row.id, options, rejected: `${row.id} rejected: ${firstRemovalProblem}` };
 		return { pg: row.id, options, rejected: null };
 	});
 }
 
-const isChiral = (structure: string) => stereocentres(readStructure(structure, { stereo: true, warnings: false }).molecule).length > 0;
+const sentence = (note: string) => (/[.!?]$/.test(note) ? note : `${note}.`);
 
-/** What an install or removal at intermediate `node` would attack among the free groups and the route's own PGs then present. */
-function harm(rules: CheckRules, tree: RouteTree, needs: Need[], index: number, node: string, phase: 'install' | 'removal', reagents: string, conditions: string[]) {
-	const structure = tree.byId.get(node)!.structure;
-	const conds = stepConditions(rules, reagents, conditions);
-	const need = needs[index]!;
-	// Units are told apart by their whole atom sets: neighbouring groups share atoms (an amino
-	// alcohol's CH2 belongs to both), so one shared atom does not make a unit this need's own.
-	const setKey = (atoms: readonly number[]) => [...atoms].sort((a, b) => a - b).join(',');
-	const own = setKey(need.atomsAt.get(node) ?? []);
-	// Free units masked by another need at that moment are not exposed (their PG is judged jointly).
-	const masked = new Set<string>();
-	needs.forEach((other, j) => {
-		// A same-type neighbour that goes on at the same place may share this install step; the
-		// search only lets it stay free if it does not (see `compatible` in search.ts).
-		const coInstall = phase === 'install' && other.installAt === node && other.group === need.group;
-		const atoms = other.atomsAt.get(node);
-		if (atoms && j !== index && (coInstall || maskedAt(needs, j, node, index, phase))) masked.add(setKey(atoms));
-	});
-	let cautions = 0;
-	for (const unit of freeUnits(structure)) {
-		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) continue;
-		for (const c of conds) {
-			for (const member of unit.members) {
-				const rule = rules.reactivity(member, c.id);
-				if (rule?.rating === 'reacts') return { blocked: `would also attack the free ${rules.groupLabel(member)} (${rule.reason.replace(/\.$/, '')})`, cautions };
-				if (rule) cautions++;
-			}
-		}
-	}
-	for (const pg of perceiveText(structure).protectingGroups) {
-		for (const c of conds) {
-			const answer = rules.stability(pg.id, c.id, c.explicit ? [] : c.reagents, siteOfGroup(pg.masks));
-			if (answer.rating === 'labile') return { blocked: `would also strip the route's own ${pg.id} group`, cautions };
-			if (answer.rating === 'caution') cautions++;
-		}
-	}
-	return { blocked: '', cautions };
+function judged(
+	table: RuleTable,
+	rules: CheckRules,
+	recipe: Recipe,
+	cautions: number,
+	role: 'install' | 'removal'
+): Judgement {
+	return {
+		recipe,
+		cautions,
+		drawbacks: recipeDrawbacks(table, rules, recipe.reagents, role),
+		harshness: harshnessOf(recipe.conditions)
+	};
 }
+
+/**
+ * Per method (install) or set of condition classes (removal), the recipe that fits best (fewest
+ * drawbacks, then cautions, the usual one on a tie): such recipes are interchangeable for
+ * orthogonality, so only the best is worth searching, e.g. NaH/BnBr with TBAI only if it is better.
+ */
+function bestOfEach(recipes: Recipe[], judge: (recipe: Recipe) => Judgement | null): Judgement[] {
+	const best = new Map<string, Judgement>();
+	for (const recipe of recipes) {
+		const result = judge(recipe);
+		if (!result) continue;
+		const held = best.get(recipe.family);
+		if (
+			!held ||
+			result.drawbacks.length < held.drawbacks.length ||
+			(result.drawbacks.length === held.drawbacks.length && result.cautions < held.cautions)
+		)
+			best.set(recipe.family, result);
+	}
+	return [...best.values()];
+}
+
+/**
+ * Drops options of one PG and removal point that another beats on drawbacks, cautions and
+ * harshness while taking it off the same way and putting it on with no class the other lacks
+ * (so it can clash with nothing the other avoids), e.g. NaH/BnBr beside an ester once the
+ * imidate recipe is as good. Keeps the list short enough for the joint search.
+ */
+function undominated(options: Option[]): Option[] {
+	const removalOf = (o: Option) => [...o.removal.conditions].sort().join('+');
+	const beats = (a: Option, b: Option) =>
+		removalOf(a) === removalOf(b) &&
+		a.install.conditions.every((c) => b.install.conditions.includes(c)) &&
+		a.drawbacks.length <= b.drawbacks.length &&
+		a.cautions <= b.cautions &&
+		a.harshness <= b.harshness &&
+		(a.drawbacks.length < b.drawbacks.length ||
+			a.cautions < b.cautions ||
+			a.harshness < b.harshness ||
+			a.install.conditions.length < b.install.conditions.length);
+	return options.filter((o) => !options.some((other) => other !== o && beats(other, o)));
+}
+
+const isChiral = (structure: string) =>
+	stereocentres(readStructure(structure, { stereo: true, warnings: false }).molecule).length > 0;

@@ -1,24 +1,71 @@
 // The joint choice: one option per need, found by depth-first branch and bound. Cost is
-// lexicographic — added steps, then cautions, then harshness — folded into one score.
+// lexicographic — added steps, then drawbacks (the PGs' own and their recipes' reagents'), then
+// bystander cautions, then the sourced preference rank, then harshness — folded into one score.
 
 import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
-import { freedEarlyAt, maskedAt } from './options';
+import { freedEarlyAt, maskedAt } from './exposure';
+import { prefersOver } from './recipes';
 import type { Need, Option } from './types';
 
-export type Choice = { options: Option[]; score: number; addedSteps: number; cautions: number; harshness: number };
+/** The cost of a joint choice, tier by tier (see `scoreOf`). */
+export type Cost = {
+	addedSteps: number;
+	drawbacks: number;
+	cautions: number;
+	preference: number;
+	harshness: number;
+};
+export type Choice = Cost & { options: Option[]; score: number };
 
 // Keys join with \u0001: intermediate ids are the chemist's own and may hold any other character.
-const removalKey = (option: Option) => `${option.removeAt}\u0001${[...option.removal.conditions].sort().join('+')}`;
-/** Same-type groups that take the same PG at the same gap go on in one step (five ketones, one ketalisation). */
-export const installKey = (need: Need, option: Option) => `${need.installAt}\u0001${need.group}\u0001${option.pg}\u0001${option.install.reagents}`;
-const installClassOf = (need: Need) => `${need.installAt}\u0001${need.group}`;
-/** Lexicographic cost as one number, e.g. `scoreOf(2, 1, 3)` → 20103 (steps, then cautions, then harshness). */
-export const scoreOf = (added: number, cautions: number, harshness: number) => added * 10_000 + cautions * 100 + harshness;
+const knownRemovalKeys = new WeakMap<Option, string>();
+const removalKey = (option: Option) => {
+	let key = knownRemovalKeys.get(option);
+	if (key === undefined)
+		knownRemovalKeys.set(
+			option,
+			(key = `${option.removeAt}\u0001${[...option.removal.conditions].sort().join('+')}`)
+		);
+	return key;
+};
+/** Needs that take the same PG by the same recipe at the same gap share one step (five ketones, one ketalisation; DHP on two alcohols). */
+export const installKey = (need: Need, option: Option) =>
+	`${need.installAt}\u0001${option.pg}\u0001${option.install.reagents}`;
+// Each tier gets three decimal digits, so a lower tier never outweighs one step of a higher one
+// (as long as a plan has under 1000 cautions, preference places or harshness points; 5 tiers stay below 2^53).
+const TIER = 1000;
+/**
+ * Lexicographic cost as one number, e.g. `scoreOf({ addedSteps: 2, drawbacks: 0, cautions: 1,
+ * preference: 0, harshness: 3 })` → 2_000_001_000_003.
+ */
+export const scoreOf = (cost: Cost) =>
+	[cost.addedSteps, cost.drawbacks, cost.cautions, cost.preference, cost.harshness].reduce(
+		(sum, tier) => sum * TIER + tier,
+		0
+	);
+/** What one option adds to a plan below the step count. */
+const optionScore = (o: Option) =>
+	scoreOf({
+		addedSteps: 0,
+		drawbacks: o.drawbacks.length,
+		cautions: o.cautions,
+		preference: o.preference,
+		harshness: o.harshness
+	});
 
 /** Whether two chosen options can share a route: neither one's install or removal strips the other's PG. */
-function compatible(rules: CheckRules, needs: Need[], x: number, ox: Option, y: number, oy: Option): boolean {
-	return conflict(rules, needs, x, ox, y, oy) === null && conflict(rules, needs, y, oy, x, ox) === null;
+function compatible(
+	rules: CheckRules,
+	needs: Need[],
+	x: number,
+	ox: Option,
+	y: number,
+	oy: Option
+): boolean {
+	return (
+		conflict(rules, needs, x, ox, y, oy) === null && conflict(rules, needs, y, oy, x, ox) === null
+	);
 }
 
 /**
@@ -26,34 +73,69 @@ function compatible(rules: CheckRules, needs: Need[], x: number, ox: Option, y: 
  * option ob (it strips ob's PG, or attacks b's group while it is free), or null when it can.
  * E.g. "putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane".
  */
-export function conflict(rules: CheckRules, needs: Need[], a: number, oa: Option, b: number, ob: Option): string | null {
+export function conflict(
+	rules: CheckRules,
+	needs: Need[],
+	a: number,
+	oa: Option,
+	b: number,
+	ob: Option
+): string | null {
 	const na = needs[a]!;
 	const nb = needs[b]!;
 	const sameRemoval = removalKey(oa) === removalKey(ob);
 	const sameInstall = installKey(na, oa) === installKey(nb, ob);
-	const reacts = (group: string, conditions: string[]) => conditions.some((c) => rules.reactivity(group, c)?.rating === 'reacts');
-	const putting = `putting the ${oa.pg} on (${oa.install.reagents})`;
-	const taking = `taking the ${oa.pg} off (${oa.removal.reagents})`;
-	const label = rules.groupLabel(nb.group);
-	// A same-type neighbour left free at this install would be attacked by it, unless it shares the step.
-	if (!sameInstall && nb.installAt === na.installAt && nb.group === na.group && reacts(na.group, oa.install.conditions)) {
-		return `${putting} would attack the ${label} beside it unless both take the same protecting group`;
+	// No closures and no words unless there is a conflict: the search asks this tens of thousands of times.
+	// A neighbour still free at this install whose group the recipe also takes gets the PG too,
+	// unless it shares the step or the recipe takes a's group first (TBDPSCl: primary before secondary).
+	if (
+		!sameInstall &&
+		nb.installAt === na.installAt &&
+		!maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt)
+	) {
+		const taken = nb.members.filter((g) => oa.selectivity.takes.includes(g));
+		if (taken.some((g) => !prefersOver(oa.selectivity, na.group, g)))
+			return `putting the ${oa.pg} on (${oa.install.reagents}) would also put ${oa.pg} on the ${rules.groupLabel(nb.group)} beside it unless both take the same protecting group`;
 	}
 	// A group whose mask came off early is free again for a's install or removal.
-	if (freedEarlyAt(nb, ob.removeAt, na.installAt) && nb.members.some((g) => reacts(g, oa.install.conditions))) {
-		return `${putting} would attack the ${label} once its ${ob.pg} is off`;
+	if (
+		freedEarlyAt(nb, ob.removeAt, na.installAt) &&
+		nb.members.some((g) => reacts(rules, g, oa.install.conditions))
+	) {
+		return `putting the ${oa.pg} on (${oa.install.reagents}) would attack the ${rules.groupLabel(nb.group)} once its ${ob.pg} is off`;
 	}
-	if (freedEarlyAt(nb, ob.removeAt, oa.removeAt) && nb.members.some((g) => reacts(g, oa.removal.conditions))) {
-		return `${taking} would attack the ${label} once its ${ob.pg} is off`;
+	if (
+		freedEarlyAt(nb, ob.removeAt, oa.removeAt) &&
+		nb.members.some((g) => reacts(rules, g, oa.removal.conditions))
+	) {
+		return `taking the ${oa.pg} off (${oa.removal.reagents}) would attack the ${rules.groupLabel(nb.group)} once its ${ob.pg} is off`;
 	}
-	const stripped = (conditions: string[]) => conditions.some((c) => rules.stability(ob.pg, c, [], siteOfGroup(nb.group)).rating === 'labile');
-	if (maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) && !sameInstall && stripped(oa.install.conditions)) {
-		return `${putting} would strip the ${ob.pg} on the ${label}`;
+	if (
+		maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) &&
+		!sameInstall &&
+		strips(rules, oa.install.conditions, ob.pg, nb.group)
+	) {
+		return `putting the ${oa.pg} on (${oa.install.reagents}) would strip the ${ob.pg} on the ${rules.groupLabel(nb.group)}`;
 	}
-	if (maskedAt(needs, b, oa.removeAt, a, 'removal', ob.removeAt) && !sameRemoval && stripped(oa.removal.conditions)) {
-		return `${taking} would strip the ${ob.pg} on the ${label}`;
+	if (
+		maskedAt(needs, b, oa.removeAt, a, 'removal', ob.removeAt) &&
+		!sameRemoval &&
+		strips(rules, oa.removal.conditions, ob.pg, nb.group)
+	) {
+		return `taking the ${oa.pg} off (${oa.removal.reagents}) would strip the ${ob.pg} on the ${rules.groupLabel(nb.group)}`;
 	}
 	return null;
+}
+
+function reacts(rules: CheckRules, group: string, conditions: string[]): boolean {
+	for (const c of conditions) if (rules.reactivity(group, c)?.rating === 'reacts') return true;
+	return false;
+}
+
+function strips(rules: CheckRules, conditions: string[], pg: string, group: string): boolean {
+	for (const c of conditions)
+		if (rules.stability(pg, c, [], siteOfGroup(group)).rating === 'labile') return true;
+	return false;
 }
 
 /** Counts of keys in use, so a step shared by several needs is counted once. */
@@ -77,9 +159,16 @@ class KeyCounts {
 
 /**
  * Up to `keep` cheapest joint choices with distinct PG assignments, cheapest first, ties in
- * candidate order (stable), e.g. dioxolane for a ketone before dimethyl acetal only if it is milder.
+ * candidate order (stable), e.g. dioxolane for a ketone before the dimethyl acetal, which is fragile.
  */
-export function searchChoices(rules: CheckRules, needs: Need[], options: Option[][], keep: number): Choice[] {
+export function searchChoices(
+	rules: CheckRules,
+	needs: Need[],
+	lists: Option[][],
+	keep: number
+): Choice[] {
+	// Cheapest first, so good choices are found early and bound the rest.
+	const options = lists.map((list) => [...list].sort((a, b) => optionScore(a) - optionScore(b)));
 	const best: Choice[] = [];
 	const chosen: number[] = [];
 	const installKeys = options.map((list, x) => list.map((o) => installKey(needs[x]!, o)));
@@ -91,15 +180,20 @@ export function searchChoices(rules: CheckRules, needs: Need[], options: Option[
 		let table = pairs.get(key);
 		if (!table) pairs.set(key, (table = new Uint8Array(options[x]!.length * options[y]!.length)));
 		const cell = i * options[y]!.length + j;
-		if (table[cell] === 0) table[cell] = compatible(rules, needs, x, options[x]![i]!, y, options[y]![j]!) ? 1 : 2;
+		if (table[cell] === 0)
+			table[cell] = compatible(rules, needs, x, options[x]![i]!, y, options[y]![j]!) ? 1 : 2;
 		return table[cell] === 1;
 	};
-	// Lower bounds for the needs from `depth` on: their cheapest ratings, one install per (place,
-	// group type) and the removals no choice so far already brings (see `removalsStillToCome`).
-	const floor = options.map((list) => Math.min(...list.map((o) => scoreOf(0, o.cautions, o.harshness))));
+	// Lower bounds for the needs from `depth` on: their cheapest options, one install per install
+	// class (see `installClasses`) and the removals no choice so far already brings (see `removalsStillToCome`).
+	const optionScores = options.map((list) => list.map(optionScore));
+	const floor = optionScores.map((scores) => Math.min(...scores));
 	const rest = floor.map((_, i) => floor.slice(i).reduce((sum, v) => sum + v, 0));
-	const installClasses = needs.map((_, d) => [...new Set(needs.slice(d).map((n) => installClassOf(n)))]);
-	const windows = needs.map((n) => n.path.slice(n.path.indexOf(n.removableFrom), n.path.indexOf(n.freeAt) + 1));
+	const classOf = installClasses(needs, installKeys);
+	const classesFrom = needs.map((_, d) => [...new Set(classOf.slice(d))]);
+	const windows = needs.map((n) =>
+		n.path.slice(n.path.indexOf(n.removableFrom), n.path.indexOf(n.freeAt) + 1)
+	);
 	const installs = new KeyCounts();
 	const removals = new KeyCounts();
 	const installClassesUsed = new KeyCounts();
@@ -116,50 +210,113 @@ export function searchChoices(rules: CheckRules, needs: Need[], options: Option[
 			if (window.length === 1) single.add(window[0]!);
 			else other = true;
 		}
-		const otherUncovered = other && windows.slice(depth).some((w) => w.length > 1 && !w.some((node) => removalPlaces.has(node) || single.has(node)));
+		const otherUncovered =
+			other &&
+			windows
+				.slice(depth)
+				.some(
+					(w) => w.length > 1 && !w.some((node) => removalPlaces.has(node) || single.has(node))
+				);
 		return single.size + (otherUncovered ? 1 : 0);
 	};
 	const stepsStillToCome = (depth: number) =>
-		depth === needs.length ? 0 : installClasses[depth]!.filter((c) => !installClassesUsed.has(c)).length + removalsStillToCome(depth);
-	const visit = (depth: number, cautions: number, harshness: number) => {
+		depth === needs.length
+			? 0
+			: classesFrom[depth]!.filter((c) => !installClassesUsed.has(c)).length +
+				removalsStillToCome(depth);
+	const stepScore = (steps: number) =>
+		scoreOf({ addedSteps: steps, drawbacks: 0, cautions: 0, preference: 0, harshness: 0 });
+	const visit = (depth: number, below: number) => {
 		const added = installs.size + removals.size;
-		if (best.length >= keep && scoreOf(added + stepsStillToCome(depth), cautions, harshness) + (rest[depth] ?? 0) >= worst()) return;
+		if (best.length >= keep) {
+			// The steps still to come cost most to count: first try the bound without them.
+			const known = stepScore(added) + below + (rest[depth] ?? 0);
+			if (known >= worst() || known + stepScore(stepsStillToCome(depth)) >= worst()) return;
+		}
 		if (depth === needs.length) {
-			record({ options: chosen.map((i, x) => options[x]![i]!), score: scoreOf(added, cautions, harshness), addedSteps: added, cautions, harshness });
+			const picked = chosen.map((i, x) => options[x]![i]!);
+			const sum = (part: (o: Option) => number) => picked.reduce((total, o) => total + part(o), 0);
+			const cost: Cost = {
+				addedSteps: added,
+				drawbacks: sum((o) => o.drawbacks.length),
+				cautions: sum((o) => o.cautions),
+				preference: sum((o) => o.preference),
+				harshness: sum((o) => o.harshness)
+			};
+			record({ ...cost, options: picked, score: scoreOf(cost) });
 			return;
 		}
-		options[depth]!.forEach((option, i) => {
-			for (let j = 0; j < depth; j++) if (!fits(depth, i, j, chosen[j]!)) return;
+		const list = options[depth]!;
+		const scores = optionScores[depth]!;
+		const steps = stepScore(installs.size + removals.size);
+		for (let i = 0; i < list.length; i++) {
+			// Options come cheapest first and adding one never removes a step: once one cannot
+			// beat the worst kept choice, none after it can.
+			if (best.length >= keep && steps + below + scores[i]! + (rest[depth + 1] ?? 0) >= worst())
+				break;
+			let fitsAll = true;
+			for (let j = 0; j < depth && fitsAll; j++) fitsAll = fits(depth, i, j, chosen[j]!);
+			if (!fitsAll) continue;
+			const option = list[i]!;
 			const install = installKeys[depth]![i]!;
 			const removal = removalKeys[depth]![i]!;
-			const installClass = installClassOf(needs[depth]!);
+			const installClass = classOf[depth]!;
 			chosen.push(i);
 			installs.add(install);
 			removals.add(removal);
 			installClassesUsed.add(installClass);
 			removalPlaces.add(option.removeAt);
-			visit(depth + 1, cautions + option.cautions, harshness + option.harshness);
+			visit(depth + 1, below + scores[i]!);
 			removalPlaces.remove(option.removeAt);
 			installClassesUsed.remove(installClass);
 			removals.remove(removal);
 			installs.remove(install);
 			chosen.pop();
-		});
+		}
 	};
 	// Plans that differ only in which recipe takes the same PGs off read as one plan to a chemist:
 	// keep the cheapest of each assignment, so the list offers real alternatives.
+	const signatures: string[] = [];
 	const record = (choice: Choice) => {
-		const same = best.findIndex((other) => signature(other.options) === signature(choice.options));
+		const mine = signature(choice.options);
+		const same = signatures.indexOf(mine);
 		if (same >= 0) {
 			if (best[same]!.score <= choice.score) return;
 			best.splice(same, 1);
+			signatures.splice(same, 1);
 		}
-		best.push(choice);
-		best.sort((a, b) => a.score - b.score);
-		if (best.length > keep) best.pop();
+		// Insert in score order, after equal scores: ties stay in the order they were found.
+		let at = best.length;
+		while (at > 0 && best[at - 1]!.score > choice.score) at--;
+		best.splice(at, 0, choice);
+		signatures.splice(at, 0, mine);
+		if (best.length > keep) {
+			best.pop();
+			signatures.pop();
+		}
 	};
-	visit(0, 0, 0);
+	visit(0, 0);
 	return best;
+}
+
+/**
+ * Install classes for the lower bound: needs at one place whose options could share an install
+ * step (some install key in common, directly or through another need) form one class, and each
+ * class needs a step of its own, e.g. two ketones with the same ketalisations on offer → one.
+ * Keys of different classes never meet, so counting one step per class stays a lower bound.
+ */
+function installClasses(needs: Need[], installKeys: string[][]): string[] {
+	const parent = needs.map((_, i) => i);
+	const root = (i: number): number => (parent[i] === i ? i : (parent[i] = root(parent[i]!)));
+	const holder = new Map<string, number>();
+	installKeys.forEach((keys, i) => {
+		for (const key of keys) {
+			const other = holder.get(key);
+			if (other === undefined) holder.set(key, i);
+			else parent[root(i)] = root(other);
+		}
+	});
+	return needs.map((need, i) => `${need.installAt}\u0001${root(i)}`);
 }
 
 const signature = (options: Option[]) => options.map((o) => o.pg).join('|');

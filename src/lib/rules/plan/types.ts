@@ -61,6 +61,11 @@ export type Option = {
 	preference: number;
 	/** A drawback to say alongside the choice, e.g. THP's new stereocentre on a chiral alcohol; often empty. */
 	why: string;
+	/** Which free groups the install recipe converts, and which it takes first (rules/protecting-groups.json `takes`, `prefers`). */
+	selectivity: {
+		takes: readonly string[];
+		prefers: readonly { group: string; over: readonly string[]; reason: string }[];
+	};
 };
 
 export type Protection = {
