@@ -7,7 +7,7 @@ import { scoreOf, type Choice } from '../../src/lib/rules/plan/search';
 import type { Need, Option } from '../../src/lib/rules/plan/types';
 import { checkRouteDocument } from '../../src/lib/server/services/check';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
-import { judgementTable } from '../factories/judgement-rules';
+import { loadRuleTable } from '../../src/lib/rules/table';
 import { line } from '../factories/plan-routes';
 
 // The planner's judgement against textbook practice: which PG and which recipe a chemist would
@@ -16,7 +16,7 @@ import { line } from '../factories/plan-routes';
 // tests/factories/judgement-rules.ts until issue 12's data lands in rules/; every plan is
 // re-checked against that same table.
 
-const table = judgementTable();
+const table = loadRuleTable();
 const rules = checkRulesFrom(table);
 const verify = (route: RouteDocument) => {
 	for (const step of checkRouteDocument(route, rules)) {

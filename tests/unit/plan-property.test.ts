@@ -6,7 +6,7 @@ import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
 import { planRoute, type Plan } from '../../src/lib/rules/plan';
 import { checkRouteDocument } from '../../src/lib/server/services/check';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
-import { judgementTable } from '../factories/judgement-rules';
+import { loadRuleTable } from '../../src/lib/rules/table';
 import { line } from '../factories/plan-routes';
 
 // Property: whatever route the planner is given, every plan it returns re-checks with no
@@ -106,7 +106,7 @@ const WORK = [
 ];
 
 describe('plan 1 carries no drawback an equally long plan avoids', () => {
-	const table = judgementTable();
+	const table = loadRuleTable();
 	const rules = checkRulesFrom(table);
 	const verify = (route: RouteDocument) => {
 		for (const step of checkRouteDocument(route, rules)) {

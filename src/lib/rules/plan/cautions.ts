@@ -4,7 +4,7 @@
 
 import type { CheckRules } from '../check/types';
 import type { RouteTree } from './tree';
-import type { Need } from './types';
+import type { Need, Plan } from './types';
 
 /** Why a step is a caution for a need, from the rule table, e.g. "MeMgBr: N–H deprotonated, consuming the reagent". */
 export function cautionReason(rules: CheckRules, tree: RouteTree, need: Need): string {
@@ -35,3 +35,48 @@ export const leftFree = (rules: CheckRules, tree: RouteTree, need: Need) =>
 /** Said where no PG in the table can mask a caution-level need. */
 export const cannotMask = (rules: CheckRules, tree: RouteTree, need: Need, why: string) =>
 	`The free ${rules.groupLabel(need.group)} stays free with a caution (${cautionReason(rules, tree, need)}): ${why}.`;
+
+/** A set of needs the planner solves for: `usual` masks the cautions chemists usually mask, `free` none, `all` every one. */
+export type Tier = { kind: 'usual' | 'free' | 'all'; needs: Need[] };
+
+const labels = (rules: CheckRules, needs: Need[]) =>
+	[...new Set(needs.map((n) => rules.groupLabel(n.group)))].join(' and ');
+
+/**
+ * The tiers' plans as one ranked list: ranks run on, "Ranked below plan k" points at the right
+ * plan, and where one tier gives way to the next the plan says why, e.g. "Ranked below plan 3: it
+ * leaves the free primary alkylamine unmasked, where chemists usually mask it (…)".
+ */
+export function joinTiers(
+	rules: CheckRules,
+	tree: RouteTree,
+	tiers: Tier[],
+	solved: Plan[][],
+	cautions: { usual: Need[]; other: Need[] }
+): Plan[] {
+	const below = (kind: Tier['kind'], who: string) =>
+		kind === 'free'
+			? `${who} leaves the free ${labels(rules, cautions.usual)} unmasked, where chemists usually mask it (${cautionReason(rules, tree, cautions.usual[0]!)}).`
+			: `${who} adds steps to mask the ${labels(rules, cautions.other)} as well, which the rule table rates only a caution.`;
+	const out: Plan[] = [];
+	solved.forEach((plans, t) => {
+		const offset = out.length;
+		const next = solved.slice(t + 1).findIndex((p) => p.length > 0);
+		plans.forEach((plan, k) => {
+			let rationale = plan.rationale.map((line) =>
+				line.replace(
+					/^Ranked below plan (\d+):/,
+					(_, n: string) => `Ranked below plan ${Number(n) + offset}:`
+				)
+			);
+			if (k === 0 && offset > 0) {
+				rationale = rationale.filter((line) => !line.startsWith('Plan 1 comes first:'));
+				rationale.push(`Ranked below plan ${offset}: ${below(tiers[t]!.kind, 'it')}`);
+			}
+			if (offset + k === 0 && plans.length === 1 && next >= 0)
+				rationale.unshift(`Plan 1 comes first: ${below(tiers[t + 1 + next]!.kind, 'plan 2')}`);
+			out.push({ ...plan, rank: offset + k + 1, rationale });
+		});
+	});
+	return out;
+}

@@ -3,7 +3,7 @@
 
 import type { RouteDocument } from '../../route/document';
 import { checkRulesFrom } from '../check/rules-adapter';
-import { cannotMask, leftFree, maskedBecause } from './cautions';
+import { cannotMask, joinTiers, leftFree, maskedBecause, type Tier } from './cautions';
 import type { CheckRules } from '../check/types';
 import { loadRuleTable, type RuleTable } from '../table';
 import { clearDrawCache } from './draw';
@@ -54,25 +54,22 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 	const other = maskable.filter((n) => !n.usuallyMasked);
 	// Tiers, best first: mask what chemists usually mask; leave every caution free; mask them all.
 	// Each tier holds the one before it or is held by it, so equal sizes mean equal tiers.
-	const tiers = [[...required, ...usual], required, [...required, ...usual, ...other]].filter(
-		(tier, i, all) => all.findIndex((t) => t.length === tier.length) === i
-	);
-	const plans: Plan[] = [];
-	const seen = new Set<string>();
+	const tiers: Tier[] = [
+		{ kind: 'usual', needs: [...required, ...usual] },
+		{ kind: 'free', needs: required },
+		{ kind: 'all', needs: [...required, ...usual, ...other] }
+	].filter((tier, i, all) => all.findIndex((t) => t.needs.length === tier.needs.length) === i) as Tier[];
+	const solvedTiers: Plan[][] = [];
 	let firstUnsolved: Solved | undefined;
 	tiers.forEach((tier, i) => {
-		const room = limit - plans.length - (tiers.length - 1 - i);
-		if (room <= 0) return;
-		const notes = [...maskable.filter((n) => !tier.includes(n)).map((n) => leftFree(rules, tree, n)), ...cannot];
-		const solved = solve(ctx, tier, room, notes);
+		const room = limit - solvedTiers.flat().length - (tiers.length - 1 - i);
+		const notes = [...maskable.filter((n) => !tier.needs.includes(n)).map((n) => leftFree(rules, tree, n)), ...cannot];
+		const solved = room > 0 ? solve(ctx, tier.needs, room, notes) : { plans: [] };
 		if (!solved.plans.length) firstUnsolved ??= solved;
-		for (const plan of solved.plans) {
-			const key = plan.protections.map((p) => `${p.protectingGroup}@${p.atoms.join(',')}`).join('|');
-			if (!seen.has(key)) plans.push(plan);
-			seen.add(key);
-		}
+		solvedTiers.push(solved.plans);
 	});
-	if (plans.length) return { plans: plans.map((plan, i) => ({ ...plan, rank: i + 1 })) };
+	const plans = joinTiers(rules, tree, tiers, solvedTiers, { usual, other });
+	if (plans.length) return { plans };
 	return firstUnsolved ?? { plans: [] };
 }
 
