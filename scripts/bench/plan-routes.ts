@@ -5,19 +5,21 @@
 import type { RouteDocument } from '../../src/lib/route/document';
 import { line } from '../../tests/factories/plan-routes';
 
-// Ten sensitive group instances (five ketones and five primary alcohols standing by a Grignard
-// addition, then a Swern oxidation of the alcohol it makes), invented OG-2031 intermediates.
+// Ten sensitive group instances (five ketones and five primary alcohols standing by a double
+// Grignard addition to a methyl ester, then a POCl3 dehydration of the tertiary alcohol it
+// makes), invented OG-2031 intermediates. (An aldehyde start would leave no plan at all: a
+// ketone cannot be ketalised beside a free aldehyde, which takes the diol first.)
 const ARMS = 'C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C(CC(C)=O)C(CCO)C';
 export const STRESS_ROUTE: RouteDocument = {
 	name: 'OG-2031 ten-arm bench',
 	intermediates: [
-		{ id: 'a', structure: `O=CC${ARMS}` },
-		{ id: 'b', structure: `CC(O)C${ARMS}` },
-		{ id: 'c', structure: `CC(=O)C${ARMS}` }
+		{ id: 'a', structure: `COC(=O)CC${ARMS}` },
+		{ id: 'b', structure: `CC(C)(O)CC${ARMS}` },
+		{ id: 'c', structure: `CC(C)=CC${ARMS}` }
 	],
 	steps: [
-		{ id: 'grignard', from: ['a'], to: 'b', reagents: 'MeMgBr, THF' },
-		{ id: 'swern', from: ['b'], to: 'c', reagents: '(COCl)2, DMSO, Et3N' }
+		{ id: 'grignard', from: ['a'], to: 'b', reagents: 'MeMgBr (3 equiv), THF' },
+		{ id: 'dehydration', from: ['b'], to: 'c', reagents: 'POCl3, pyridine' }
 	]
 };
 

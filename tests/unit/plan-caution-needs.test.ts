@@ -23,11 +23,14 @@ describe('caution-level needs', () => {
 		const answer = planRouteDocument(route);
 		expect(answer.plans.length).toBeGreaterThan(1);
 		expect(masks(answer.plans[0]!)).toEqual(['amine-primary']);
-		expect(answer.plans[0]!.rationale[0]).toMatch(/only a caution .*MeMgBr.*N–H/);
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/only a caution .*MeMgBr.*N–H/);
 		const last = answer.plans.at(-1)!;
 		expect(last.protections).toEqual([]);
-		expect(last.rationale.join(' ')).toMatch(
+		expect(last.rationale[0]).toMatch(
 			/^Leaves the free primary alkylamine as it is, accepting a caution \(MeMgBr/
+		);
+		expect(last.rationale.at(-1)).toMatch(
+			/^Ranked below plan \d: it leaves the free primary alkylamine unmasked, where chemists usually mask it/
 		);
 		expect(said(answer)).not.toContain('nothing needs masking');
 	});
@@ -45,6 +48,7 @@ describe('caution-level needs', () => {
 		);
 		expect(answer.plans[0]!.protections).toEqual([]);
 		expect(answer.plans[0]!.rationale).toEqual([
+			'Plan 1 comes first: plan 2 adds steps to mask the secondary alcohol as well, which the rule table rates only a caution.',
 			expect.stringMatching(
 				/^Leaves the free secondary alcohol as it is, accepting a caution \(LiAlH4 in step "s1" \(LiAlH4, THF\): The O–H consumes hydride/
 			)
@@ -69,7 +73,7 @@ describe('caution-level needs', () => {
 		const answer = planRouteDocument(line(['CC(=O)CCCC=C', 'CC(=O)CCCCC'], ['H2, Pd/C, EtOAc']));
 		expect(answer.plans[0]!.protections).toEqual([]);
 		expect(answer.plans[0]!.rationale.join(' ')).toMatch(
-			/^Leaves the free ketone as it is, accepting a caution/
+			/Leaves the free ketone as it is, accepting a caution/
 		);
 		expect(said(answer)).not.toContain('nothing needs masking');
 	});

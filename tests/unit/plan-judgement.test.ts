@@ -12,9 +12,8 @@ import { line } from '../factories/plan-routes';
 
 // The planner's judgement against textbook practice: which PG and which recipe a chemist would
 // reach for first. "Greene's" is Wuts, Greene's Protective Groups in Organic Synthesis, 5th ed.
-// (from memory). The judgement rows (preferences, takes/prefers, drawbacks, concerns) come from
-// tests/factories/judgement-rules.ts until issue 12's data lands in rules/; every plan is
-// re-checked against that same table.
+// (from memory). The judgement rows (preferences, takes/prefers, drawbacks, concerns) are the
+// bundled ones in rules/; every plan is re-checked against that same table.
 
 const table = loadRuleTable();
 const rules = checkRulesFrom(table);
@@ -36,10 +35,9 @@ describe('the first plan is the one a chemist would sign', () => {
 		expect(order[0]).toBe('TBS');
 		expect(answer.plans[0]!.protections[0]!.install.reagents).toBe('TBSCl, imidazole, DMF');
 		// Imidazole does not count against the ketone, so no caution sets TBS behind THP.
-		expect(order.indexOf('TES')).toBeGreaterThan(0);
-		expect(order.indexOf('THP')).toBeGreaterThan(order.indexOf('TES'));
+		for (const worse of ['TES', 'THP', 'TMS']) expect(order.indexOf(worse)).not.toBe(0);
 		expect(answer.plans[0]!.rationale[0]).toMatch(
-			/^Plan 1 comes first: TBS is preferred to \S+ for a primary alcohol: TBS ethers survive/
+			/^Plan 1 comes first: TBS is preferred to \S+ for a primary alcohol: TBS is the general-purpose alcohol protection/
 		);
 	});
 
@@ -63,7 +61,7 @@ describe('the first plan is the one a chemist would sign', () => {
 		expect(order.indexOf('dimethyl-acetal')).toBeGreaterThan(order.indexOf('dithiane'));
 		const acetal = answer.plans.find((p) => pgs(p) === 'dimethyl-acetal')!;
 		expect(acetal.rationale.at(-1)).toMatch(
-			/^Ranked below plan \d: its dimethyl-acetal has a drawback: acyclic acetals hydrolyse/
+			/^Ranked below plan \d: its dimethyl-acetal has a drawback: an acyclic dimethyl acetal or ketal hydrolyses/
 		);
 	});
 
@@ -72,17 +70,20 @@ describe('the first plan is the one a chemist would sign', () => {
 			line(['OCCCCC(=O)OC(C)C', 'OCCCCC(C)C(=O)OC(C)C'], ['LDA, THF, –78 °C; then MeI'])
 		);
 		const bn = answer.plans.find((p) => pgs(p) === 'Bn');
-		expect(bn?.protections[0]!.install.reagents).toBe('BnOC(=NH)CCl3, TfOH, CH2Cl2');
-		for (const p of answer.plans) expect(p.protections[0]!.install.reagents).not.toMatch(/NaH/);
-		expect(answer.plans[0]!.rationale.join(' ')).toContain(
-			'PMB rejected: installing it (NaH, PMBCl, DMF) would also attack the free carboxylic ester'
-		);
+		// Acid (the imidate) or silver oxide: either puts Bn on without an alkoxide.
+		expect(bn?.protections[0]!.install.reagents).toMatch(/^(BnOC\(=NH\)CCl3, TfOH|Ag2O, BnBr)/);
+		// NaH beside an ester is only a caution in the table (Claisen, transesterification): a NaH
+		// recipe may be offered below, never ahead of the plans that need no strong base.
+		const first = answer.plans.findIndex((p) => /NaH/.test(p.protections[0]!.install.reagents));
+		expect(first === -1 || first > answer.plans.indexOf(bn!)).toBe(true);
+		expect(answer.plans[0]!.protections[0]!.install.reagents).not.toMatch(/NaH/);
 	});
 
 	it('benzylates an alcohol beside a ketone with the trichloroacetimidate under acid, not NaH/BnBr — Iversen & Bundle, J. Chem. Soc., Chem. Commun. 1981, 1240', () => {
 		const answer = plan(line(['OCCCCC(C)=O', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']));
 		const bn = answer.plans.find((p) => pgs(p) === 'Bn');
-		expect(bn?.protections[0]!.install.reagents).toBe('BnOC(=NH)CCl3, TfOH, CH2Cl2');
+		// Acid (the imidate) or silver oxide: either puts Bn on without an alkoxide.
+		expect(bn?.protections[0]!.install.reagents).toMatch(/^(BnOC\(=NH\)CCl3, TfOH|Ag2O, BnBr)/);
 		for (const p of answer.plans) expect(p.protections[0]!.install.reagents).not.toMatch(/NaH/);
 	});
 
@@ -102,12 +103,13 @@ describe('the first plan is the one a chemist would sign', () => {
 	it("protects a primary alcohol beside a free secondary one only with a recipe that takes the primary first, never THP or MOM — Greene's; Chaudhary & Hernandez, Tetrahedron Lett. 1979, 95 (TrCl, DMAP)", () => {
 		const answer = plan(line(['OCCCCC(C)O', 'OCCCCC(C)=O'], ['(COCl)2, DMSO, Et3N']));
 		expect(answer.plans.length).toBeGreaterThan(0);
-		expect(pgs(answer.plans[0]!)).toBe('TBDPS');
-		expect(answer.plans.map(pgs)).toContain('Tr');
+		// TBSCl (at 0 °C), TBDPSCl and TrCl take the primary OH first (rules/protecting-groups.json `prefers`).
+		expect(['TBS', 'TBDPS', 'Tr']).toContain(pgs(answer.plans[0]!));
+		expect(answer.plans.map(pgs)).toEqual(expect.arrayContaining(['TBDPS', 'Tr']));
 		for (const p of answer.plans) expect(['THP', 'MOM', 'TMS', 'TES']).not.toContain(pgs(p));
-		const said = answer.plans[0]!.rationale.join(' ');
+		const said = answer.plans.flatMap((p) => p.rationale).join(' ');
 		expect(said).toMatch(
-			/TBS rejected: installing it \(TBSCl, imidazole, DMF\) would also put TBS on the free secondary alcohol/
+			/TES rejected: installing it \(TESCl, imidazole, DMF\) would also put TES on the free secondary alcohol/
 		);
 	});
 
@@ -122,16 +124,8 @@ describe('the first plan is the one a chemist would sign', () => {
 		const onSecondary = step!.clashes.filter((c) => c.subject === 'alcohol-secondary');
 		expect(onSecondary.map((c) => c.severity)).toEqual(['caution']);
 		expect(onSecondary[0]!.message).toMatch(
-			/^TBDPSCl takes the free primary alcohol before the free secondary alcohol, which this step leaves alone: The bulky chloride/
+			/^TBDPSCl takes the free primary alcohol before the free secondary alcohol, which this step leaves alone: TBDPSCl silylates a primary alcohol selectively/
 		);
-		// The bundled table says nothing about selectivity yet: there the same step still clashes.
-		const [plain] = checkRouteDocument(
-			line(
-				['OCCCCC(C)O', 'CC(C)(C)[Si](c1ccccc1)(c1ccccc1)OCCCCC(C)O'],
-				['TBDPSCl, imidazole, DMF']
-			)
-		);
-		expect(plain!.clashes.find((c) => c.subject === 'alcohol-secondary')!.severity).toBe('clash');
 	});
 
 	it("does not ketalise a ketone beside a free aldehyde — Greene's, aldehydes are acetalised before ketones", () => {
@@ -140,10 +134,6 @@ describe('the first plan is the one a chemist would sign', () => {
 		expect(answer.plans).toEqual([]);
 		expect(answer.unsolved![0]!.reason).toContain(
 			'dioxolane rejected: installing it (ethylene glycol, TsOH, toluene, Dean–Stark) would take the free aldehyde before the ketone'
-		);
-		// The bundled table knows no preference, but the recipe still takes the aldehyde as well.
-		expect(planRouteDocument(doc).unsolved![0]!.reason).toContain(
-			'would also put dioxolane on the free aldehyde'
 		);
 	});
 
@@ -203,7 +193,7 @@ describe('the ranking', () => {
 		);
 		const tes = choice(option('TES', { preference: 4 }), { preference: 4 });
 		expect(said(tbs, tes)[0]![0]).toMatch(
-			/^Plan 1 comes first: TBS is preferred to TES for a secondary alcohol: TBS ethers survive chromatography/
+			/^Plan 1 comes first: TBS is preferred to TES for a secondary alcohol: TBS is the general-purpose alcohol protection/
 		);
 		expect(said(tbs, tes)[1]!.at(-1)).toMatch(
 			/^Ranked below plan 1: TBS is preferred to TES for a secondary alcohol/

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { perceiveText } from '../../src/lib/chem';
 import type { RouteDocument } from '../../src/lib/route/document';
 import { planRoute } from '../../src/lib/rules/plan';
+import { scoreOf } from '../../src/lib/rules/plan/search';
 import { firstClash, planRouteDocument } from '../../src/lib/server/services/plan';
 import { line } from '../factories/plan-routes';
 
@@ -116,10 +117,11 @@ describe('strategy cases from textbook practice', () => {
 		expect(new Set(pgsOf(answer))).toEqual(new Set(['S-Tr']));
 	});
 
-	it('does not benzylate a phenol with NaH while a ketone is free — common practice, NaH enolises ketones', () => {
+	it('does not benzylate a phenol with NaH while a ketone is free, but by a recipe without strong base — common practice, NaH enolises ketones; Greene\'s, Ag2O/BnBr benzylation (from memory)', () => {
 		const answer = planRouteDocument(line(['Oc1ccc(CC(C)=O)cc1', 'Oc1ccc(CC(C)(O)C)cc1'], ['MeMgBr, THF']));
-		expect(pgsOf(answer)).not.toContain('Bn');
-		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/Bn rejected: installing it \(NaH, BnBr, DMF\) would also attack the free ketone/);
+		const benzyl = answer.plans.flatMap((p) => p.protections).filter((x) => x.protectingGroup === 'Bn');
+		expect(benzyl.length).toBeGreaterThan(0);
+		for (const bn of benzyl) expect(bn.install.reagents).not.toMatch(/NaH/);
 	});
 
 	it('carries a carboxylic acid through a Grignard step only as the hindered tBu ester, with cautions — Clayden, esters are attacked by organometallics; Lundt et al. 1978, tertiary alcohols survive TFA/CH2Cl2 (from memory)', () => {
@@ -134,15 +136,15 @@ describe('strategy cases from textbook practice', () => {
 		expect(answer.plans[0]!.rationale.join(' ')).toContain('methyl-ester rejected');
 	});
 
-	it('counts THP\'s new stereocentre as a caution on a chiral substrate only — Greene\'s, THP ethers of chiral alcohols are diastereomer mixtures (from memory)', () => {
+	it('counts THP\'s new stereocentre as a drawback on a chiral substrate only — Greene\'s, THP ethers of chiral alcohols are diastereomer mixtures (from memory)', () => {
 		const note = 'THP puts a new stereocentre at its acetal carbon';
 		const thp = (answer: ReturnType<typeof planRoute>) => answer.plans.find((p) => p.protections[0]!.protectingGroup === 'THP')!;
 		const chiral = planRoute(line(['C[C@H](O)CCC(=O)OC', 'C[C@H](O)CCC(C)(C)O'], ['MeMgBr, THF']), { verify: firstClash, plans: 20 });
 		const achiral = planRoute(line(['OCCCCC(=O)OC', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']), { verify: firstClash, plans: 20 });
 		expect(thp(chiral).rationale[0]).toContain(note);
 		expect(thp(achiral).rationale[0]).not.toContain(note);
-		// One caution more than on the achiral alcohol, so a silyl ether ranks above THP there.
-		expect(thp(chiral).score - thp(achiral).score).toBe(100);
+		// One drawback more than on the achiral alcohol (a tier above any caution), so a silyl ether ranks above THP there.
+		expect(thp(chiral).score - thp(achiral).score).toBe(scoreOf({ addedSteps: 0, drawbacks: 1, cautions: 0, preference: 0, harshness: 0 }));
 		expect(chiral.plans[0]!.protections[0]!.protectingGroup).not.toBe('THP');
 	});
 
@@ -202,7 +204,9 @@ describe('strategy cases from textbook practice', () => {
 	});
 
 	it('masks two ketones in one ketalisation and frees them in one hydrolysis — Greene\'s, acetals form and hydrolyse under the same acid catalysis (from memory)', () => {
-		const answer = planRouteDocument(line(['CC(=O)CCC(CC=O)CCC(C)=O', 'CC(=O)CCC(CC(C)O)CCC(C)=O'], ['MeMgBr, THF']));
+		// An ester, not an aldehyde, is what the Grignard reagent attacks: beside a free aldehyde no
+		// ketone can be ketalised (the aldehyde takes the diol first; tests/unit/plan-judgement.test.ts).
+		const answer = planRouteDocument(line(['CC(=O)CCC(CC(=O)OC)CCC(C)=O', 'CC(=O)CCC(CC(C)(C)O)CCC(C)=O'], ['MeMgBr, THF']));
 		const best = answer.plans[0]!;
 		expect(best.protections).toHaveLength(2);
 		expect(best.protections[0]!.protectingGroup).toBe(best.protections[1]!.protectingGroup);
