@@ -80,9 +80,14 @@ export function harm(
 			masked.add(setKey(atoms));
 	});
 	let cautions = 0;
+	const ownAtoms = need.atomsAt.get(node) ?? [];
 	for (const unit of freeUnits(structure)) {
 		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) continue;
-		const taken = unit.members.filter((g) => takes.includes(g));
+		// The diol this need is one OH of (a selective primary-OH protection): only its other
+		// alcohol is exposed, not the need itself nor the diol as a unit.
+		const around = ownAtoms.length > 0 && ownAtoms.every((a) => unit.atoms.includes(a));
+		const members = around ? otherMembers(unit.members, need.group) : unit.members;
+		const taken = members.filter((g) => takes.includes(g));
 		if (taken.length) {
 			for (const group of taken) {
 				const first = prefersOver(recipe, group, need.group);
@@ -100,9 +105,9 @@ export function harm(
 			cautions++; // taken selectively: the slower group is worth watching (the check says so too)
 			continue;
 		}
-		if (phase === 'install' && unit.members.every((g) => drawn.includes(g))) continue;
+		if (phase === 'install' && members.every((g) => drawn.includes(g))) continue;
 		for (const c of conds) {
-			for (const member of unit.members) {
+			for (const member of members) {
 				const rule = rules.reactivity(member, c.id, c.explicit ? [] : c.reagents);
 				if (rule?.rating === 'reacts')
 					return {
@@ -127,6 +132,13 @@ export function harm(
 		}
 	}
 	return { blocked: '', cautions };
+}
+
+/** A diol's members other than the diol itself and one instance of `group`, e.g. → `['alcohol-secondary']`. */
+function otherMembers(members: readonly string[], group: string): string[] {
+	const rest = members.filter((g) => !g.startsWith('diol-'));
+	const at = rest.indexOf(group);
+	return at < 0 ? rest : [...rest.slice(0, at), ...rest.slice(at + 1)];
 }
 
 // Reading a recipe's text is the same for every need and every point: read it once per rule view.
