@@ -2,7 +2,7 @@
 // narrow `CheckRules` view the check reads.
 
 import { perceptionRules } from '../../chem/patterns';
-import type { ConditionId, FreeGroupId, ProtectingGroupId } from '../ids';
+import type { ConditionId, FreeGroupId, PgSite, ProtectingGroupId } from '../ids';
 import { loadRuleTable, type RuleTable } from '../table';
 import type { CheckRules } from './types';
 
@@ -19,16 +19,24 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 	return {
 		conditionIds,
 		conditionLabel: (id) => table.condition(id as ConditionId).label,
-		stability: (pg, condition, reagents, site) =>
-			table.stabilityOf(pg as ProtectingGroupId, condition as ConditionId, reagents, site),
+		// The planner asks the same pairs thousands of times per route: the table is frozen, so
+		// each answer is worked out once per view.
+		stability: remembered((pg, condition, reagents = [], site) =>
+			table.stabilityOf(
+				pg as ProtectingGroupId,
+				condition as ConditionId,
+				reagents,
+				site as PgSite | undefined
+			)
+		),
 		protectingGroupLabel: (pg) => pgLabels.get(pg) ?? pg,
-		reactivity: (group, condition, reagents) => {
+		reactivity: remembered((group, condition, reagents = []) => {
 			// Perception may know groups the reactivity table has no row for: no row, no problem known.
 			const answer = table.reactivityOf(group as FreeGroupId, condition as ConditionId, reagents);
 			if (!answer) return null;
 			const { rating, reason, source, usuallyMasked } = answer;
 			return usuallyMasked ? { rating, reason, source, usuallyMasked } : { rating, reason, source };
-		},
+		}),
 		// Lower-case the first letter only, for mid-sentence use: "the free alkene (non-aromatic C=C)".
 		groupLabel: (group) => lowerFirst(groupLabels.get(group) ?? group),
 		installPreference: (reagents, condition, first, over) => {
@@ -82,4 +90,22 @@ function selectiveInstalls(table: RuleTable): SelectiveInstall[] {
 			);
 		})
 	);
+}
+
+// Enough for every PG × class × reagent set a busy server meets; past it, start afresh.
+const REMEMBERED_ANSWERS = 100_000;
+
+/** `answer` with its results kept by argument, e.g. `stability('TBS', 'fluoride', ['TBAF'])`. */
+function remembered<R>(
+	answer: (id: string, condition: string, reagents?: readonly string[], site?: string) => R
+) {
+	const kept = new Map<string, R>();
+	return (id: string, condition: string, reagents: readonly string[] = [], site?: string): R => {
+		const key = `${id}\u0001${condition}\u0001${reagents.join('\u0002')}\u0001${site ?? ''}`;
+		if (kept.has(key)) return kept.get(key)!;
+		if (kept.size >= REMEMBERED_ANSWERS) kept.clear();
+		const result = answer(id, condition, reagents, site);
+		kept.set(key, result);
+		return result;
+	};
 }

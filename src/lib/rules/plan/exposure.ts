@@ -143,12 +143,23 @@ function otherMembers(members: readonly string[], group: string): string[] {
 
 // Reading a recipe's text is the same for every need and every point: read it once per rule view.
 const readRecipes = new WeakMap<CheckRules, Map<string, ReturnType<typeof stepConditions>>>();
-function recipeConditions(rules: CheckRules, recipe: Recipe) {
+export function recipeConditions(
+	rules: CheckRules,
+	recipe: Pick<Recipe, 'reagents' | 'conditions'>
+) {
+	// The search asks per option pair: remember the answer on the recipe object itself first.
+	const known = byObject.get(recipe);
+	if (known && known.rules === rules) return known.conditions;
 	let read = readRecipes.get(rules);
 	if (!read) readRecipes.set(rules, (read = new Map()));
 	const key = `${recipe.reagents}\u0001${recipe.conditions.join('+')}`;
 	let conditions = read.get(key);
 	if (!conditions)
 		read.set(key, (conditions = stepConditions(rules, recipe.reagents, recipe.conditions)));
+	byObject.set(recipe, { rules, conditions });
 	return conditions;
 }
+const byObject = new WeakMap<
+	object,
+	{ rules: CheckRules; conditions: ReturnType<typeof stepConditions> }
+>();

@@ -4,7 +4,7 @@
 
 import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
-import { freedEarlyAt, maskedAt } from './exposure';
+import { freedEarlyAt, maskedAt, recipeConditions } from './exposure';
 import { prefersOver } from './recipes';
 import type { Need, Option } from './types';
 
@@ -100,41 +100,49 @@ export function conflict(
 	// A group whose mask came off early is free again for a's install or removal.
 	if (
 		freedEarlyAt(nb, ob.removeAt, na.installAt) &&
-		nb.members.some((g) => reacts(rules, g, oa.install.conditions))
+		nb.members.some((g) => reacts(rules, g, oa.install))
 	) {
 		return `putting the ${oa.pg} on (${oa.install.reagents}) would attack the ${rules.groupLabel(nb.group)} once its ${ob.pg} is off`;
 	}
 	if (
 		freedEarlyAt(nb, ob.removeAt, oa.removeAt) &&
-		nb.members.some((g) => reacts(rules, g, oa.removal.conditions))
+		nb.members.some((g) => reacts(rules, g, oa.removal))
 	) {
 		return `taking the ${oa.pg} off (${oa.removal.reagents}) would attack the ${rules.groupLabel(nb.group)} once its ${ob.pg} is off`;
 	}
 	if (
 		maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt) &&
 		!sameInstall &&
-		strips(rules, oa.install.conditions, ob.pg, nb.group)
+		strips(rules, oa.install, ob.pg, nb.group)
 	) {
 		return `putting the ${oa.pg} on (${oa.install.reagents}) would strip the ${ob.pg} on the ${rules.groupLabel(nb.group)}`;
 	}
 	if (
 		maskedAt(needs, b, oa.removeAt, a, 'removal', ob.removeAt) &&
 		!sameRemoval &&
-		strips(rules, oa.removal.conditions, ob.pg, nb.group)
+		strips(rules, oa.removal, ob.pg, nb.group)
 	) {
 		return `taking the ${oa.pg} off (${oa.removal.reagents}) would strip the ${ob.pg} on the ${rules.groupLabel(nb.group)}`;
 	}
 	return null;
 }
 
-function reacts(rules: CheckRules, group: string, conditions: string[]): boolean {
-	for (const c of conditions) if (rules.reactivity(group, c)?.rating === 'reacts') return true;
+// Judged by the recipe's own reagents, as the check judges the step it becomes (TBAF is not all
+// of `fluoride`, HF·pyridine not all of `acid-mild`).
+type RecipeText = { reagents: string; conditions: string[] };
+
+function reacts(rules: CheckRules, group: string, recipe: RecipeText): boolean {
+	for (const c of recipeConditions(rules, recipe))
+		if (rules.reactivity(group, c.id, c.explicit ? [] : c.reagents)?.rating === 'reacts')
+			return true;
 	return false;
 }
 
-function strips(rules: CheckRules, conditions: string[], pg: string, group: string): boolean {
-	for (const c of conditions)
-		if (rules.stability(pg, c, [], siteOfGroup(group)).rating === 'labile') return true;
+function strips(rules: CheckRules, recipe: RecipeText, pg: string, group: string): boolean {
+	const site = siteOfGroup(group);
+	for (const c of recipeConditions(rules, recipe))
+		if (rules.stability(pg, c.id, c.explicit ? [] : c.reagents, site).rating === 'labile')
+			return true;
 	return false;
 }
 
