@@ -3,6 +3,7 @@
 // "Plan 1 comes first: plan 2's THP has a drawback: THP puts a new stereocentre …".
 
 import type { CheckRules } from '../check/types';
+import { PROTECTING_GROUP_IDS } from '../ids';
 import type { RuleTable } from '../table';
 import type { Choice } from './search';
 import type { Drawback, Need, Plan } from './types';
@@ -97,6 +98,9 @@ function extraDrawbacks(upper: Choice, lower: Choice): { pg: string; drawback: D
 	});
 }
 
+/** Mid-sentence case for an ordinary first word ("A cyclic …" → "a cyclic …"); a PG name ("Boc is …") keeps its case. */
 const lowerFirst = (text: string) =>
-	/^[A-Z][a-z]/.test(text) ? text[0]!.toLowerCase() + text.slice(1) : text;
+	/^[A-Z][a-z]/.test(text) && !PROTECTING_GROUP_IDS.some((id) => text.startsWith(`${id} `))
+		? text[0]!.toLowerCase() + text.slice(1)
+		: text;
 const article = (label: string) => `${/^[aeiou]/i.test(label) ? 'an' : 'a'} ${label}`;
