@@ -79,10 +79,12 @@ export function harm(
 		if (atoms && j !== index && (coInstall || maskedAt(needs, j, node, index, phase)))
 			masked.add(setKey(atoms));
 	});
+	const ownAtoms = need.atomsAt.get(node) ?? [];
 	let cautions = 0;
 	for (const unit of freeUnits(structure)) {
 		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) continue;
-		const taken = unit.members.filter((g) => takes.includes(g));
+		const members = otherMembers(unit, need.group, ownAtoms);
+		const taken = members.filter((g) => takes.includes(g));
 		if (taken.length) {
 			for (const group of taken) {
 				const first = prefersOver(recipe, group, need.group);
@@ -100,9 +102,9 @@ export function harm(
 			cautions++; // taken selectively: the slower group is worth watching (the check says so too)
 			continue;
 		}
-		if (phase === 'install' && unit.members.every((g) => drawn.includes(g))) continue;
+		if (phase === 'install' && members.every((g) => drawn.includes(g))) continue;
 		for (const c of conds) {
-			for (const member of unit.members) {
+			for (const member of members) {
 				const rule = rules.reactivity(member, c.id, c.explicit ? [] : c.reagents);
 				if (rule?.rating === 'reacts')
 					return {
@@ -127,6 +129,25 @@ export function harm(
 		}
 	}
 	return { blocked: '', cautions };
+}
+
+/**
+ * The members of a free unit other than this need's own group. A diol unit also lists its two
+ * alcohols; when one of them is this need (the primary OH of a 1,2-diol masked on its own), only
+ * the other OH is a neighbour the recipe may also take (TBDPSCl: the secondary OH, taken later),
+ * and the diol itself is no longer one once this OH is masked.
+ */
+function otherMembers(
+	unit: { atoms: readonly number[]; members: readonly string[] },
+	group: string,
+	ownAtoms: readonly number[]
+): string[] {
+	const members = [...unit.members];
+	const inside = ownAtoms.length > 0 && ownAtoms.every((a) => unit.atoms.includes(a));
+	const at = inside ? members.indexOf(group) : -1;
+	if (at < 0) return members;
+	members.splice(at, 1);
+	return members.filter((g) => !g.startsWith('diol-'));
 }
 
 // Reading a recipe's text is the same for every need and every point: read it once per rule view.
