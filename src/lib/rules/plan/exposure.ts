@@ -13,7 +13,8 @@ import type { Need } from './types';
  * Whether need `other` is masked at intermediate `node` while need `index` is worked on there,
  * its mask coming off at `removeAt` (by default where it must be free again). At an intermediate
  * the installs run first (in need order) and the removals after, so a group that must come off
- * here can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc amine freed
+ * here can still shield its neighbour while the neighbour's PG goes on; amines go on before the
+ * other groups there (`installsBefore`). E.g. a Boc amine freed
  * before step 3 is still masked while Fmoc goes on the other amine there. A need on another
  * branch of a convergent route is not in that intermediate at all.
  */
@@ -31,7 +32,27 @@ export function maskedAt(
 	const on = y.path.indexOf(y.installAt);
 	const off = y.path.indexOf(removeAt);
 	if (phase === 'removal') return on <= here && here <= off;
-	return (on < here || (on === here && other < index)) && here <= off;
+	return (on < here || (on === here && installsBefore(needs, other, index))) && here <= off;
+}
+
+// N–H groups a chemist masks first where several go on at one intermediate: the carbamate
+// reagents pick the nitrogen out, while a silyl chloride or benzyl bromide would also meet a free
+// amine (an amino alcohol is N-Boc'd, then O-silylated: Wuts, Greene's Protective Groups in
+// Organic Synthesis, 5th ed., ch. 7; Kocienski, Protecting Groups, 3rd ed., ch. 1 — from memory).
+const NITROGEN_FIRST = new Set([
+	'amine-primary',
+	'amine-secondary',
+	'aniline',
+	'indole-nh',
+	'azole-nh'
+]);
+const installRank = (need: Need) => (NITROGEN_FIRST.has(need.group) ? 0 : 1);
+
+/** Whether need `a` goes on before need `b` where both go on at the same intermediate. */
+export function installsBefore(needs: Need[], a: number, b: number): boolean {
+	const ra = installRank(needs[a]!);
+	const rb = installRank(needs[b]!);
+	return ra !== rb ? ra < rb : a < b;
 }
 
 /** Whether a need's group is back, free, at `node` because its mask came off early at `removeAt`. */
