@@ -13,7 +13,8 @@ import type { Need } from './types';
  * Whether need `other` is masked at intermediate `node` while need `index` is worked on there,
  * its mask coming off at `removeAt` (by default where it must be free again). At an intermediate
  * the installs run first (in need order) and the removals after, so a group that must come off
- * here can still shield its neighbour while the neighbour's PG goes on. E.g. a Boc amine freed
+ * here can still shield its neighbour while the neighbour's PG goes on; amines go on before the
+ * other groups there (`installsBefore`). E.g. a Boc amine freed
  * before step 3 is still masked while Fmoc goes on the other amine there. A need on another
  * branch of a convergent route is not in that intermediate at all.
  */
@@ -31,7 +32,27 @@ export function maskedAt(
 	const on = y.path.indexOf(y.installAt);
 	const off = y.path.indexOf(removeAt);
 	if (phase === 'removal') return on <= here && here <= off;
-	return (on < here || (on === here && other < index)) && here <= off;
+	return (on < here || (on === here && installsBefore(needs, other, index))) && here <= off;
+}
+
+// N–H groups a chemist masks first where several go on at one intermediate: the carbamate
+// reagents pick the nitrogen out, while a silyl chloride or benzyl bromide would also meet a free
+// amine (an amino alcohol is N-Boc'd, then O-silylated: Wuts, Greene's Protective Groups in
+// Organic Synthesis, 5th ed., ch. 7; Kocienski, Protecting Groups, 3rd ed., ch. 1 — from memory).
+const NITROGEN_FIRST = new Set([
+	'amine-primary',
+	'amine-secondary',
+	'aniline',
+	'indole-nh',
+	'azole-nh'
+]);
+const installRank = (need: Need) => (NITROGEN_FIRST.has(need.group) ? 0 : 1);
+
+/** Whether need `a` goes on before need `b` where both go on at the same intermediate. */
+export function installsBefore(needs: Need[], a: number, b: number): boolean {
+	const ra = installRank(needs[a]!);
+	const rb = installRank(needs[b]!);
+	return ra !== rb ? ra < rb : a < b;
 }
 
 /** Whether a need's group is back, free, at `node` because its mask came off early at `removeAt`. */
@@ -79,14 +100,12 @@ export function harm(
 		if (atoms && j !== index && (coInstall || maskedAt(needs, j, node, index, phase)))
 			masked.add(setKey(atoms));
 	});
+	const ownAtoms = need.atomsAt.get(node) ?? [];
 	let cautions = 0;
 	const ownAtoms = need.atomsAt.get(node) ?? [];
 	for (const unit of freeUnits(structure)) {
 		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) continue;
-		// The diol this need is one OH of (a selective primary-OH protection): only its other
-		// alcohol is exposed, not the need itself nor the diol as a unit.
-		const around = ownAtoms.length > 0 && ownAtoms.every((a) => unit.atoms.includes(a));
-		const members = around ? otherMembers(unit.members, need.group) : unit.members;
+		const members = otherMembers(unit, need.group, ownAtoms);
 		const taken = members.filter((g) => takes.includes(g));
 		if (taken.length) {
 			for (const group of taken) {
@@ -134,11 +153,23 @@ export function harm(
 	return { blocked: '', cautions };
 }
 
-/** A diol's members other than the diol itself and one instance of `group`, e.g. → `['alcohol-secondary']`. */
-function otherMembers(members: readonly string[], group: string): string[] {
-	const rest = members.filter((g) => !g.startsWith('diol-'));
-	const at = rest.indexOf(group);
-	return at < 0 ? rest : [...rest.slice(0, at), ...rest.slice(at + 1)];
+/**
+ * The members of a free unit other than this need's own group. A diol unit also lists its two
+ * alcohols; when one of them is this need (the primary OH of a 1,2-diol masked on its own), only
+ * the other OH is a neighbour the recipe may also take (TBDPSCl: the secondary OH, taken later),
+ * and the diol itself is no longer one once this OH is masked.
+ */
+function otherMembers(
+	unit: { atoms: readonly number[]; members: readonly string[] },
+	group: string,
+	ownAtoms: readonly number[]
+): string[] {
+	const members = [...unit.members];
+	const inside = ownAtoms.length > 0 && ownAtoms.every((a) => unit.atoms.includes(a));
+	const at = inside ? members.indexOf(group) : -1;
+	if (at < 0) return members;
+	members.splice(at, 1);
+	return members.filter((g) => !g.startsWith('diol-'));
 }
 
 // Reading a recipe's text is the same for every need and every point: read it once per rule view.

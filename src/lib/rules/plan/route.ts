@@ -5,6 +5,7 @@
 
 import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/document';
 import { protectedStructure } from './draw';
+import { installsBefore } from './exposure';
 import { installKey } from './search';
 import type { RouteTree } from './tree';
 import type { Need, Option, Protection } from './types';
@@ -49,7 +50,10 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 		intermediates.push({ ...node, label: labelAt(node, active), structure: structureAt(node.id, active) });
 		let current = node.id;
 		const installs = new Map<string, number[]>();
-		for (const x of all.filter((i) => needs[i]!.installAt === node.id)) {
+		// Amines go on first where several PGs go on here (see `installsBefore`).
+		const here = all.filter((i) => needs[i]!.installAt === node.id);
+		here.sort((a, b) => (installsBefore(needs, a, b) ? -1 : installsBefore(needs, b, a) ? 1 : 0));
+		for (const x of here) {
 			const key = installKey(needs[x]!, options[x]!);
 			installs.set(key, [...(installs.get(key) ?? []), x]);
 		}
