@@ -102,7 +102,6 @@ export function harm(
 	});
 	const ownAtoms = need.atomsAt.get(node) ?? [];
 	let cautions = 0;
-	const ownAtoms = need.atomsAt.get(node) ?? [];
 	for (const unit of freeUnits(structure)) {
 		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) continue;
 		const members = otherMembers(unit, need.group, ownAtoms);
