@@ -54,8 +54,8 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	const clashes: Clash[] = [];
 	for (const condition of conditions) {
 		const origin = origins.get(condition)!;
-		// Explicit condition ids carry no reagent, so the class rating applies to them as well.
-		const named = origin.explicit ? [] : origin.reagents.map((b) => b.reagent);
+		// A class set by hand that no reagent brings has no reagents: the class rating applies.
+		const named = origin.reagents.map((b) => b.reagent);
 		for (const pg of change.protectingGroups.filter(standsBy)) {
 			const answer = rules.stability(pg.id, condition, named, pg.on);
 			if (answer.rating === 'stable') continue;

@@ -92,20 +92,47 @@ function selectiveInstalls(table: RuleTable): SelectiveInstall[] {
 	);
 }
 
-// Enough for every PG × class × reagent set a busy server meets; past it, start afresh.
-const REMEMBERED_ANSWERS = 100_000;
+// Enough for every reagent set a busy server meets; past it, start afresh.
+const REMEMBERED_REAGENT_SETS = 10_000;
 
-/** `answer` with its results kept by argument, e.g. `stability('TBS', 'fluoride', ['TBAF'])`. */
+/**
+ * `answer` with its results kept by argument, e.g. `stability('TBS', 'fluoride', ['TBAF'])`.
+ * The planner asks millions of times per route with a few dozen reagent arrays, so answers are
+ * filed per reagent set (found by the array itself, else by its text) and then by id, class and
+ * site in nested maps: no key string is built on the hot path.
+ */
 function remembered<R>(
 	answer: (id: string, condition: string, reagents?: readonly string[], site?: string) => R
 ) {
-	const kept = new Map<string, R>();
+	type Answers = Map<string, Map<string, Map<string, R>>>;
+	const byText = new Map<string, Answers>();
+	let byArray = new WeakMap<readonly string[], Answers>();
+	const answersFor = (reagents: readonly string[]): Answers => {
+		let answers = byArray.get(reagents);
+		if (answers) return answers;
+		const text = reagents.join('\u0001');
+		answers = byText.get(text);
+		if (!answers) {
+			if (byText.size >= REMEMBERED_REAGENT_SETS) {
+				byText.clear();
+				byArray = new WeakMap();
+			}
+			answers = new Map();
+			byText.set(text, answers);
+		}
+		byArray.set(reagents, answers);
+		return answers;
+	};
 	return (id: string, condition: string, reagents: readonly string[] = [], site?: string): R => {
-		const key = `${id}\u0001${condition}\u0001${reagents.join('\u0002')}\u0001${site ?? ''}`;
-		if (kept.has(key)) return kept.get(key)!;
-		if (kept.size >= REMEMBERED_ANSWERS) kept.clear();
+		const answers = answersFor(reagents);
+		let byCondition = answers.get(id);
+		if (!byCondition) answers.set(id, (byCondition = new Map()));
+		let bySite = byCondition.get(condition);
+		if (!bySite) byCondition.set(condition, (bySite = new Map()));
+		const at = site ?? '';
+		if (bySite.has(at)) return bySite.get(at)!;
 		const result = answer(id, condition, reagents, site);
-		kept.set(key, result);
+		bySite.set(at, result);
 		return result;
 	};
 }

@@ -11,7 +11,7 @@ export function cautionReason(rules: CheckRules, tree: RouteTree, need: Need): s
 	for (const stepId of need.attackedAt) {
 		for (const c of tree.conditions.get(stepId)!) {
 			for (const group of need.members) {
-				const rule = rules.reactivity(group, c.id, c.explicit ? [] : c.reagents);
+				const rule = rules.reactivity(group, c.id, c.reagents);
 				if (rule?.rating === 'caution') {
 					const by = c.reagents.length
 						? c.reagents.join(', ')

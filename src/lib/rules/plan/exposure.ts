@@ -126,7 +126,7 @@ export function harm(
 		if (phase === 'install' && members.every((g) => drawn.includes(g))) continue;
 		for (const c of conds) {
 			for (const member of members) {
-				const rule = rules.reactivity(member, c.id, c.explicit ? [] : c.reagents);
+				const rule = rules.reactivity(member, c.id, c.reagents);
 				if (rule?.rating === 'reacts')
 					return {
 						blocked: `would also attack the free ${rules.groupLabel(member)} (${rule.reason.replace(/\.$/, '')})`,
@@ -141,7 +141,7 @@ export function harm(
 			const answer = rules.stability(
 				found.id,
 				c.id,
-				c.explicit ? [] : c.reagents,
+				c.reagents,
 				siteOfGroup(found.masks)
 			);
 			if (answer.rating === 'labile')

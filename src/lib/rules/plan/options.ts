@@ -64,7 +64,7 @@ function removalPoints(
 			const rating = rules.stability(
 				pg,
 				c.id,
-				c.explicit ? [] : c.reagents,
+				c.reagents,
 				siteOfGroup(need.group)
 			).rating;
 			if (rating === 'labile')

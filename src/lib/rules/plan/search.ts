@@ -133,7 +133,7 @@ type RecipeText = { reagents: string; conditions: string[] };
 
 function reacts(rules: CheckRules, group: string, recipe: RecipeText): boolean {
 	for (const c of recipeConditions(rules, recipe))
-		if (rules.reactivity(group, c.id, c.explicit ? [] : c.reagents)?.rating === 'reacts')
+		if (rules.reactivity(group, c.id, c.reagents)?.rating === 'reacts')
 			return true;
 	return false;
 }
@@ -141,7 +141,7 @@ function reacts(rules: CheckRules, group: string, recipe: RecipeText): boolean {
 function strips(rules: CheckRules, recipe: RecipeText, pg: string, group: string): boolean {
 	const site = siteOfGroup(group);
 	for (const c of recipeConditions(rules, recipe))
-		if (rules.stability(pg, c.id, c.explicit ? [] : c.reagents, site).rating === 'labile')
+		if (rules.stability(pg, c.id, c.reagents, site).rating === 'labile')
 			return true;
 	return false;
 }

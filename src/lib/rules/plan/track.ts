@@ -249,7 +249,7 @@ function worstRating(rules: CheckRules, tree: RouteTree, stepId: string, members
 	let usuallyMasked = false;
 	for (const c of tree.conditions.get(stepId)!) {
 		for (const group of members) {
-			const rule = rules.reactivity(group, c.id, c.explicit ? [] : c.reagents);
+			const rule = rules.reactivity(group, c.id, c.reagents);
 			if (rule?.rating === 'reacts') return { rating: rule.rating, usuallyMasked: false };
 			if (rule?.rating === 'caution') {
 				worst = rule.rating;

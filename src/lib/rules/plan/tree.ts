@@ -6,6 +6,10 @@ import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/do
 import { stepLabeller } from '../../route/step-names';
 import type { CheckRules } from '../check/types';
 
+/**
+ * One class a step brings and the reagents that bring it. `explicit` marks a class set by hand that
+ * no reagent brings: its `reagents` are then empty, so the class rating applies as it is.
+ */
 export type StepCondition = { id: string; reagents: string[]; explicit: boolean };
 
 export type RouteTree = {
