@@ -12,7 +12,9 @@ export default defineConfig({
 			// validator adapters, zod, Auth.js) are theirs to fix and drown our own warnings.
 			onwarn(warning, warn) {
 				const inDependency = /node_modules/.test(`${warning.id ?? ''} ${warning.message}`);
-				if (inDependency) return;
+				if (inDependency) {
+					return;
+				}
 				warn(warning);
 			}
 		}

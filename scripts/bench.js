@@ -50,7 +50,9 @@ if (unknown.length > 0) {
 let failed = 0;
 for (const bench of BENCHMARKS.filter((b) => wanted.length === 0 || wanted.includes(b.name))) {
 	console.log(`\n▶ ${bench.name}: ${bench.about}`);
-	if (bench.needsBuild) buildIfStale();
+	if (bench.needsBuild) {
+		buildIfStale();
+	}
 	const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
 	const result = spawnSync(tsx, [path.join(root, 'scripts', 'bench', bench.file)], {
 		cwd: root,

@@ -16,23 +16,32 @@ const CONFIG_FILES = [
 ];
 
 function newestMtime(entry) {
-	if (!fs.existsSync(entry)) return 0;
+	if (!fs.existsSync(entry)) {
+		return 0;
+	}
 	const stat = fs.statSync(entry);
-	if (!stat.isDirectory()) return stat.mtimeMs;
+	if (!stat.isDirectory()) {
+		return stat.mtimeMs;
+	}
 	let newest = stat.mtimeMs;
-	for (const child of fs.readdirSync(entry))
+	for (const child of fs.readdirSync(entry)) {
 		newest = Math.max(newest, newestMtime(path.join(entry, child)));
+	}
 	return newest;
 }
 
 export function buildIsStale() {
-	if (!fs.existsSync('build/index.js') || !fs.existsSync(STAMP)) return true;
+	if (!fs.existsSync('build/index.js') || !fs.existsSync(STAMP)) {
+		return true;
+	}
 	const built = fs.statSync(STAMP).mtimeMs;
 	return [...SOURCES, ...CONFIG_FILES].some((entry) => newestMtime(entry) > built);
 }
 
 export function buildIfStale({ force = false } = {}) {
-	if (!force && !buildIsStale()) return;
+	if (!force && !buildIsStale()) {
+		return;
+	}
 	console.log('Building Orthogon (the first start takes a few seconds)…');
 	const started = Date.now();
 	// The server bundler's notes about dependencies' internals are noise on success; the whole

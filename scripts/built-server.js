@@ -24,8 +24,9 @@ export function freePort() {
  * at start). Resolves once /signin answers; rejects if the server exits first or 60 s pass.
  */
 export async function startBuiltServer({ dataDir, port, env = {}, quiet = true }) {
-	if (!fs.existsSync('build/index.js'))
+	if (!fs.existsSync('build/index.js')) {
 		throw new Error('No build/: run `node scripts/start.js --build-only` first.');
+	}
 	fs.mkdirSync(dataDir, { recursive: true });
 	const origin = `http://127.0.0.1:${port}`;
 	const resolved = resolveEnvironment({
@@ -44,7 +45,9 @@ export async function startBuiltServer({ dataDir, port, env = {}, quiet = true }
 	let stderr = '';
 	child.stderr.on('data', (chunk) => {
 		stderr = (stderr + chunk).slice(-4000);
-		if (!quiet) process.stderr.write(chunk);
+		if (!quiet) {
+			process.stderr.write(chunk);
+		}
 	});
 	const exited = new Promise((resolve) =>
 		child.once('exit', (code, signal) => resolve({ code, signal }))
@@ -54,7 +57,9 @@ export async function startBuiltServer({ dataDir, port, env = {}, quiet = true }
 	void exited.then(() => (gone = true));
 	while (!gone) {
 		try {
-			if ((await fetch(`${origin}/signin`)).ok) break;
+			if ((await fetch(`${origin}/signin`)).ok) {
+				break;
+			}
 		} catch {
 			// not listening yet
 		}
@@ -64,14 +69,18 @@ export async function startBuiltServer({ dataDir, port, env = {}, quiet = true }
 		}
 		await new Promise((resolve) => setTimeout(resolve, 200));
 	}
-	if (gone) throw new Error(`The built server exited at start.\n${stderr}`);
+	if (gone) {
+		throw new Error(`The built server exited at start.\n${stderr}`);
+	}
 	return {
 		origin,
 		child,
 		exited,
 		stderr: () => stderr,
 		async stop(signal = 'SIGTERM') {
-			if (child.exitCode === null && child.signalCode === null) child.kill(signal);
+			if (child.exitCode === null && child.signalCode === null) {
+				child.kill(signal);
+			}
 			return exited;
 		}
 	};
@@ -87,6 +96,8 @@ export async function signInCookie(origin, email, password = 'orthogon-demo') {
 	});
 	const cookies = response.headers.getSetCookie().map((c) => c.split(';')[0]);
 	const session = cookies.find((c) => /session-token=/.test(c));
-	if (!session) throw new Error(`Sign-in as ${email} failed (status ${response.status}).`);
+	if (!session) {
+		throw new Error(`Sign-in as ${email} failed (status ${response.status}).`);
+	}
 	return cookies.join('; ');
 }

@@ -21,7 +21,10 @@ const ask = createInterface({ input: process.stdin, output: process.stdout });
 const email = values.email ?? (await ask.question('E-mail of the first lead: '));
 const name = values.name ?? (await ask.question('Their name: '));
 const teamName = values.team ?? (await ask.question('Team name: '));
-const password = values.password ?? process.env.ORTHOGON_PASSWORD ?? (await ask.question('Password (10+ characters): '));
+const password =
+	values.password ??
+	process.env.ORTHOGON_PASSWORD ??
+	(await ask.question('Password (10+ characters): '));
 ask.close();
 
 if (password.length < 10) {
@@ -29,5 +32,7 @@ if (password.length < 10) {
 	process.exit(1);
 }
 const { team, user } = await createTeamWithLead({ teamName, email, name, password });
-console.log(`Created team “${team.name}” with ${user.email} as lead. Sign in at ${process.env.ORIGIN}.`);
+console.log(
+	`Created team “${team.name}” with ${user.email} as lead. Sign in at ${process.env.ORIGIN}.`
+);
 process.exit(0);

@@ -7,13 +7,19 @@ import fs from 'node:fs';
 export const CHROMIUM = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
 
 export function ensureChromium() {
-	if (fs.existsSync(CHROMIUM)) return true;
+	if (fs.existsSync(CHROMIUM)) {
+		return true;
+	}
 	if (process.getuid?.() === 0) {
 		console.log('Chromium is missing; installing Debian’s chromium package…');
 		const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
 		const update = spawnSync('apt-get', ['update'], { stdio: 'inherit', env });
-		const install = update.status === 0 && spawnSync('apt-get', ['install', '-y', 'chromium'], { stdio: 'inherit', env });
-		if (install && install.status === 0 && fs.existsSync(CHROMIUM)) return true;
+		const install =
+			update.status === 0 &&
+			spawnSync('apt-get', ['install', '-y', 'chromium'], { stdio: 'inherit', env });
+		if (install && install.status === 0 && fs.existsSync(CHROMIUM)) {
+			return true;
+		}
 	}
 	console.error(
 		[
@@ -25,4 +31,6 @@ export function ensureChromium() {
 	return false;
 }
 
-if (import.meta.url === `file://${process.argv[1]}`) process.exit(ensureChromium() ? 0 : 1);
+if (import.meta.url === `file://${process.argv[1]}`) {
+	process.exit(ensureChromium() ? 0 : 1);
+}

@@ -10,7 +10,9 @@ export function dataDir(env = process.env) {
 
 /** Reads a `.env` file in the working folder, if there is one, without overriding the shell. */
 export function loadDotEnv() {
-	if (fs.existsSync('.env')) process.loadEnvFile('.env');
+	if (fs.existsSync('.env')) {
+		process.loadEnvFile('.env');
+	}
 }
 
 /** Fills in DATABASE_URL, AUTH_SECRET, PORT and ORIGIN where they are not set. */
@@ -25,14 +27,18 @@ export function resolveEnvironment(env = process.env) {
 		// JSON bodies over 2 MB get 413 from the API (src/lib/server/api.ts); route imports take files up to 5 MB.
 		BODY_SIZE_LIMIT: env.BODY_SIZE_LIMIT || '6M'
 	};
-	if (!resolved.AUTH_SECRET) resolved.AUTH_SECRET = persistentSecret(dir);
+	if (!resolved.AUTH_SECRET) {
+		resolved.AUTH_SECRET = persistentSecret(dir);
+	}
 	return resolved;
 }
 
 /** A secret generated once into the data folder, so sessions survive restarts. */
 function persistentSecret(dir) {
 	const file = path.join(dir, 'auth-secret');
-	if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
+	if (fs.existsSync(file)) {
+		return fs.readFileSync(file, 'utf8').trim();
+	}
 	fs.mkdirSync(dir, { recursive: true });
 	const secret = randomBytes(32).toString('base64url');
 	fs.writeFileSync(file, secret + '\n', { mode: 0o600 });

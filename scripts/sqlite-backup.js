@@ -39,7 +39,9 @@ export async function integrityCheck(file) {
  * Returns the copy's path; throws when the copy fails its integrity check.
  */
 export async function backupSqlite(source, targetDir, now = new Date()) {
-	if (!fs.existsSync(source)) throw new Error(`No database at ${source}.`);
+	if (!fs.existsSync(source)) {
+		throw new Error(`No database at ${source}.`);
+	}
 	fs.mkdirSync(targetDir, { recursive: true });
 	const target = path.join(targetDir, backupFileName(now));
 	const db = await open(source, sqlite3.OPEN_READWRITE);
@@ -50,7 +52,8 @@ export async function backupSqlite(source, targetDir, now = new Date()) {
 		await close(db);
 	}
 	const verdict = await integrityCheck(target);
-	if (verdict !== 'ok')
+	if (verdict !== 'ok') {
 		throw new Error(`The backup ${target} failed its integrity check: ${verdict}`);
+	}
 	return target;
 }

@@ -8,14 +8,21 @@ import { loadDotEnv, resolveEnvironment } from './environment.js';
 
 const args = new Set(process.argv.slice(2));
 buildIfStale({ force: args.has('--rebuild') });
-if (args.has('--build-only')) process.exit(0);
+if (args.has('--build-only')) {
+	process.exit(0);
+}
 
 loadDotEnv();
 const env = resolveEnvironment();
 const demo = env.ORTHOGON_DEMO !== '0';
-const server = spawn(process.execPath, ['build/index.js'], { env, stdio: ['ignore', 'inherit', 'inherit'] });
+const server = spawn(process.execPath, ['build/index.js'], {
+	env,
+	stdio: ['ignore', 'inherit', 'inherit']
+});
 
-for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
+for (const signal of ['SIGINT', 'SIGTERM']) {
+	process.on(signal, () => server.kill(signal));
+}
 server.on('exit', (code, signal) => process.exit(code ?? (signal ? 1 : 0)));
 
 await announceWhenUp(env.ORIGIN, env.PORT);
@@ -25,7 +32,9 @@ async function announceWhenUp(origin, port) {
 	while (Date.now() < deadline) {
 		try {
 			const response = await fetch(`http://127.0.0.1:${port}/signin`);
-			if (response.ok) break;
+			if (response.ok) {
+				break;
+			}
 		} catch {
 			// not listening yet
 		}
@@ -41,7 +50,9 @@ async function announceWhenUp(origin, port) {
 			}
 		}
 	} else {
-		lines.push('Demo data is off (ORTHOGON_DEMO=0). Create the first lead with: npm run user:create');
+		lines.push(
+			'Demo data is off (ORTHOGON_DEMO=0). Create the first lead with: npm run user:create'
+		);
 	}
 	lines.push('Stop with Ctrl+C.', '');
 	console.log(lines.join('\n'));

@@ -10,11 +10,15 @@ const PORT = 55432;
 
 function findBin() {
 	const root = '/usr/lib/postgresql';
-	if (!fs.existsSync(root)) return null;
+	if (!fs.existsSync(root)) {
+		return null;
+	}
 	const versions = fs.readdirSync(root).sort((a, b) => Number(b) - Number(a));
 	for (const v of versions) {
 		const bin = path.join(root, v, 'bin');
-		if (fs.existsSync(path.join(bin, 'initdb'))) return bin;
+		if (fs.existsSync(path.join(bin, 'initdb'))) {
+			return bin;
+		}
 	}
 	return null;
 }
@@ -29,16 +33,49 @@ function asPostgres(bin, args) {
 /** Starts the server and returns its URL and a stop function, or null with the reason. */
 export function startTestPostgres() {
 	const bin = findBin();
-	if (!bin) return { url: null, reason: 'PostgreSQL is not installed (apt-get install -y postgresql)' };
+	if (!bin) {
+		return { url: null, reason: 'PostgreSQL is not installed (apt-get install -y postgresql)' };
+	}
 	const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'orthogon-pg-'));
-	if (process.getuid?.() === 0) spawnSync('chown', ['postgres:postgres', dir]);
+	if (process.getuid?.() === 0) {
+		spawnSync('chown', ['postgres:postgres', dir]);
+	}
 	const data = path.join(dir, 'data');
-	const init = asPostgres(path.join(bin, 'initdb'), ['-D', data, '-A', 'trust', '-U', 'postgres', '--no-sync']);
-	if (init.status !== 0) return { url: null, reason: `initdb failed: ${init.stderr.trim().split('\n').pop()}` };
+	const init = asPostgres(path.join(bin, 'initdb'), [
+		'-D',
+		data,
+		'-A',
+		'trust',
+		'-U',
+		'postgres',
+		'--no-sync'
+	]);
+	if (init.status !== 0) {
+		return { url: null, reason: `initdb failed: ${init.stderr.trim().split('\n').pop()}` };
+	}
 	const options = `-p ${PORT} -k ${dir} -c listen_addresses=127.0.0.1 -c fsync=off`;
-	const start = asPostgres(path.join(bin, 'pg_ctl'), ['-D', data, '-o', options, '-l', path.join(dir, 'log'), '-w', 'start']);
-	if (start.status !== 0) return { url: null, reason: `pg_ctl start failed: ${start.stderr.trim()}` };
-	const create = asPostgres(path.join(bin, 'createdb'), ['-h', '127.0.0.1', '-p', String(PORT), '-U', 'postgres', 'orthogon_test']);
+	const start = asPostgres(path.join(bin, 'pg_ctl'), [
+		'-D',
+		data,
+		'-o',
+		options,
+		'-l',
+		path.join(dir, 'log'),
+		'-w',
+		'start'
+	]);
+	if (start.status !== 0) {
+		return { url: null, reason: `pg_ctl start failed: ${start.stderr.trim()}` };
+	}
+	const create = asPostgres(path.join(bin, 'createdb'), [
+		'-h',
+		'127.0.0.1',
+		'-p',
+		String(PORT),
+		'-U',
+		'postgres',
+		'orthogon_test'
+	]);
 	const stop = () => {
 		asPostgres(path.join(bin, 'pg_ctl'), ['-D', data, '-m', 'fast', 'stop']);
 		fs.rmSync(dir, { recursive: true, force: true });

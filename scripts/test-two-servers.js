@@ -35,7 +35,9 @@ export async function runTwoServerTest(postgresUrl, log = console.log) {
 		servers = PORTS.map((port) => startServer(port, databaseUrl, dataDir));
 		const up = await Promise.all(servers.map(waitUntilServing));
 		check('both servers start at once on one empty database and migrate it', up.every(Boolean));
-		if (!up.every(Boolean)) return results;
+		if (!up.every(Boolean)) {
+			return results;
+		}
 		await addPerson(databaseUrl);
 		await checkSessions(check);
 		await checkSignInLimits(check);
@@ -47,8 +49,11 @@ export async function runTwoServerTest(postgresUrl, log = console.log) {
 		);
 	} finally {
 		await Promise.all(servers.map(stopServer));
-		if (results.failed)
-			for (const s of servers) log(`--- server on ${s.port} said:\n${s.output.join('')}`);
+		if (results.failed) {
+			for (const s of servers) {
+				log(`--- server on ${s.port} said:\n${s.output.join('')}`);
+			}
+		}
 		await dropDatabase(postgresUrl).catch(() => {});
 		fs.rmSync(dataDir, { recursive: true, force: true });
 	}
@@ -65,7 +70,9 @@ async function checkSessions(check) {
 		signedIn.status === 302 && cookie !== null,
 		`status ${signedIn.status}`
 	);
-	if (!cookie) return;
+	if (!cookie) {
+		return;
+	}
 	check('the cookie is not Secure, as ORIGIN is http', !/;\s*secure/i.test(cookie.raw), cookie.raw);
 
 	const onB = await get(B, '/api/projects', { cookie: cookie.pair });
@@ -101,7 +108,9 @@ async function checkSessions(check) {
 
 async function checkSignInLimits(check) {
 	const statuses = [];
-	for (let i = 0; i < 5; i++) statuses.push((await signIn(A, 'wrong-password')).status);
+	for (let i = 0; i < 5; i++) {
+		statuses.push((await signIn(A, 'wrong-password')).status);
+	}
 	check(
 		'five wrong passwords on server A are answered, not refused',
 		statuses.every((s) => s === 302),
@@ -152,7 +161,9 @@ function sessionCookie(response) {
 	for (const raw of response.headers.getSetCookie()) {
 		const [pair] = raw.split(';');
 		const [name, value] = pair.split('=');
-		if (/authjs\.session-token$/.test(name) && value) return { name, pair, raw };
+		if (/authjs\.session-token$/.test(name) && value) {
+			return { name, pair, raw };
+		}
 	}
 	return null;
 }
@@ -184,7 +195,9 @@ async function waitUntilServing(server) {
 			const response = await fetch(`http://127.0.0.1:${server.port}/signin`, {
 				signal: AbortSignal.timeout(2000)
 			});
-			if (response.ok) return true;
+			if (response.ok) {
+				return true;
+			}
 		} catch {
 			// not listening yet
 		}
@@ -194,7 +207,9 @@ async function waitUntilServing(server) {
 }
 
 function stopServer(server) {
-	if (server.child.exitCode !== null) return Promise.resolve();
+	if (server.child.exitCode !== null) {
+		return Promise.resolve();
+	}
 	return new Promise((resolve) => {
 		const force = setTimeout(() => server.child.kill('SIGKILL'), 5000);
 		server.child.once('exit', () => {

@@ -29,25 +29,42 @@ function count(file, read) {
 }
 
 console.log('\n▶ Type checks (svelte-check)');
-if (!run('npx', ['svelte-kit', 'sync']) || !run('npx', ['svelte-check', '--tsconfig', './tsconfig.json', '--fail-on-warnings'])) {
+if (
+	!run('npx', ['svelte-kit', 'sync']) ||
+	!run('npx', ['svelte-check', '--tsconfig', './tsconfig.json', '--fail-on-warnings'])
+) {
 	failures.push('type checks');
 	failed += 1;
 }
 
 console.log('\n▶ Unit and reference tests (vitest)');
-const postgres = process.env.TEST_POSTGRES_URL ? { url: process.env.TEST_POSTGRES_URL } : startTestPostgres();
-console.log(postgres.url ? `PostgreSQL for the dialect test: ${postgres.url}` : `The PostgreSQL dialect test is skipped: ${postgres.reason}.`);
+const postgres = process.env.TEST_POSTGRES_URL
+	? { url: process.env.TEST_POSTGRES_URL }
+	: startTestPostgres();
+console.log(
+	postgres.url
+		? `PostgreSQL for the dialect test: ${postgres.url}`
+		: `The PostgreSQL dialect test is skipped: ${postgres.reason}.`
+);
 const vitestReport = `${REPORTS}/vitest.json`;
 fs.rmSync(vitestReport, { force: true });
-const vitestOk = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], {
-	...(postgres.url ? { TEST_POSTGRES_URL: postgres.url } : {})
-});
-if (!vitestOk) failures.push('unit tests');
+const vitestOk = run(
+	'npx',
+	['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`],
+	{
+		...(postgres.url ? { TEST_POSTGRES_URL: postgres.url } : {})
+	}
+);
+if (!vitestOk) {
+	failures.push('unit tests');
+}
 count(vitestReport, (r) => [r.numPassedTests, r.numFailedTests + (r.numFailedTestSuites ?? 0)]);
 
 console.log('\n▶ Build');
 const built = run('node', ['scripts/start.js', '--build-only']);
-if (!built) failures.push('build');
+if (!built) {
+	failures.push('build');
+}
 
 // The throwaway PostgreSQL stays up until here: two built servers share it.
 console.log('\n▶ Two servers on one PostgreSQL (shared sessions and sign-in limits)');
@@ -59,14 +76,26 @@ if (!postgres.url) {
 	const twoServers = await runTwoServerTest(postgres.url);
 	passed += twoServers.passed;
 	failed += twoServers.failed;
-	if (twoServers.failed) failures.push('two-server test');
+	if (twoServers.failed) {
+		failures.push('two-server test');
+	}
 }
 postgres.stop?.();
 
 console.log('\n▶ Built-server tests (crash safety: SIGKILL during writes)');
 const serverReport = `${REPORTS}/server-tests.json`;
 fs.rmSync(serverReport, { force: true });
-if (!run('npx', ['vitest', 'run', '-c', 'tests/server/vitest.config.ts', '--reporter=default', '--reporter=json', `--outputFile.json=${serverReport}`])) {
+if (
+	!run('npx', [
+		'vitest',
+		'run',
+		'-c',
+		'tests/server/vitest.config.ts',
+		'--reporter=default',
+		'--reporter=json',
+		`--outputFile.json=${serverReport}`
+	])
+) {
 	failures.push('built-server tests');
 }
 count(serverReport, (r) => [r.numPassedTests, r.numFailedTests + (r.numFailedTestSuites ?? 0)]);
@@ -77,7 +106,11 @@ fs.rmSync(e2eReport, { force: true });
 if (!ensureChromium()) {
 	failures.push('browser tests (no Chromium)');
 	failed += 1;
-} else if (!run('npx', ['playwright', 'test', '-c', 'tests/e2e/playwright.config.ts'], { PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport })) {
+} else if (
+	!run('npx', ['playwright', 'test', '-c', 'tests/e2e/playwright.config.ts'], {
+		PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport
+	})
+) {
 	failures.push('browser tests');
 }
 count(e2eReport, (r) => [r.stats.expected + r.stats.flaky, r.stats.unexpected]);

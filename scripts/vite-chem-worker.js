@@ -17,7 +17,9 @@ export function chemWorker() {
 		},
 		configureServer(server) {
 			server.watcher.on('change', (file) => {
-				if (!CHEMISTRY.test(path.relative(server.config.root, file))) return;
+				if (!CHEMISTRY.test(path.relative(server.config.root, file))) {
+					return;
+				}
 				buildChemWorker();
 				const key = Symbol.for('orthogon.chemPool');
 				const holder = /** @type {Record<symbol, { destroy(): Promise<void> } | undefined>} */ (

@@ -16,7 +16,9 @@ import { limitScriptedSignIn } from '$lib/server/hooks/sign-in-limit';
 
 export const init: ServerInit = async () => {
 	await dbReady();
-	if (process.env.ORTHOGON_DEMO !== '0') await seedDemoIfEmpty();
+	if (process.env.ORTHOGON_DEMO !== '0') {
+		await seedDemoIfEmpty();
+	}
 };
 
 // One handle per concern, in the order a request meets them; each lives in $lib/server/hooks.
@@ -34,7 +36,11 @@ export const handle = sequence(
 
 export const handleError: HandleServerError = ({ error, status, message }) => {
 	// Pages cannot change the status here; they at least say what happened and that it may pass.
-	if (isDatabaseBusy(error)) return { message: new DatabaseBusy().message, code: 'database-busy' };
-	if (status !== 404) console.error('[server]', error);
+	if (isDatabaseBusy(error)) {
+		return { message: new DatabaseBusy().message, code: 'database-busy' };
+	}
+	if (status !== 404) {
+		console.error('[server]', error);
+	}
 	return { message: status === 404 ? 'Page not found.' : message, code: codeForStatus(status) };
 };

@@ -39,12 +39,22 @@ const initial = new Set();
 const later = new Set();
 const visit = (key) => {
 	const chunk = manifest[key];
-	if (!chunk || initial.has(chunk.file)) return;
+	if (!chunk || initial.has(chunk.file)) {
+		return;
+	}
 	initial.add(chunk.file);
-	for (const next of chunk.imports ?? []) visit(next);
+	for (const next of chunk.imports ?? []) {
+		visit(next);
+	}
 	// The app entry's dynamic imports are the other pages' nodes, not this page's lazy parts.
-	if (key.endsWith('/app.js')) return;
-	for (const next of chunk.dynamicImports ?? []) if (manifest[next]) later.add(next);
+	if (key.endsWith('/app.js')) {
+		return;
+	}
+	for (const next of chunk.dynamicImports ?? []) {
+		if (manifest[next]) {
+			later.add(next);
+		}
+	}
 };
 entryKeys.forEach(visit);
 
@@ -59,8 +69,9 @@ const total = sizes.reduce((sum, s) => sum + s.bytes, 0);
 console.log(
 	`Initial JavaScript of ${routeId}: ${sizes.length} files, ${kb(total)} KB gzip (budget ${maxKb} KB)`
 );
-for (const { file, bytes } of sizes.slice(0, 8))
+for (const { file, bytes } of sizes.slice(0, 8)) {
 	console.log(`  ${kb(bytes).padStart(7)} KB  ${file}`);
+}
 const lazy = [...later].map((key) => manifest[key]).filter((c) => !initial.has(c.file));
 for (const chunk of lazy) {
 	const own = [

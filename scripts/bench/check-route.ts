@@ -50,10 +50,19 @@ const structures = [
 const steps: StepToCheck[] = [];
 for (let i = 1; i < structures.length; i++) {
 	const [from, to] = [structures[i - 1]!, structures[i]!];
-	if (from.key[0] !== to.key[0]) continue;
-	steps.push({ id: `${from.key}→${to.key}`, substrate: from.smiles, product: to.smiles, reagents: REAGENTS[to.key]! });
+	if (from.key[0] !== to.key[0]) {
+		continue;
+	}
+	steps.push({
+		id: `${from.key}→${to.key}`,
+		substrate: from.smiles,
+		product: to.smiles,
+		reagents: REAGENTS[to.key]!
+	});
 }
-if (steps.length !== 30) throw new Error(`expected 30 steps, built ${steps.length}`);
+if (steps.length !== 30) {
+	throw new Error(`expected 30 steps, built ${steps.length}`);
+}
 
 const rules = checkRulesFrom();
 const runOnce = () => {
@@ -66,7 +75,9 @@ clearPerceptionCache();
 clearTransformationCache();
 const cold = runOnce();
 const warm: number[] = [];
-for (let i = 0; i < 20; i++) warm.push(runOnce().ms);
+for (let i = 0; i < 20; i++) {
+	warm.push(runOnce().ms);
+}
 warm.sort((a, b) => a - b);
 const median = warm[Math.floor(warm.length / 2)]!;
 
@@ -80,7 +91,9 @@ for (let i = 0; i < 5; i++) {
 uncached.sort((a, b) => a - b);
 
 const clashes = cold.results.flatMap((r) => r.clashes);
-console.log(`steps: ${steps.length}; clashes found: ${clashes.filter((c) => c.severity === 'clash').length}, cautions: ${clashes.filter((c) => c.severity === 'caution').length}`);
+console.log(
+	`steps: ${steps.length}; clashes found: ${clashes.filter((c) => c.severity === 'clash').length}, cautions: ${clashes.filter((c) => c.severity === 'caution').length}`
+);
 console.log(`first pass (cold process, empty caches): ${cold.ms.toFixed(1)} ms`);
 console.log(`empty caches, warm code (median of 5):   ${uncached[2]!.toFixed(1)} ms`);
 console.log(`warm (median of 20 re-checks):           ${median.toFixed(2)} ms   (aim ≤ 30 ms)`);

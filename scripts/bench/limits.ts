@@ -31,7 +31,9 @@ async function median(
 ): Promise<{ first: number; median: number }> {
 	const first = await timed(run);
 	const times: number[] = [];
-	for (let i = 0; i < n; i++) times.push(await timed(run));
+	for (let i = 0; i < n; i++) {
+		times.push(await timed(run));
+	}
 	times.sort((a, b) => a - b);
 	return { first, median: times[Math.floor(times.length / 2)]! };
 }
@@ -50,10 +52,14 @@ console.log(`worker start-up and first call: ${ms(startup)}`);
 const N = 200;
 analyzeStructure('OCC(=O)O');
 const direct = await timed(async () => {
-	for (let i = 0; i < N; i++) analyzeStructure('OCC(=O)O');
+	for (let i = 0; i < N; i++) {
+		analyzeStructure('OCC(=O)O');
+	}
 });
 const pooled = await timed(async () => {
-	for (let i = 0; i < N; i++) await runChemistry('analyze', { text: 'OCC(=O)O', options: {} });
+	for (let i = 0; i < N; i++) {
+		await runChemistry('analyze', { text: 'OCC(=O)O', options: {} });
+	}
 });
 console.log(
 	`pool overhead per call: ${ms((pooled - direct) / N)} (in-process ${ms(direct / N)}, pooled ${ms(pooled / N)}, ${N} calls)`
@@ -71,7 +77,9 @@ function fusedLadder(rings: number): string {
 			molecule.addBond(top[i - 1]!, top[i]!, 1);
 			molecule.addBond(bottom[i - 1]!, bottom[i]!, 1);
 		}
-		if (i % 2 === 0) molecule.addBond(top[i]!, bottom[i]!, 1);
+		if (i % 2 === 0) {
+			molecule.addBond(top[i]!, bottom[i]!, 1);
+		}
 	}
 	return molecule.toSmiles();
 }

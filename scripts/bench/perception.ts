@@ -6,24 +6,33 @@ import { clearPerceptionCache, perceiveText, perceptionRules } from '../../src/l
 import { routeOG2031 } from './route-og2031';
 
 const ROUNDS = 25;
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
-const ms = (value: number) => (value < 1 ? `${(value * 1000).toFixed(0)} µs` : `${value.toFixed(1)} ms`);
+const median = (values: number[]) =>
+	[...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
+const ms = (value: number) =>
+	value < 1 ? `${(value * 1000).toFixed(0)} µs` : `${value.toFixed(1)} ms`;
 
 const rules = perceptionRules();
-const smartsSet = [...rules.groups.map((g) => g.smarts), ...rules.protectingGroups.flatMap((pg) => pg.patterns)];
+const smartsSet = [
+	...rules.groups.map((g) => g.smarts),
+	...rules.protectingGroups.flatMap((pg) => pg.patterns)
+];
 const route = routeOG2031.map((step) => step.smiles);
 
 const initRDKitModule = (await import('@rdkit/rdkit')).default;
 const RDKit = await initRDKitModule();
 const queries = smartsSet.map((smarts) => {
 	const query = RDKit.get_qmol(smarts);
-	if (!query?.is_valid()) throw new Error(`RDKit cannot read ${smarts}`);
+	if (!query?.is_valid()) {
+		throw new Error(`RDKit cannot read ${smarts}`);
+	}
 	return query;
 });
 
 function oursOnce(): number {
 	const start = performance.now();
-	for (const smiles of route) perceiveText(smiles);
+	for (const smiles of route) {
+		perceiveText(smiles);
+	}
 	return performance.now() - start;
 }
 
@@ -31,7 +40,9 @@ function rdkitOnce(): number {
 	const start = performance.now();
 	for (const smiles of route) {
 		const mol = RDKit.get_mol(smiles)!;
-		for (const query of queries) mol.get_substruct_matches(query);
+		for (const query of queries) {
+			mol.get_substruct_matches(query);
+		}
 		mol.delete();
 	}
 	return performance.now() - start;
@@ -56,8 +67,12 @@ const rows = [
 	[`cold cache, median of ${ROUNDS}`, median(oursCold), median(rdkitCold)],
 	[`route re-checked (cache by text), median of ${ROUNDS}`, median(oursCached), median(rdkitCold)]
 ] as const;
-console.log(`${route.length} intermediates × ${smartsSet.length} SMARTS (${rules.groups.length} groups, ${rules.protectingGroups.length} PGs)`);
+console.log(
+	`${route.length} intermediates × ${smartsSet.length} SMARTS (${rules.groups.length} groups, ${rules.protectingGroups.length} PGs)`
+);
 for (const [label, ours, reference] of rows) {
 	const ratio = ours / reference;
-	console.log(`  ${label.padEnd(48)} ours ${ms(ours).padStart(9)}   RDKit ${ms(reference).padStart(9)}   ours/RDKit ${ratio < 0.01 ? ratio.toExponential(1) : ratio.toFixed(2)}`);
+	console.log(
+		`  ${label.padEnd(48)} ours ${ms(ours).padStart(9)}   RDKit ${ms(reference).padStart(9)}   ours/RDKit ${ratio < 0.01 ? ratio.toExponential(1) : ratio.toFixed(2)}`
+	);
 }

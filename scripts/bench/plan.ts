@@ -53,7 +53,9 @@ console.log(
 // Each textbook route at first sight, the median of three, in the order of plan-routes.ts. As for
 // the stress route, the process has planned such routes before (the code is compiled), so each is
 // planned once before the caches are emptied and it is timed.
-for (const doc of TEXTBOOK_ROUTES) planRouteDocument(doc);
+for (const doc of TEXTBOOK_ROUTES) {
+	planRouteDocument(doc);
+}
 const textbook = TEXTBOOK_ROUTES.map((doc) => {
 	const runs = Array.from({ length: 3 }, () => {
 		clearAll();

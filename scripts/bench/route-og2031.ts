@@ -16,9 +16,15 @@ export const routeOG2031: { key: string; smiles: string }[] = [
 	{ key: 'A10', smiles: 'COCOC(CCc1ccc(NC(=O)OC(C)(C)C)nc1)c1ccc(O)cc1' },
 	{ key: 'A11', smiles: 'CCOC(=O)COc1ccc(C(CCc2ccc(NC(=O)OC(C)(C)C)nc2)OCOC)cc1' },
 	{ key: 'A12', smiles: 'OC(=O)COc1ccc(C(CCc2ccc(NC(=O)OC(C)(C)C)nc2)OCOC)cc1' },
-	{ key: 'A13', smiles: 'O=C(COc1ccc(C(CCc2ccc(NC(=O)OC(C)(C)C)nc2)OCOC)cc1)N1CCN(C(=O)OCc2ccccc2)CC1' },
+	{
+		key: 'A13',
+		smiles: 'O=C(COc1ccc(C(CCc2ccc(NC(=O)OC(C)(C)C)nc2)OCOC)cc1)N1CCN(C(=O)OCc2ccccc2)CC1'
+	},
 	{ key: 'A14', smiles: 'O=C(COc1ccc(C(CCc2ccc(NC(=O)OC(C)(C)C)nc2)OCOC)cc1)N1CCNCC1' },
-	{ key: 'A15', smiles: 'O=C(COc1ccc(C(CCc2ccc(NC(=O)OC(C)(C)C)nc2)OCOC)cc1)N1CCN(C[C@H]2COC(C)(C)O2)CC1' },
+	{
+		key: 'A15',
+		smiles: 'O=C(COc1ccc(C(CCc2ccc(NC(=O)OC(C)(C)C)nc2)OCOC)cc1)N1CCN(C[C@H]2COC(C)(C)O2)CC1'
+	},
 	{ key: 'A16', smiles: 'O=C(COc1ccc(C(O)CCc2ccc(N)nc2)cc1)N1CCN(C[C@H](O)CO)CC1' },
 	// Fragment B: polyol side chain with a masked ketone and amine
 	{ key: 'B01', smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H]1CO1' },
@@ -31,8 +37,14 @@ export const routeOG2031: { key: string; smiles: string }[] = [
 	{ key: 'B08', smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](CC1(CCCOC2CCCCO2)OCCO1)OCc1ccc(OC)cc1' },
 	{ key: 'B09', smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](CC1(CCCO)OCCO1)OCc1ccc(OC)cc1' },
 	{ key: 'B10', smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](CC1(CCCN=[N+]=[N-])OCCO1)OCc1ccc(OC)cc1' },
-	{ key: 'B11', smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](CC1(CCCNC(=O)OCC2c3ccccc3-c3ccccc32)OCCO1)OCc1ccc(OC)cc1' },
+	{
+		key: 'B11',
+		smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](CC1(CCCNC(=O)OCC2c3ccccc3-c3ccccc32)OCCO1)OCc1ccc(OC)cc1'
+	},
 	{ key: 'B12', smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](O)CC1(CCCNC(=O)OCC2c3ccccc3-c3ccccc32)OCCO1' },
-	{ key: 'B13', smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](OC(=O)c1ccccc1)CC1(CCCNC(=O)OCC2c3ccccc3-c3ccccc32)OCCO1' },
+	{
+		key: 'B13',
+		smiles: 'CC(C)(C)[Si](C)(C)OC[C@@H](OC(=O)c1ccccc1)CC1(CCCNC(=O)OCC2c3ccccc3-c3ccccc32)OCCO1'
+	},
 	{ key: 'B14', smiles: 'OC[C@@H](OC(=O)c1ccccc1)CC1(CCCNC(=O)OCC2c3ccccc3-c3ccccc32)OCCO1' }
 ];

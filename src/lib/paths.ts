@@ -26,13 +26,17 @@ const SAME_ORIGIN_PROBE = 'http://orthogon.invalid';
  * back. The answer is the parsed path, so it carries no raw control characters into a header.
  */
 export function safeRedirectTarget(value: string | null | undefined): string {
-	if (!value || !value.startsWith('/')) return paths.projects();
+	if (!value || !value.startsWith('/')) {
+		return paths.projects();
+	}
 	let target: URL;
 	try {
 		target = new URL(value, SAME_ORIGIN_PROBE);
 	} catch {
 		return paths.projects();
 	}
-	if (target.origin !== SAME_ORIGIN_PROBE) return paths.projects();
+	if (target.origin !== SAME_ORIGIN_PROBE) {
+		return paths.projects();
+	}
 	return target.pathname + target.search + target.hash;
 }

@@ -72,7 +72,9 @@ export function loadCorpus(): CorpusStep[] {
 		.flatMap((name) => {
 			const raw: unknown = JSON.parse(readFileSync(new URL(name, stepsFolder), 'utf8'));
 			const parsed = z.array(stepSchema).safeParse(raw);
-			if (!parsed.success) throw new Error(`tests/corpus/steps/${name}: ${parsed.error.message}`);
+			if (!parsed.success) {
+				throw new Error(`tests/corpus/steps/${name}: ${parsed.error.message}`);
+			}
 			return parsed.data;
 		});
 }
@@ -96,7 +98,9 @@ export const isTrueClash = (step: CorpusStep): boolean =>
 /** The harshest severity the check reported on a subject, e.g. `caution`. */
 export function verdictOn(clashes: readonly Clash[], subject: string): Verdict {
 	const severities = clashes.filter((c) => c.subject === subject).map((c) => c.severity);
-	if (severities.includes('clash')) return 'clash';
+	if (severities.includes('clash')) {
+		return 'clash';
+	}
 	return severities.includes('caution') ? 'caution' : 'quiet';
 }
 

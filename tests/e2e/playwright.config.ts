@@ -14,7 +14,16 @@ export default defineConfig({
 	fullyParallel: false,
 	workers: 2,
 	retries: process.env.CI ? 1 : 0,
-	reporter: [['list'], ['json', { outputFile: process.env.PLAYWRIGHT_JSON_OUTPUT_NAME ?? path.join(root, 'test-results/playwright.json') }]],
+	reporter: [
+		['list'],
+		[
+			'json',
+			{
+				outputFile:
+					process.env.PLAYWRIGHT_JSON_OUTPUT_NAME ?? path.join(root, 'test-results/playwright.json')
+			}
+		]
+	],
 	use: {
 		baseURL: `http://localhost:${PORT}`,
 		trace: 'retain-on-failure',

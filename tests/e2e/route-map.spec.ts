@@ -208,10 +208,14 @@ test('the structure editor loads only when the drawing dialog opens', async ({ p
 	const scripts: string[] = [];
 	const problems: string[] = [];
 	page.on('request', (request) => {
-		if (request.resourceType() === 'script') scripts.push(request.url());
+		if (request.resourceType() === 'script') {
+			scripts.push(request.url());
+		}
 	});
 	page.on('console', (message) => {
-		if (message.type() === 'error') problems.push(message.text());
+		if (message.type() === 'error') {
+			problems.push(message.text());
+		}
 	});
 	page.on('pageerror', (error) => problems.push(error.message));
 	await page.goto(`/routes/${id}`);

@@ -130,7 +130,9 @@ test('repeated wrong passwords are refused with 429 and Retry-After', async ({
 			maxRedirects: 0
 		});
 	const statuses = [];
-	for (let i = 0; i < 5; i++) statuses.push((await attempt()).status());
+	for (let i = 0; i < 5; i++) {
+		statuses.push((await attempt()).status());
+	}
 	expect(statuses).not.toContain(429);
 	const refused = await attempt();
 	expect(refused.status()).toBe(429);
@@ -152,7 +154,9 @@ for (const path of ['/auth/callback/credentials/', '/auth/callback//credentials'
 				headers: { origin: new URL(baseURL!).origin },
 				maxRedirects: 0
 			});
-		for (let i = 0; i < 5; i++) expect((await attempt()).status()).not.toBe(429);
+		for (let i = 0; i < 5; i++) {
+			expect((await attempt()).status()).not.toBe(429);
+		}
 		const refused = await attempt();
 		expect(refused.status()).toBe(429);
 		expect(Number(refused.headers()['retry-after'])).toBeGreaterThan(0);
@@ -179,7 +183,9 @@ test('successful scripted sign-ins do not count against the limit', async ({
 test('pages run under the content security policy without console errors', async ({ page }) => {
 	const problems: string[] = [];
 	page.on('console', (message) => {
-		if (message.type() === 'error') problems.push(message.text());
+		if (message.type() === 'error') {
+			problems.push(message.text());
+		}
 	});
 	page.on('pageerror', (error) => problems.push(error.message));
 	await signInAndWait(page, 'lead@example.com');

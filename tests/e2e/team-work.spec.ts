@@ -6,12 +6,16 @@ test('a chemist creates, renames and archives a project', async ({ page }) => {
 	await page.getByLabel('Name').fill('Gannet — fictional amine fragment');
 	await page.getByLabel('Target').fill('A fictional secondary amine carried as its Boc carbamate.');
 	await page.getByRole('button', { name: 'Create project' }).click();
-	await expect(page.getByRole('heading', { name: 'Gannet — fictional amine fragment' })).toBeVisible();
+	await expect(
+		page.getByRole('heading', { name: 'Gannet — fictional amine fragment' })
+	).toBeVisible();
 
 	await page.getByRole('button', { name: 'Rename or edit target' }).click();
 	await page.getByLabel('Name').fill('Gannet II — fictional amine fragment');
 	await page.getByRole('button', { name: 'Save' }).click();
-	await expect(page.getByRole('heading', { name: 'Gannet II — fictional amine fragment' })).toBeVisible();
+	await expect(
+		page.getByRole('heading', { name: 'Gannet II — fictional amine fragment' })
+	).toBeVisible();
 	await expect(page.getByText('renamed “Gannet — fictional amine fragment”')).toBeVisible();
 
 	await page.getByRole('button', { name: 'Archive' }).click();
@@ -32,15 +36,22 @@ test('a reviewer and a viewer cannot create or edit projects', async ({ browser 
 		await expect(page.getByRole('button', { name: 'Archive' })).toHaveCount(0);
 		await expect(page.getByRole('button', { name: 'Rename or edit target' })).toHaveCount(0);
 
-		const teamId = await page.evaluate(async () => (await (await fetch('/api/projects')).json()).projects[0].teamId);
-		const refused = await page.request.post('/api/projects', { data: { name: 'Not allowed', teamId } });
+		const teamId = await page.evaluate(
+			async () => (await (await fetch('/api/projects')).json()).projects[0].teamId
+		);
+		const refused = await page.request.post('/api/projects', {
+			data: { name: 'Not allowed', teamId }
+		});
 		expect(refused.status()).toBe(403);
 		expect((await refused.json()).error.code).toBe('forbidden');
 		await page.context().close();
 	}
 });
 
-test('a lead adds a member, who sets a password with the one-time link and signs in', async ({ page, browser }) => {
+test('a lead adds a member, who sets a password with the one-time link and signs in', async ({
+	page,
+	browser
+}) => {
 	await signInAndWait(page, 'lead@example.com');
 	await page.getByRole('link', { name: 'Aster Process Chemistry' }).click();
 	await page.getByLabel('E-mail').fill('new.reviewer@example.com');
@@ -72,7 +83,10 @@ test('the only lead cannot be removed', async ({ page }) => {
 	await expect(page.getByRole('alert')).toContainText('only lead');
 });
 
-test('an API token is shown once, works as a Bearer token, and stops working when revoked', async ({ page, playwright }) => {
+test('an API token is shown once, works as a Bearer token, and stops working when revoked', async ({
+	page,
+	playwright
+}) => {
 	await signInAndWait(page, 'chemist@example.com');
 	await page.getByRole('link', { name: 'Account' }).click();
 	await page.getByLabel('Label').fill('route export script');
@@ -98,7 +112,9 @@ test('an API token is shown once, works as a Bearer token, and stops working whe
 test('pages and the API refuse visitors without a session', async ({ page, request }) => {
 	const api = await request.get('/api/projects');
 	expect(api.status()).toBe(401);
-	expect(await api.json()).toEqual({ error: { code: 'unauthenticated', message: expect.any(String) } });
+	expect(await api.json()).toEqual({
+		error: { code: 'unauthenticated', message: expect.any(String) }
+	});
 	await page.goto('/teams/00000000-0000-4000-8000-000000000000');
 	await expect(page).toHaveURL(/\/signin\?redirectTo=/);
 });

@@ -50,8 +50,9 @@ export async function makeTeamWithEveryRole() {
 		viewer: await makeUser('Viewer'),
 		outsider: await makeUser('Outsider')
 	};
-	for (const role of ['lead', 'chemist', 'reviewer', 'viewer'] as const)
+	for (const role of ['lead', 'chemist', 'reviewer', 'viewer'] as const) {
 		await join(people[role], team.id, role);
+	}
 	await join(people.outsider, other.id, 'lead');
 	return { team, other, people };
 }

@@ -77,13 +77,20 @@ export function makeMalformedStructures(seed: number, count: number): string[] {
 			'',
 			`${String(hugeOr(atoms)).padStart(3)}${String(hugeOr(atoms - 1)).padStart(3)}  0  0  0  0  0  0  0  0999 V2000`
 		];
-		for (let i = 0; i < atoms; i++) lines.push(atomLine());
-		for (let i = 1; i < atoms; i++)
+		for (let i = 0; i < atoms; i++) {
+			lines.push(atomLine());
+		}
+		for (let i = 1; i < atoms; i++) {
 			lines.push(
 				`${String(i).padStart(3)}${String(pick([i + 1, 0, 99, -3])).padStart(3)}  ${pick([1, 2, 3, 9])}  0`
 			);
-		if (random() < 0.4) lines.splice(4 + int(atoms), 2 + int(3)); // truncated block
-		if (random() < 0.8) lines.push('M  END');
+		}
+		if (random() < 0.4) {
+			lines.splice(4 + int(atoms), 2 + int(3));
+		} // truncated block
+		if (random() < 0.8) {
+			lines.push('M  END');
+		}
 		return lines.join('\n');
 	};
 	const v3000 = () => {
@@ -97,16 +104,24 @@ export function makeMalformedStructures(seed: number, count: number): string[] {
 			`M  V30 COUNTS ${hugeOr(atoms)} ${hugeOr(atoms - 1)} 0 0 0`,
 			'M  V30 BEGIN ATOM'
 		];
-		for (let i = 1; i <= atoms; i++)
+		for (let i = 1; i <= atoms; i++) {
 			lines.push(
 				`M  V30 ${i} ${pick(SYMBOLS)} ${random() * 5} 0 0 0${random() < 0.1 ? ' MASS=999' : ''}`
 			);
-		if (random() < 0.8) lines.push('M  V30 END ATOM');
+		}
+		if (random() < 0.8) {
+			lines.push('M  V30 END ATOM');
+		}
 		lines.push('M  V30 BEGIN BOND');
-		for (let i = 1; i < atoms; i++)
+		for (let i = 1; i < atoms; i++) {
 			lines.push(`M  V30 ${i} ${pick([1, 2, 7])} ${i} ${pick([i + 1, 0, 50])}`);
-		if (random() < 0.7) lines.push('M  V30 END BOND', 'M  V30 END CTAB');
-		if (random() < 0.8) lines.push('M  END');
+		}
+		if (random() < 0.7) {
+			lines.push('M  V30 END BOND', 'M  V30 END CTAB');
+		}
+		if (random() < 0.8) {
+			lines.push('M  END');
+		}
 		return lines.join('\n');
 	};
 	const sdf = () =>

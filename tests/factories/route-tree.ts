@@ -15,8 +15,11 @@ const HTTP_EXPORTS = /export const (GET|POST|PUT|PATCH|DELETE|fallback)\b/g;
 function routeFiles(dir: string, out: string[] = []): string[] {
 	for (const name of readdirSync(dir)) {
 		const path = join(dir, name);
-		if (statSync(path).isDirectory()) routeFiles(path, out);
-		else if (name === '+server.ts' || name === '+page.server.ts') out.push(path);
+		if (statSync(path).isDirectory()) {
+			routeFiles(path, out);
+		} else if (name === '+server.ts' || name === '+page.server.ts') {
+			out.push(path);
+		}
 	}
 	return out;
 }

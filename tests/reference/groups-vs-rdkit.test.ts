@@ -29,7 +29,10 @@ describe('the reference molecule set', () => {
 	});
 	it('exercises every group id at least once (RDKit finds each somewhere)', () => {
 		const unseen = rules.groups
-			.filter((group) => !referenceMolecules.some((m) => rdkitMatches(RDKit, m.smiles, group.smarts).length > 0))
+			.filter(
+				(group) =>
+					!referenceMolecules.some((m) => rdkitMatches(RDKit, m.smiles, group.smarts).length > 0)
+			)
 			.map((group) => group.id);
 		expect(unseen).toEqual([]);
 	});
@@ -57,7 +60,10 @@ describe.each(aromaticityDisagreements)('aromaticity: $name', (testCase) => {
 	it(`RDKit reports ${JSON.stringify(testCase.rdkit)}, we report the chemistry ${JSON.stringify(testCase.chemistry)}`, () => {
 		const ours = findGroups(readStructure(testCase.smiles).molecule);
 		for (const [id, count] of Object.entries(testCase.rdkit)) {
-			expect(rdkitMatches(RDKit, testCase.smiles, rules.groupsById.get(id)!.smarts).length, `RDKit ${id}`).toBe(count);
+			expect(
+				rdkitMatches(RDKit, testCase.smiles, rules.groupsById.get(id)!.smarts).length,
+				`RDKit ${id}`
+			).toBe(count);
 		}
 		for (const [id, count] of Object.entries(testCase.chemistry)) {
 			expect(ours.filter((g) => g.id === id).length, `ours ${id}`).toBe(count);

@@ -19,7 +19,7 @@ const REAGENTS: [name: string, smiles: string, formula: string, handbook: number
 	['imidazole', 'c1c[nH]cn1', 'C3H4N2', 68.08],
 	['tetrahydrofuran', 'C1CCOC1', 'C4H8O', 72.11],
 	['N,N-dimethylformamide', 'CN(C)C=O', 'C3H7NO', 73.09],
-	['pyridine', 'c1ccncc1', 'C5H5N', 79.10],
+	['pyridine', 'c1ccncc1', 'C5H5N', 79.1],
 	['dichloromethane', 'ClCCl', 'CH2Cl2', 84.93],
 	['toluene', 'Cc1ccccc1', 'C7H8', 92.14],
 	['triethylamine', 'CCN(CC)CC', 'C6H15N', 101.19],
@@ -29,7 +29,7 @@ const REAGENTS: [name: string, smiles: string, formula: string, handbook: number
 	['4-(dimethylamino)pyridine', 'CN(C)c1ccncc1', 'C7H10N2', 122.17],
 	['tert-butyldimethylsilyl chloride', 'CC(C)(C)[Si](C)(C)Cl', 'C6H15ClSi', 150.72],
 	['benzyl bromide', 'BrCc1ccccc1', 'C7H7Br', 171.04],
-	['p-toluenesulfonic acid', 'Cc1ccc(cc1)S(=O)(=O)O', 'C7H8O3S', 172.20],
+	['p-toluenesulfonic acid', 'Cc1ccc(cc1)S(=O)(=O)O', 'C7H8O3S', 172.2],
 	['N,N′-dicyclohexylcarbodiimide', 'C1CCC(CC1)N=C=NC1CCCCC1', 'C13H22N2', 206.33],
 	['di-tert-butyl dicarbonate', 'CC(C)(C)OC(=O)OC(=O)OC(C)(C)C', 'C10H18O5', 218.25]
 ];
@@ -45,14 +45,29 @@ describe('molar masses of common reagents (CRC Handbook of Chemistry and Physics
 // IUPAC standard atomic weights, abridged to five significant figures (IUPAC Commission on
 // Isotopic Abundances and Atomic Weights, 2021 table), from memory.
 const IUPAC: Record<string, number> = {
-	H: 1.008, B: 10.81, C: 12.011, N: 14.007, O: 15.999, F: 18.998, Si: 28.085, P: 30.974, S: 32.06, Cl: 35.45, Br: 79.904, I: 126.9
+	H: 1.008,
+	B: 10.81,
+	C: 12.011,
+	N: 14.007,
+	O: 15.999,
+	F: 18.998,
+	Si: 28.085,
+	P: 30.974,
+	S: 32.06,
+	Cl: 35.45,
+	Br: 79.904,
+	I: 126.9
 };
 
 function massFromFormula(formula: string): number {
 	let mass = 0;
-	for (const [, element, count] of formula.replace(/\d*[+-]$/, '').matchAll(/([A-Z][a-z]?)(\d*)/g)) {
+	for (const [, element, count] of formula
+		.replace(/\d*[+-]$/, '')
+		.matchAll(/([A-Z][a-z]?)(\d*)/g)) {
 		const weight = IUPAC[element!];
-		if (weight === undefined) throw new Error(`no atomic weight for ${element}`);
+		if (weight === undefined) {
+			throw new Error(`no atomic weight for ${element}`);
+		}
 		mass += weight * (count ? Number(count) : 1);
 	}
 	return mass;
@@ -62,6 +77,8 @@ describe('every reference molecule weighs what its formula says (IUPAC standard 
 	it.each(referenceMolecules)('$name', ({ smiles }) => {
 		const { molecule } = readStructure(smiles);
 		// 0.02 g/mol allows for the abridged weights over up to ~60 atoms.
-		expect(Math.abs(molarMassOf(molecule) - massFromFormula(formulaOf(molecule)))).toBeLessThan(0.02);
+		expect(Math.abs(molarMassOf(molecule) - massFromFormula(formulaOf(molecule)))).toBeLessThan(
+			0.02
+		);
 	});
 });

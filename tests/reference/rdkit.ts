@@ -21,11 +21,17 @@ export function rdkitMatches(RDKit: MainModule, smiles: string, smarts: string):
 	const mol = RDKit.get_mol(smiles);
 	const query = RDKit.get_qmol(smarts);
 	try {
-		if (!mol || !mol.is_valid()) throw new Error(`RDKit cannot read ${smiles}`);
-		if (!query || !query.is_valid()) throw new Error(`RDKit cannot read the SMARTS ${smarts}`);
+		if (!mol || !mol.is_valid()) {
+			throw new Error(`RDKit cannot read ${smiles}`);
+		}
+		if (!query || !query.is_valid()) {
+			throw new Error(`RDKit cannot read the SMARTS ${smarts}`);
+		}
 		const parsed: unknown = JSON.parse(mol.get_substruct_matches(query));
 		// No match comes back as "{}", not "[]".
-		if (!Array.isArray(parsed)) return [];
+		if (!Array.isArray(parsed)) {
+			return [];
+		}
 		return (parsed as { atoms: number[] }[]).map((match) => [...match.atoms].sort((a, b) => a - b));
 	} finally {
 		mol?.delete();

@@ -20,7 +20,9 @@ beforeAll(async () => {
 function canonical(smiles: string): string {
 	const mol = RDKit.get_mol(smiles);
 	try {
-		if (!mol?.is_valid()) throw new Error(`RDKit cannot read ${smiles}`);
+		if (!mol?.is_valid()) {
+			throw new Error(`RDKit cannot read ${smiles}`);
+		}
 		return mol.get_smiles();
 	} finally {
 		mol?.delete();
@@ -34,7 +36,9 @@ function rdkitProducts(smarts: string, smiles: string): Set<string> {
 	const substrate = RDKit.get_mol(smiles)!;
 	reactants.append(substrate);
 	try {
-		if (!reaction) throw new Error(`RDKit cannot read the reaction ${smarts}`);
+		if (!reaction) {
+			throw new Error(`RDKit cannot read the reaction ${smarts}`);
+		}
 		const outcomes = reaction.run_reactants(reactants, 50);
 		const products = new Set<string>();
 		for (let i = 0; i < outcomes.size(); i++) {

@@ -32,11 +32,16 @@ const routeDocument = (name: string) => ({
 function integrityCheck(file: string): Promise<string> {
 	return new Promise((resolve, reject) => {
 		const db = new sqlite3.Database(file, sqlite3.OPEN_READONLY, (err) => {
-			if (err) return reject(err);
+			if (err) {
+				return reject(err);
+			}
 			db.get('PRAGMA integrity_check', (error, row: Record<string, string> | undefined) => {
 				db.close();
-				if (error) reject(error);
-				else resolve(Object.values(row ?? {})[0] ?? 'no answer');
+				if (error) {
+					reject(error);
+				} else {
+					resolve(Object.values(row ?? {})[0] ?? 'no answer');
+				}
 			});
 		});
 	});
@@ -65,10 +70,15 @@ describe('SIGKILL during a burst of writes', () => {
 						headers: { cookie, 'content-type': 'application/json' },
 						body: JSON.stringify(routeDocument(name))
 					});
-					if (response.status === 201) acknowledged.push({ id: (await response.json()).id, name });
-					else throw new Error(`write answered ${response.status}: ${await response.text()}`);
+					if (response.status === 201) {
+						acknowledged.push({ id: (await response.json()).id, name });
+					} else {
+						throw new Error(`write answered ${response.status}: ${await response.text()}`);
+					}
 				} catch (caught) {
-					if (!killed) throw caught;
+					if (!killed) {
+						throw caught;
+					}
 				}
 				if (acknowledged.length >= KILL_AFTER_ACKS && !killed) {
 					killed = true;
@@ -94,7 +104,9 @@ describe('SIGKILL during a burst of writes', () => {
 				body?.name === name &&
 				body.document.intermediates.length === 3 &&
 				body.document.steps.length === 2;
-			if (!whole) missing.push(`${name} (${response.status})`);
+			if (!whole) {
+				missing.push(`${name} (${response.status})`);
+			}
 		}
 		expect(missing).toEqual([]);
 		await server.stop();

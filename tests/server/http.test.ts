@@ -56,7 +56,9 @@ function insertApiToken(email: string): Promise<string> {
 	const now = new Date().toISOString().replace('T', ' ').replace('Z', ' +00:00');
 	return new Promise((resolve, reject) => {
 		const db = new sqlite3.Database(path.join(dataDir, 'orthogon.db'), (err) => {
-			if (err) return reject(err);
+			if (err) {
+				return reject(err);
+			}
 			db.run(
 				`INSERT INTO api_tokens (id, userId, label, tokenHash, prefix, createdAt, updatedAt)
 				 SELECT ?, id, 'server test', ?, ?, ?, ? FROM users WHERE email = ?`,
@@ -70,8 +72,11 @@ function insertApiToken(email: string): Promise<string> {
 				],
 				(error) => {
 					db.close();
-					if (error) reject(error);
-					else resolve(token);
+					if (error) {
+						reject(error);
+					} else {
+						resolve(token);
+					}
 				}
 			);
 		});

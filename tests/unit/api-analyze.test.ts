@@ -48,8 +48,9 @@ describe('POST /api/analyze', () => {
 			['Boc', 'amine-primary'],
 			['TBS', 'alcohol-secondary']
 		]);
-		for (const pg of body.protectingGroups)
+		for (const pg of body.protectingGroups) {
 			expect(Object.keys(pg).sort()).toEqual(['atoms', 'id', 'masks']);
+		}
 	});
 	it('gives the same canonical key for another writing of the molecule, and a molfile', async () => {
 		const a = await call({ structure: 'OCC(=O)OC' });

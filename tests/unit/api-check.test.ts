@@ -12,8 +12,17 @@ beforeAll(async () => {
 });
 
 type Who = keyof typeof f.people;
-async function call(handler: unknown, who: Who | null, options: { params?: Record<string, string>; method?: string; body?: unknown } = {}) {
-	const event = fakeEvent({ user: who ? f.people[who] : null, path: '/api/check', method: options.method ?? 'POST', body: options.body }) as RequestEvent & {
+async function call(
+	handler: unknown,
+	who: Who | null,
+	options: { params?: Record<string, string>; method?: string; body?: unknown } = {}
+) {
+	const event = fakeEvent({
+		user: who ? f.people[who] : null,
+		path: '/api/check',
+		method: options.method ?? 'POST',
+		body: options.body
+	}) as RequestEvent & {
 		params: Record<string, string>;
 	};
 	event.params = options.params ?? {};
@@ -22,7 +31,12 @@ async function call(handler: unknown, who: Who | null, options: { params?: Recor
 }
 
 // A ketone standing by while a Grignard reagent adds to the ester (Clayden, from memory).
-const grignard = { id: 'add-MeMgBr', substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCC(C)(C)O', reagents: 'MeMgBr, THF' };
+const grignard = {
+	id: 'add-MeMgBr',
+	substrate: 'CC(=O)CCC(=O)OC',
+	product: 'CC(=O)CCC(C)(C)O',
+	reagents: 'MeMgBr, THF'
+};
 
 describe('POST /api/check', () => {
 	it('answers per step with conditions, hazards and clashes in the documented shape', async () => {
@@ -30,7 +44,14 @@ describe('POST /api/check', () => {
 		expect(status).toBe(200);
 		expect(body.steps).toHaveLength(1);
 		const [step] = body.steps;
-		expect(Object.keys(step).sort()).toEqual(['clashes', 'conditions', 'hazards', 'id', 'reagentClasses', 'unrecognized']);
+		expect(Object.keys(step).sort()).toEqual([
+			'clashes',
+			'conditions',
+			'hazards',
+			'id',
+			'reagentClasses',
+			'unrecognized'
+		]);
 		// Which reagent brought which class, as typed (THF brings none).
 		expect(step.reagentClasses).toEqual([
 			{ reagent: 'MeMgBr', text: 'MeMgBr', conditions: ['organometallic-grignard'] },
@@ -48,7 +69,9 @@ describe('POST /api/check', () => {
 			atoms: [0, 1, 2, 3],
 			message: expect.stringContaining('ketone')
 		});
-		expect(step.hazards.every((h: { reagent: string; note: string }) => h.reagent && h.note)).toBe(true);
+		expect(step.hazards.every((h: { reagent: string; note: string }) => h.reagent && h.note)).toBe(
+			true
+		);
 	});
 
 	it('lists the reagent text it did not recognise, as typed, beside what it did', async () => {
@@ -66,18 +89,31 @@ describe('POST /api/check', () => {
 	});
 
 	it('answers 422 naming the step for an unknown condition or an unreadable structure', async () => {
-		const unknown = await call(checkPost, 'lead', { body: { steps: [grignard, { ...grignard, id: 'second', conditions: ['moonlight'] }] } });
+		const unknown = await call(checkPost, 'lead', {
+			body: { steps: [grignard, { ...grignard, id: 'second', conditions: ['moonlight'] }] }
+		});
 		expect(unknown.status).toBe(422);
 		expect(unknown.body.error.code).toBe('unknown_condition');
 		expect(unknown.body.error.message).toContain('Step "second"');
-		const unreadable = await call(checkPost, 'lead', { body: { steps: [{ ...grignard, id: 'broken', substrate: 'C1CC(' }] } });
+		const unreadable = await call(checkPost, 'lead', {
+			body: { steps: [{ ...grignard, id: 'broken', substrate: 'C1CC(' }] }
+		});
 		expect(unreadable.status).toBe(422);
-		expect(unreadable.body.error).toMatchObject({ code: 'invalid_structure', message: expect.stringContaining('Step "broken"') });
+		expect(unreadable.body.error).toMatchObject({
+			code: 'invalid_structure',
+			message: expect.stringContaining('Step "broken"')
+		});
 	});
 
 	it('answers 400 for the wrong shape, an empty list or more than 200 steps, and 401 without a user', async () => {
 		expect((await call(checkPost, 'lead', { body: { steps: [] } })).status).toBe(400);
-		expect((await call(checkPost, 'lead', { body: { steps: Array.from({ length: 201 }, (_, i) => ({ ...grignard, id: `s${i}` })) } })).status).toBe(400);
+		expect(
+			(
+				await call(checkPost, 'lead', {
+					body: { steps: Array.from({ length: 201 }, (_, i) => ({ ...grignard, id: `s${i}` })) }
+				})
+			).status
+		).toBe(400);
 		expect((await call(checkPost, 'lead', { body: { steps: [{ id: 'x' }] } })).status).toBe(400);
 		expect((await call(checkPost, null, { body: { steps: [grignard] } })).status).toBe(401);
 	});
@@ -105,7 +141,10 @@ describe('GET /api/routes/{id}/check', () => {
 			}
 		});
 		expect(created.status).toBe(201);
-		const { status, body } = await call(routeCheck, 'reviewer', { method: 'GET', params: { routeId: created.body.id } });
+		const { status, body } = await call(routeCheck, 'reviewer', {
+			method: 'GET',
+			params: { routeId: created.body.id }
+		});
 		expect(status).toBe(200);
 		expect(body.steps.map((s: { id: string }) => s.id)).toEqual(['s1', 's2', 's3']);
 		expect(body.steps[0].clashes.map((c: { subject: string }) => c.subject)).toEqual(['ketone']);
@@ -115,9 +154,15 @@ describe('GET /api/routes/{id}/check', () => {
 		expect(body.steps[1].error.message).toBe('The product cannot be read — it is empty.');
 		expect(body.steps[1].unrecognized).toEqual([]);
 		expect(body.steps[2]).toMatchObject({ id: 's3', clashes: [], unrecognized: ['OG-Cat 17'] });
-		expect(body.steps[2].error).toMatchObject({ code: 'invalid_structure', message: expect.stringContaining('substrate') });
+		expect(body.steps[2].error).toMatchObject({
+			code: 'invalid_structure',
+			message: expect.stringContaining('substrate')
+		});
 		expect(body.steps[0].unrecognized).toEqual([]);
 		expect(body.steps[0].error).toBeUndefined();
-		expect((await call(routeCheck, 'outsider', { method: 'GET', params: { routeId: created.body.id } })).status).toBe(404);
+		expect(
+			(await call(routeCheck, 'outsider', { method: 'GET', params: { routeId: created.body.id } }))
+				.status
+		).toBe(404);
 	});
 });

@@ -175,7 +175,7 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 		expect(answer.body.error.message).toMatch(/^There is no plan 1 for this route\. .*step "s1"/);
 	});
 
-	it('refuses a rank that is not a number before planning the route (404, not the planner\'s 422)', async () => {
+	it("refuses a rank that is not a number before planning the route (404, not the planner's 422)", async () => {
 		const broken = await createRoute(f.people.chemist, project, {
 			...grignard(),
 			steps: [{ id: 's1', from: ['i0'], to: 'gone' }]

@@ -14,7 +14,9 @@ beforeAll(async () => {
 
 type Handler = (event: never) => Promise<Response> | Response;
 const call = async (handler: unknown, options: Parameters<typeof fakeEvent>[0]) => {
-	const response = await (handler as Handler)(fakeEvent({ path: '/api/projects', ...options }) as never);
+	const response = await (handler as Handler)(
+		fakeEvent({ path: '/api/projects', ...options }) as never
+	);
 	return { status: response.status, body: await response.json() };
 };
 
@@ -22,12 +24,19 @@ describe('GET /api/projects', () => {
 	it('lists only the caller’s teams, in the documented shape', async () => {
 		const { status, body } = await call(GET, { user: f.people.viewer });
 		expect(status).toBe(200);
-		expect(body).toEqual({ projects: [{ id: expect.any(String), name: 'Ours', teamId: f.team.id, teamName: 'Bench team' }] });
+		expect(body).toEqual({
+			projects: [
+				{ id: expect.any(String), name: 'Ours', teamId: f.team.id, teamName: 'Bench team' }
+			]
+		});
 		const outsider = await call(GET, { user: f.people.outsider });
 		expect(outsider.body.projects.map((p: { name: string }) => p.name)).toEqual(['Theirs']);
 	});
 	it('answers 401 in the error shape without a user', async () => {
-		expect(await call(GET, {})).toEqual({ status: 401, body: { error: { code: 'unauthenticated', message: expect.any(String) } } });
+		expect(await call(GET, {})).toEqual({
+			status: 401,
+			body: { error: { code: 'unauthenticated', message: expect.any(String) } }
+		});
 	});
 });
 
@@ -41,20 +50,39 @@ describe('POST /api/projects', () => {
 		expect(status).toBe(201);
 		expect(Object.keys(body)).toEqual(['id']);
 		const created = await Project.findByPk(body.id);
-		expect(created).toMatchObject({ name: 'Kittiwake', description: 'A fictional target.', teamId: f.team.id });
+		expect(created).toMatchObject({
+			name: 'Kittiwake',
+			description: 'A fictional target.',
+			teamId: f.team.id
+		});
 	});
 	it('refuses a reviewer with 403 and another team with 404', async () => {
-		const reviewer = await call(POST, { user: f.people.reviewer, method: 'POST', body: { name: 'Nope', teamId: f.team.id } });
+		const reviewer = await call(POST, {
+			user: f.people.reviewer,
+			method: 'POST',
+			body: { name: 'Nope', teamId: f.team.id }
+		});
 		expect(reviewer.status).toBe(403);
 		expect(reviewer.body.error.code).toBe('forbidden');
-		const outsider = await call(POST, { user: f.people.outsider, method: 'POST', body: { name: 'Nope', teamId: f.team.id } });
+		const outsider = await call(POST, {
+			user: f.people.outsider,
+			method: 'POST',
+			body: { name: 'Nope', teamId: f.team.id }
+		});
 		expect(outsider.status).toBe(404);
 	});
 	it('answers 400 with details for a bad body and for non-JSON', async () => {
-		const bad = await call(POST, { user: f.people.lead, method: 'POST', body: { name: '', teamId: 'x' } });
+		const bad = await call(POST, {
+			user: f.people.lead,
+			method: 'POST',
+			body: { name: '', teamId: 'x' }
+		});
 		expect(bad.status).toBe(400);
 		expect(bad.body.error.code).toBe('invalid_body');
-		expect(bad.body.error.details.map((d: { path: string[] }) => d.path[0]).sort()).toEqual(['name', 'teamId']);
+		expect(bad.body.error.details.map((d: { path: string[] }) => d.path[0]).sort()).toEqual([
+			'name',
+			'teamId'
+		]);
 		const garbage = await call(POST, { user: f.people.lead, method: 'POST', body: 'not json' });
 		expect(garbage.status).toBe(400);
 	});
@@ -68,7 +96,10 @@ describe('POST /api/projects', () => {
 
 describe('unknown API paths', () => {
 	it('answer 404 in the error shape', async () => {
-		const { status, body } = await call(fallback, { user: f.people.lead, path: '/api/nothing-here' });
+		const { status, body } = await call(fallback, {
+			user: f.people.lead,
+			path: '/api/nothing-here'
+		});
 		expect(status).toBe(404);
 		expect(body.error.code).toBe('not_found');
 	});

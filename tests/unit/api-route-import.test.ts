@@ -36,8 +36,12 @@ async function upload(
 	extra: Record<string, string> = {}
 ) {
 	const form = new FormData();
-	if (file !== null) form.set('file', file);
-	for (const [k, v] of Object.entries(extra)) form.set(k, v);
+	if (file !== null) {
+		form.set('file', file);
+	}
+	for (const [k, v] of Object.entries(extra)) {
+		form.set(k, v);
+	}
 	const request = new Request('http://localhost/api/projects/x/routes/import', {
 		method: 'POST',
 		body: form

@@ -16,12 +16,31 @@ const doc = (name = 'Route one', extra = 0) => ({
 		{ id: 'b', label: 'protected', structure: 'CC1(CCC(=O)OC)OCCO1' },
 		...Array.from({ length: extra }, (_, i) => ({ id: `extra-${i}`, structure: 'C' }))
 	],
-	steps: [{ id: 's1', from: ['a'], to: 'b', reagents: 'ethylene glycol, TsOH, toluene, reflux', intent: 'protect' as const }]
+	steps: [
+		{
+			id: 's1',
+			from: ['a'],
+			to: 'b',
+			reagents: 'ethylene glycol, TsOH, toluene, reflux',
+			intent: 'protect' as const
+		}
+	]
 });
 
 type Who = keyof typeof f.people;
-async function call(handler: unknown, who: Who | null, params: Record<string, string>, method = 'GET', body?: unknown) {
-	const event = fakeEvent({ user: who ? f.people[who] : null, path: '/api/x', method, body }) as RequestEvent & { params: Record<string, string> };
+async function call(
+	handler: unknown,
+	who: Who | null,
+	params: Record<string, string>,
+	method = 'GET',
+	body?: unknown
+) {
+	const event = fakeEvent({
+		user: who ? f.people[who] : null,
+		path: '/api/x',
+		method,
+		body
+	}) as RequestEvent & { params: Record<string, string> };
 	event.params = params;
 	const response = await (handler as (e: RequestEvent) => Promise<Response>)(event);
 	return { status: response.status, body: await response.json() };
@@ -43,7 +62,15 @@ describe('route API', () => {
 		routeId = created.body.id;
 		for (const who of ['lead', 'chemist', 'reviewer', 'viewer'] as const) {
 			const listed = await call(routeList.GET, who, { projectId: project.id });
-			expect(listed.body.routes).toEqual([{ id: routeId, name: 'Route one', status: 'draft', version: 1, updatedAt: expect.any(String) }]);
+			expect(listed.body.routes).toEqual([
+				{
+					id: routeId,
+					name: 'Route one',
+					status: 'draft',
+					version: 1,
+					updatedAt: expect.any(String)
+				}
+			]);
 		}
 		expect(await ActivityEvent.count({ where: { kind: 'route.created' } })).toBe(1);
 	});
@@ -51,13 +78,26 @@ describe('route API', () => {
 	it('round-trips the route document through GET', async () => {
 		const got = await call(oneRoute.GET, 'viewer', { routeId });
 		expect(got.status).toBe(200);
-		expect(got.body).toEqual({ id: routeId, projectId: project.id, name: 'Route one', status: 'draft', version: 1, document: doc() });
+		expect(got.body).toEqual({
+			id: routeId,
+			projectId: project.id,
+			name: 'Route one',
+			status: 'draft',
+			version: 1,
+			document: doc()
+		});
 	});
 
 	it('saves with the current version and refuses a stale one with 409, writing nothing', async () => {
-		const saved = await call(oneRoute.PUT, 'lead', { routeId }, 'PUT', { version: 1, document: doc('Route one, revised', 2) });
+		const saved = await call(oneRoute.PUT, 'lead', { routeId }, 'PUT', {
+			version: 1,
+			document: doc('Route one, revised', 2)
+		});
 		expect(saved).toEqual({ status: 200, body: { version: 2 } });
-		const stale = await call(oneRoute.PUT, 'chemist', { routeId }, 'PUT', { version: 1, document: doc('Lost edit') });
+		const stale = await call(oneRoute.PUT, 'chemist', { routeId }, 'PUT', {
+			version: 1,
+			document: doc('Lost edit')
+		});
 		expect(stale.status).toBe(409);
 		expect(stale.body.error.code).toBe('version-conflict');
 		const got = await call(oneRoute.GET, 'chemist', { routeId });
@@ -68,13 +108,22 @@ describe('route API', () => {
 
 	it('refuses reviewers and viewers with 403 and other teams with 404, on every endpoint', async () => {
 		for (const who of ['reviewer', 'viewer'] as const) {
-			expect((await call(routeList.POST, who, { projectId: project.id }, 'POST', doc())).status).toBe(403);
-			expect((await call(oneRoute.PUT, who, { routeId }, 'PUT', { version: 2, document: doc() })).status).toBe(403);
+			expect(
+				(await call(routeList.POST, who, { projectId: project.id }, 'POST', doc())).status
+			).toBe(403);
+			expect(
+				(await call(oneRoute.PUT, who, { routeId }, 'PUT', { version: 2, document: doc() })).status
+			).toBe(403);
 		}
 		expect((await call(routeList.GET, 'outsider', { projectId: project.id })).status).toBe(404);
-		expect((await call(routeList.POST, 'outsider', { projectId: project.id }, 'POST', doc())).status).toBe(404);
+		expect(
+			(await call(routeList.POST, 'outsider', { projectId: project.id }, 'POST', doc())).status
+		).toBe(404);
 		expect((await call(oneRoute.GET, 'outsider', { routeId })).status).toBe(404);
-		expect((await call(oneRoute.PUT, 'outsider', { routeId }, 'PUT', { version: 2, document: doc() })).status).toBe(404);
+		expect(
+			(await call(oneRoute.PUT, 'outsider', { routeId }, 'PUT', { version: 2, document: doc() }))
+				.status
+		).toBe(404);
 		expect((await call(oneRoute.GET, null, { routeId })).status).toBe(401);
 	});
 
@@ -82,6 +131,9 @@ describe('route API', () => {
 		const cyclic = { ...doc(), steps: [...doc().steps, { id: 's2', from: ['b'], to: 'a' }] };
 		const bad = await call(routeList.POST, 'chemist', { projectId: project.id }, 'POST', cyclic);
 		expect(bad.status).toBe(422);
-		expect(bad.body.error).toMatchObject({ code: 'invalid_route', message: 'The steps form a cycle: a → b → a. (at steps)' });
+		expect(bad.body.error).toMatchObject({
+			code: 'invalid_route',
+			message: 'The steps form a cycle: a → b → a. (at steps)'
+		});
 	});
 });

@@ -1,6 +1,11 @@
 import { createHash } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { createApiToken, listApiTokens, revokeApiToken, userForApiToken } from '../../src/lib/server/auth/api-tokens';
+import {
+	createApiToken,
+	listApiTokens,
+	revokeApiToken,
+	userForApiToken
+} from '../../src/lib/server/auth/api-tokens';
 import { ApiToken } from '../../src/lib/server/db';
 import { freshDatabase, makeUser } from '../factories';
 

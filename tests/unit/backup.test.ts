@@ -29,11 +29,16 @@ afterAll(async () => {
 function routeNames(file: string): Promise<string[]> {
 	return new Promise((resolve, reject) => {
 		const db = new sqlite3.Database(file, sqlite3.OPEN_READONLY, (err) => {
-			if (err) return reject(err);
+			if (err) {
+				return reject(err);
+			}
 			db.all('SELECT name FROM routes', (error, rows: { name: string }[]) => {
 				db.close();
-				if (error) reject(error);
-				else resolve(rows.map((r) => r.name));
+				if (error) {
+					reject(error);
+				} else {
+					resolve(rows.map((r) => r.name));
+				}
 			});
 		});
 	});
@@ -49,15 +54,18 @@ describe('online SQLite backup', () => {
 	it('takes a backup while writes go on; the copy opens, passes integrity_check and holds the rows', async () => {
 		const doc = (i: number) =>
 			line(['CC(=O)CCC(=O)OC', 'CC1(CCC(=O)OC)OCCO1'], ['ethylene glycol, TsOH'], `Before ${i}`);
-		for (let i = 0; i < 5; i++) await createRoute(f.people.chemist, project, doc(i));
+		for (let i = 0; i < 5; i++) {
+			await createRoute(f.people.chemist, project, doc(i));
+		}
 		let writing = true;
 		let during = 0;
 		const writer = (async () => {
-			while (writing)
+			while (writing) {
 				await createRoute(f.people.chemist, project, {
 					...doc(during),
 					name: `During ${during++}`
 				});
+			}
 		})();
 		await new Promise((resolve) => setTimeout(resolve, 50));
 		const copy = await backupSqlite(live, join(dir, 'backups'));

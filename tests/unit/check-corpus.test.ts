@@ -35,7 +35,9 @@ beforeAll(async () => {
 /** The rule files' SMARTS for a subject, else the corpus's own for ids other branches bring. */
 function smartsFor(subject: string): string[] | undefined {
 	const group = perception.groups.find((g) => g.id === subject);
-	if (group) return [group.smarts];
+	if (group) {
+		return [group.smarts];
+	}
 	const pg = perception.protectingGroups.find((p) => p.id === subject);
 	return pg ? pg.patterns : fallbackSmarts[subject];
 }
@@ -110,16 +112,24 @@ describe.each(steps)('$id', (step) => {
 		const problems: string[] = [];
 		for (const smiles of [...substrates(step), step.product]) {
 			const mol = RDKit.get_mol(smiles);
-			if (!mol?.is_valid()) problems.push(`RDKit cannot read ${smiles}`);
+			if (!mol?.is_valid()) {
+				problems.push(`RDKit cannot read ${smiles}`);
+			}
 			mol?.delete();
 		}
 		if (problems.length === 0) {
 			const before = substrates(step).join('.');
 			for (const { subject } of step.expect) {
-				if (step.absent?.includes(subject)) continue;
+				if (step.absent?.includes(subject)) {
+					continue;
+				}
 				const patterns = smartsFor(subject) ?? [];
-				if (!presentIn(before, patterns)) problems.push(`${subject} is not in the substrate`);
-				if (!presentIn(step.product, patterns)) problems.push(`${subject} is not in the product`);
+				if (!presentIn(before, patterns)) {
+					problems.push(`${subject} is not in the substrate`);
+				}
+				if (!presentIn(step.product, patterns)) {
+					problems.push(`${subject} is not in the product`);
+				}
 			}
 		}
 		expect(problems, `step ${step.id} (${step.source})`).toEqual([]);
@@ -158,8 +168,9 @@ function judge(step: CorpusStep): { answer: StepCheck | null; failures: string[]
 		const message = caught instanceof Error ? caught.message : String(caught);
 		return { answer: null, failures: [`the check failed: ${message}`] };
 	}
-	if (answer.error)
+	if (answer.error) {
 		return { answer, failures: [`the check could not run: ${answer.error.message}`] };
+	}
 	const failures = step.expect
 		.map(({ subject, outcome }) => ({
 			subject,
@@ -171,8 +182,9 @@ function judge(step: CorpusStep): { answer: StepCheck | null; failures: string[]
 			({ subject, outcome, verdict }) => `${subject}: expected ${outcome}, came back ${verdict}`
 		);
 	for (const text of step.unrecognized ?? []) {
-		if (!answer.unrecognized.some((entry) => entry.includes(text)))
+		if (!answer.unrecognized.some((entry) => entry.includes(text))) {
 			failures.push(`"${text}" should be listed as not recognised`);
+		}
 	}
 	return { answer, failures };
 }

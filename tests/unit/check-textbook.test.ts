@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { checkStep, StepStructureError, UnknownConditionError, type StepToCheck } from '../../src/lib/rules/check';
+import {
+	checkStep,
+	StepStructureError,
+	UnknownConditionError,
+	type StepToCheck
+} from '../../src/lib/rules/check';
 import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
 
 // The clash check against textbook facts of protecting-group practice. Each case names its
@@ -19,122 +24,236 @@ const TBS = 'CC(C)(C)[Si](C)(C)O';
 const FMOC = 'C(=O)OCC1c2ccccc2-c2ccccc12';
 
 describe('steps that must not clash (orthogonal pairs)', () => {
-	it('a Grignard reagent adds to an ester while the ketone is masked as a dioxolane — Greene\'s, acetals are stable to organometallics (from memory)', () => {
-		expect(summary({ substrate: 'CC1(CCC(=O)OC)OCCO1', product: 'CC1(CCC(C)(C)O)OCCO1', reagents: 'MeMgBr, THF' })).toEqual([]);
+	it("a Grignard reagent adds to an ester while the ketone is masked as a dioxolane — Greene's, acetals are stable to organometallics (from memory)", () => {
+		expect(
+			summary({
+				substrate: 'CC1(CCC(=O)OC)OCCO1',
+				product: 'CC1(CCC(C)(C)O)OCCO1',
+				reagents: 'MeMgBr, THF'
+			})
+		).toEqual([]);
 	});
-	it('TBAF removes a TBS ether and spares a benzyl ether — Greene\'s, Bn ethers are stable to fluoride (from memory)', () => {
-		expect(summary({ substrate: `${TBS}CCCCOCc1ccccc1`, product: 'OCCCCOCc1ccccc1', reagents: 'TBAF, THF' })).toEqual([]);
+	it("TBAF removes a TBS ether and spares a benzyl ether — Greene's, Bn ethers are stable to fluoride (from memory)", () => {
+		expect(
+			summary({
+				substrate: `${TBS}CCCCOCc1ccccc1`,
+				product: 'OCCCCOCc1ccccc1',
+				reagents: 'TBAF, THF'
+			})
+		).toEqual([]);
 	});
-	it('hydrogenolysis removes a benzyl ether and spares a TBS ether — Greene\'s, silyl ethers survive H2/Pd-C (from memory)', () => {
-		expect(summary({ substrate: `${TBS}CCCCOCc1ccccc1`, product: `${TBS}CCCCO`, reagents: 'H2, Pd/C, EtOH' })).toEqual([]);
+	it("hydrogenolysis removes a benzyl ether and spares a TBS ether — Greene's, silyl ethers survive H2/Pd-C (from memory)", () => {
+		expect(
+			summary({
+				substrate: `${TBS}CCCCOCc1ccccc1`,
+				product: `${TBS}CCCCO`,
+				reagents: 'H2, Pd/C, EtOH'
+			})
+		).toEqual([]);
 	});
 	it('TFA removes Boc and spares Fmoc — the Boc/Fmoc orthogonal pair of peptide synthesis (Kocienski, from memory)', () => {
-		expect(summary({ substrate: `CC(C)(C)OC(=O)NCCCCN${FMOC}`, product: `NCCCCN${FMOC}`, reagents: 'TFA, DCM' })).toEqual([]);
+		expect(
+			summary({
+				substrate: `CC(C)(C)OC(=O)NCCCCN${FMOC}`,
+				product: `NCCCCN${FMOC}`,
+				reagents: 'TFA, DCM'
+			})
+		).toEqual([]);
 	});
 	it('piperidine removes Fmoc and spares Boc — the same pair the other way round (Kocienski, from memory)', () => {
-		expect(summary({ substrate: `CC(C)(C)OC(=O)NCCCCN${FMOC}`, product: 'CC(C)(C)OC(=O)NCCCCN', reagents: '20% piperidine in DMF' })).toEqual([]);
+		expect(
+			summary({
+				substrate: `CC(C)(C)OC(=O)NCCCCN${FMOC}`,
+				product: 'CC(C)(C)OC(=O)NCCCCN',
+				reagents: '20% piperidine in DMF'
+			})
+		).toEqual([]);
 	});
 	it('an amide coupling with HATU and DIPEA leaves Fmoc in place — the coupling step of Fmoc peptide synthesis (Kocienski, from memory)', () => {
 		const severities = check({
 			substrate: ['OC(=O)CCN' + FMOC, 'NCc1ccccc1'],
 			product: 'O=C(CCN' + FMOC + ')NCc1ccccc1',
 			reagents: 'HATU, DIPEA, DMF'
-		}).clashes.filter((c) => c.subject === 'Fmoc').map((c) => c.severity);
+		})
+			.clashes.filter((c) => c.subject === 'Fmoc')
+			.map((c) => c.severity);
 		expect(severities).not.toContain('clash');
 	});
-	it('Pd(0) removes Alloc and spares Boc — Greene\'s, Alloc is cleaved by Pd(PPh3)4 with a scavenger (from memory)', () => {
-		expect(summary({ substrate: 'CC(C)(C)OC(=O)NCCCCNC(=O)OCC=C', product: 'CC(C)(C)OC(=O)NCCCCN', reagents: 'Pd(PPh3)4, morpholine, THF' })).toEqual([]);
+	it("Pd(0) removes Alloc and spares Boc — Greene's, Alloc is cleaved by Pd(PPh3)4 with a scavenger (from memory)", () => {
+		expect(
+			summary({
+				substrate: 'CC(C)(C)OC(=O)NCCCCNC(=O)OCC=C',
+				product: 'CC(C)(C)OC(=O)NCCCCN',
+				reagents: 'Pd(PPh3)4, morpholine, THF'
+			})
+		).toEqual([]);
 	});
-	it('DDQ removes a PMB ether and spares a benzyl ether — Greene\'s, oxidative PMB cleavage (from memory)', () => {
-		expect(summary({ substrate: 'COc1ccc(COCCCCOCc2ccccc2)cc1', product: 'OCCCCOCc1ccccc1', reagents: 'DDQ, CH2Cl2, H2O' })).toEqual([]);
+	it("DDQ removes a PMB ether and spares a benzyl ether — Greene's, oxidative PMB cleavage (from memory)", () => {
+		expect(
+			summary({
+				substrate: 'COc1ccc(COCCCCOCc2ccccc2)cc1',
+				product: 'OCCCCOCc1ccccc1',
+				reagents: 'DDQ, CH2Cl2, H2O'
+			})
+		).toEqual([]);
 	});
-	it('periodate cleaves a free 1,2-diol while an acetonide-protected diol stands by — Greene\'s, acetonides survive NaIO4 (from memory)', () => {
+	it("periodate cleaves a free 1,2-diol while an acetonide-protected diol stands by — Greene's, acetonides survive NaIO4 (from memory)", () => {
 		const substrate = 'OCC(O)CCC1COC(C)(C)O1';
 		const product = 'O=CCCC1COC(C)(C)O1';
 		expect(summary({ substrate, product, reagents: 'NaIO4, THF/H2O' })).toEqual([]);
 	});
 	it('n-BuLi metalates a TBS-protected alkynol without trouble — Clayden, silyl ethers hide the O–H from organolithiums (from memory)', () => {
-		expect(summary({ substrate: `${TBS}CCCC#C`, product: `${TBS}CCCC#CC`, reagents: 'n-BuLi, THF, -78 °C; then MeI' })).toEqual([]);
+		expect(
+			summary({
+				substrate: `${TBS}CCCC#C`,
+				product: `${TBS}CCCC#CC`,
+				reagents: 'n-BuLi, THF, -78 °C; then MeI'
+			})
+		).toEqual([]);
 	});
-	it('Swern oxidation of a primary alcohol spares a TBS ether — Greene\'s (from memory)', () => {
-		expect(summary({ substrate: `${TBS}CCCCCO`, product: `${TBS}CCCCC=O`, reagents: '(COCl)2, DMSO, Et3N' })).toEqual([]);
+	it("Swern oxidation of a primary alcohol spares a TBS ether — Greene's (from memory)", () => {
+		expect(
+			summary({
+				substrate: `${TBS}CCCCCO`,
+				product: `${TBS}CCCCC=O`,
+				reagents: '(COCl)2, DMSO, Et3N'
+			})
+		).toEqual([]);
 	});
 	it('LiAlH4 reduces an ester while the ketone is a dioxolane — Clayden, why the ketone was masked (from memory)', () => {
-		expect(summary({ substrate: 'CC1(CCC(=O)OC)OCCO1', product: 'CC1(CCCO)OCCO1', reagents: 'LiAlH4, THF' })).toEqual([]);
+		expect(
+			summary({
+				substrate: 'CC1(CCC(=O)OC)OCCO1',
+				product: 'CC1(CCCO)OCCO1',
+				reagents: 'LiAlH4, THF'
+			})
+		).toEqual([]);
 	});
 	it('an intended deprotection is not reported against the group it removes — aqueous acid on a dioxolane (common practice)', () => {
-		expect(summary({ substrate: 'CC1(CCC(C)(C)O)OCCO1', product: 'CC(=O)CCC(C)(C)O', reagents: 'aq. HCl, acetone' })).toEqual([]);
+		expect(
+			summary({
+				substrate: 'CC1(CCC(C)(C)O)OCCO1',
+				product: 'CC(=O)CCC(C)(C)O',
+				reagents: 'aq. HCl, acetone'
+			})
+		).toEqual([]);
 	});
 });
 
 describe('steps that must clash', () => {
 	it('a Grignard reagent attacks the free ketone that should stand by — Clayden, ketones are attacked by RMgX (from memory)', () => {
-		const result = check({ substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCC(C)(C)O', reagents: 'MeMgBr, THF' });
+		const result = check({
+			substrate: 'CC(=O)CCC(=O)OC',
+			product: 'CC(=O)CCC(C)(C)O',
+			reagents: 'MeMgBr, THF'
+		});
 		expect(result.clashes).toEqual([
-			expect.objectContaining({ severity: 'clash', kind: 'attacks-free-group', subject: 'ketone', condition: 'organometallic-grignard', atoms: [0, 1, 2, 3] })
+			expect.objectContaining({
+				severity: 'clash',
+				kind: 'attacks-free-group',
+				subject: 'ketone',
+				condition: 'organometallic-grignard',
+				atoms: [0, 1, 2, 3]
+			})
 		]);
 		expect(result.clashes[0]!.message).toMatch(/^MeMgBr \(.+\) attacks the free ketone/);
 		expect(result.clashes[0]!.message).toMatch(/Source: /);
 	});
-	it('TBAF cannot remove one TBS ether and keep another — both are fluoride-labile (Greene\'s, from memory)', () => {
-		expect(summary({ substrate: `${TBS}CCCCO[Si](C)(C)C(C)(C)C`, product: `OCCCCO[Si](C)(C)C(C)(C)C`, reagents: 'TBAF, THF' })).toEqual([
-			'clash removes-protecting-group TBS fluoride'
-		]);
+	it("TBAF cannot remove one TBS ether and keep another — both are fluoride-labile (Greene's, from memory)", () => {
+		expect(
+			summary({
+				substrate: `${TBS}CCCCO[Si](C)(C)C(C)(C)C`,
+				product: `OCCCCO[Si](C)(C)C(C)(C)C`,
+				reagents: 'TBAF, THF'
+			})
+		).toEqual(['clash removes-protecting-group TBS fluoride']);
 	});
-	it('hydrogenolysis of a Cbz carbamate also removes a benzyl ether that should stay (Greene\'s, from memory)', () => {
-		expect(summary({ substrate: 'O=C(NCCCCOCc1ccccc1)OCc1ccccc1', product: 'NCCCCOCc1ccccc1', reagents: 'H2, Pd/C, MeOH' })).toContain(
-			'clash removes-protecting-group Bn hydrogenation'
-		);
+	it("hydrogenolysis of a Cbz carbamate also removes a benzyl ether that should stay (Greene's, from memory)", () => {
+		expect(
+			summary({
+				substrate: 'O=C(NCCCCOCc1ccccc1)OCc1ccccc1',
+				product: 'NCCCCOCc1ccccc1',
+				reagents: 'H2, Pd/C, MeOH'
+			})
+		).toContain('clash removes-protecting-group Bn hydrogenation');
 	});
-	it('TFA removing Boc also cleaves a tert-butyl ester (Greene\'s, from memory)', () => {
-		expect(summary({ substrate: 'CC(C)(C)OC(=O)NCCC(=O)OC(C)(C)C', product: 'NCCC(=O)OC(C)(C)C', reagents: 'TFA, DCM' })).toContain(
-			'clash removes-protecting-group tBu-ester acid-strong'
-		);
+	it("TFA removing Boc also cleaves a tert-butyl ester (Greene's, from memory)", () => {
+		expect(
+			summary({
+				substrate: 'CC(C)(C)OC(=O)NCCC(=O)OC(C)(C)C',
+				product: 'NCCC(=O)OC(C)(C)C',
+				reagents: 'TFA, DCM'
+			})
+		).toContain('clash removes-protecting-group tBu-ester acid-strong');
 	});
-	it('TFA removing Boc also opens an acetonide (Greene\'s, acetonides are acid-labile, from memory)', () => {
-		expect(summary({ substrate: 'CC(C)(C)OC(=O)NCCC1COC(C)(C)O1', product: 'NCCC1COC(C)(C)O1', reagents: 'TFA, DCM' })).toContain(
-			'clash removes-protecting-group acetonide acid-strong'
-		);
+	it("TFA removing Boc also opens an acetonide (Greene's, acetonides are acid-labile, from memory)", () => {
+		expect(
+			summary({
+				substrate: 'CC(C)(C)OC(=O)NCCC1COC(C)(C)O1',
+				product: 'NCCC1COC(C)(C)O1',
+				reagents: 'TFA, DCM'
+			})
+		).toContain('clash removes-protecting-group acetonide acid-strong');
 	});
 	it('catalytic hydrogenation meant for a benzyl ether also reduces a free alkene (Clayden, from memory)', () => {
-		expect(summary({ substrate: 'C=CCCCCOCc1ccccc1', product: 'C=CCCCCO', reagents: 'H2, Pd/C, EtOH' })).toContain(
-			'clash attacks-free-group alkene hydrogenation'
-		);
+		expect(
+			summary({ substrate: 'C=CCCCCOCc1ccccc1', product: 'C=CCCCCO', reagents: 'H2, Pd/C, EtOH' })
+		).toContain('clash attacks-free-group alkene hydrogenation');
 	});
 	it('n-BuLi is quenched by a free alcohol (Clayden, O–H is far more acidic than the alkyne C–H it should remove, from memory)', () => {
-		expect(summary({ substrate: 'OCCCC#C', product: 'OCCCC#CC', reagents: 'n-BuLi, THF, -78 °C; then MeI' })).toContain(
-			'clash attacks-free-group alcohol-primary organometallic'
-		);
+		expect(
+			summary({
+				substrate: 'OCCCC#C',
+				product: 'OCCCC#CC',
+				reagents: 'n-BuLi, THF, -78 °C; then MeI'
+			})
+		).toContain('clash attacks-free-group alcohol-primary organometallic');
 	});
 	it('LiAlH4 meant for an ester also reduces a free ketone (Clayden, from memory)', () => {
-		expect(summary({ substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCCO', reagents: 'LiAlH4, THF' })).toContain(
-			'clash attacks-free-group ketone hydride-strong'
-		);
+		expect(
+			summary({ substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCCO', reagents: 'LiAlH4, THF' })
+		).toContain('clash attacks-free-group ketone hydride-strong');
 	});
 	it('periodate cleaves a free 1,2-diol that should stand by (Clayden, glycol cleavage, from memory)', () => {
 		// The step oxidises a thiol-free side of the molecule with NaIO4 (sulfide to sulfoxide) and keeps the diol.
-		expect(summary({ substrate: 'OCC(O)CCCSC', product: 'OCC(O)CCCS(C)=O', reagents: 'NaIO4, MeOH/H2O' })).toContain(
-			'clash attacks-free-group diol-1,2 periodate'
-		);
+		expect(
+			summary({ substrate: 'OCC(O)CCCSC', product: 'OCC(O)CCCS(C)=O', reagents: 'NaIO4, MeOH/H2O' })
+		).toContain('clash attacks-free-group diol-1,2 periodate');
 	});
-	it('aqueous acid meant for a dioxolane also removes a TMS ether (Greene\'s, TMS ethers are the most acid-labile silyl ethers, from memory)', () => {
-		expect(summary({ substrate: 'C[Si](C)(C)OCCCC1(C)OCCO1', product: 'C[Si](C)(C)OCCCC(C)=O', reagents: 'aq. HCl, acetone' })).toContain(
-			'clash removes-protecting-group TMS acid-mild'
-		);
+	it("aqueous acid meant for a dioxolane also removes a TMS ether (Greene's, TMS ethers are the most acid-labile silyl ethers, from memory)", () => {
+		expect(
+			summary({
+				substrate: 'C[Si](C)(C)OCCCC1(C)OCCO1',
+				product: 'C[Si](C)(C)OCCCC(C)=O',
+				reagents: 'aq. HCl, acetone'
+			})
+		).toContain('clash removes-protecting-group TMS acid-mild');
 	});
 	it('piperidine meant for one Fmoc carbamate also removes a second one that should stay (Kocienski, from memory)', () => {
-		expect(summary({ substrate: `O=C(NCCCCN${FMOC})OCC1c2ccccc2-c2ccccc12`, product: `NCCCCN${FMOC}`, reagents: '20% piperidine in DMF' })).toContain(
-			'clash removes-protecting-group Fmoc base-amine'
-		);
+		expect(
+			summary({
+				substrate: `O=C(NCCCCN${FMOC})OCC1c2ccccc2-c2ccccc12`,
+				product: `NCCCCN${FMOC}`,
+				reagents: '20% piperidine in DMF'
+			})
+		).toContain('clash removes-protecting-group Fmoc base-amine');
 	});
-	it('Pd(0) meant for an Alloc carbamate also removes an allyl ester (Greene\'s, both are π-allyl substrates, from memory)', () => {
-		expect(summary({ substrate: 'C=CCOC(=O)NCCC(=O)OCC=C', product: 'NCCC(=O)OCC=C', reagents: 'Pd(PPh3)4, morpholine' })).toContain(
-			'clash removes-protecting-group allyl-ester palladium-zero'
-		);
+	it("Pd(0) meant for an Alloc carbamate also removes an allyl ester (Greene's, both are π-allyl substrates, from memory)", () => {
+		expect(
+			summary({
+				substrate: 'C=CCOC(=O)NCCC(=O)OCC=C',
+				product: 'NCCC(=O)OCC=C',
+				reagents: 'Pd(PPh3)4, morpholine'
+			})
+		).toContain('clash removes-protecting-group allyl-ester palladium-zero');
 	});
-	it('piperidine for Fmoc removal puts an acetate at most at caution, never a clash (Greene\'s, from memory)', () => {
-		const severities = check({ substrate: `CC(=O)OCCCN${FMOC}`, product: 'CC(=O)OCCCN', reagents: '20% piperidine in DMF' }).clashes
-			.filter((c) => c.subject === 'Ac')
+	it("piperidine for Fmoc removal puts an acetate at most at caution, never a clash (Greene's, from memory)", () => {
+		const severities = check({
+			substrate: `CC(=O)OCCCN${FMOC}`,
+			product: 'CC(=O)OCCCN',
+			reagents: '20% piperidine in DMF'
+		})
+			.clashes.filter((c) => c.subject === 'Ac')
 			.map((c) => c.severity);
 		expect(severities.every((s) => s === 'caution')).toBe(true);
 	});
@@ -142,23 +261,44 @@ describe('steps that must clash', () => {
 
 describe('how the check reads a step', () => {
 	it('unions explicit condition ids with those inferred from the reagent text', () => {
-		const result = check({ substrate: 'CC(=O)CCC(=O)OC', product: 'CC(=O)CCC(C)(C)O', reagents: 'MeMgBr, THF', conditions: ['heat'] });
+		const result = check({
+			substrate: 'CC(=O)CCC(=O)OC',
+			product: 'CC(=O)CCC(C)(C)O',
+			reagents: 'MeMgBr, THF',
+			conditions: ['heat']
+		});
 		expect(result.conditions).toEqual(expect.arrayContaining(['heat', 'organometallic-grignard']));
 	});
 	it('refuses an unknown explicit condition id and lists the valid ones', () => {
-		expect(() => check({ substrate: 'CCO', product: 'CC=O', conditions: ['acid-stronk'] })).toThrow(UnknownConditionError);
-		expect(() => check({ substrate: 'CCO', product: 'CC=O', conditions: ['acid-stronk'] })).toThrow(/"acid-stronk".*valid ids are: .*acid-strong/);
+		expect(() => check({ substrate: 'CCO', product: 'CC=O', conditions: ['acid-stronk'] })).toThrow(
+			UnknownConditionError
+		);
+		expect(() => check({ substrate: 'CCO', product: 'CC=O', conditions: ['acid-stronk'] })).toThrow(
+			/"acid-stronk".*valid ids are: .*acid-strong/
+		);
 	});
 	it('names the step and the side of an unreadable structure', () => {
-		expect(() => checkStep(rules, { id: 'bad-step', substrate: 'C1CC', product: 'CCO' })).toThrow(StepStructureError);
-		expect(() => checkStep(rules, { id: 'bad-step', substrate: 'CCO', product: 'C(C)(C)(C)(C)C' })).toThrow(/Step "bad-step": the product cannot be read/);
+		expect(() => checkStep(rules, { id: 'bad-step', substrate: 'C1CC', product: 'CCO' })).toThrow(
+			StepStructureError
+		);
+		expect(() =>
+			checkStep(rules, { id: 'bad-step', substrate: 'CCO', product: 'C(C)(C)(C)(C)C' })
+		).toThrow(/Step "bad-step": the product cannot be read/);
 	});
 	it('shows hazard notes for dangerous reagents (n-BuLi is pyrophoric — Bretherick, from memory)', () => {
-		const { hazards } = check({ substrate: `${TBS}CCCC#C`, product: `${TBS}CCCC#CC`, reagents: 'n-BuLi, THF; then MeI' });
+		const { hazards } = check({
+			substrate: `${TBS}CCCC#C`,
+			product: `${TBS}CCCC#CC`,
+			reagents: 'n-BuLi, THF; then MeI'
+		});
 		expect(hazards.map((h) => h.note).join(' ')).toMatch(/pyrophoric/i);
 	});
 	it('checks a convergent step with two substrates (amide coupling leaves the Boc group alone — common practice)', () => {
-		const result = check({ substrate: ['OC(=O)CCNC(=O)OC(C)(C)C', 'NCc1ccccc1'], product: 'O=C(CCNC(=O)OC(C)(C)C)NCc1ccccc1', reagents: 'EDC, HOBt, DMF' });
+		const result = check({
+			substrate: ['OC(=O)CCNC(=O)OC(C)(C)C', 'NCc1ccccc1'],
+			product: 'O=C(CCNC(=O)OC(C)(C)C)NCc1ccccc1',
+			reagents: 'EDC, HOBt, DMF'
+		});
 		expect(result.clashes.filter((c) => c.subject === 'Boc')).toEqual([]);
 	});
 });

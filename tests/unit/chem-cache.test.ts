@@ -15,7 +15,9 @@ describe('byte-bounded caches', () => {
 		const bound = 256 * 1024;
 		const cache = new LruCache<number[]>('perceptionByText', bound);
 		const filler = 'C'.repeat(1024 * 1024);
-		for (let i = 0; i < 2000; i++) cache.set(`${i} ${filler}`, [i, i + 1, i + 2]);
+		for (let i = 0; i < 2000; i++) {
+			cache.set(`${i} ${filler}`, [i, i + 1, i + 2]);
+		}
 		expect(cache.bytes).toBeLessThanOrEqual(bound);
 		expect(cache.size).toBeGreaterThan(100); // small values still fit many at a time
 		expect(cache.get(`1999 ${filler}`)).toEqual([1999, 2000, 2001]); // the newest is kept
@@ -52,7 +54,9 @@ describe('byte-bounded caches', () => {
 		clearPerceptionCache();
 		// 200 distinct texts of 256 KB each (a SMILES with a long title): 50 MB of text.
 		const title = 'x'.repeat(256 * 1024);
-		for (let i = 0; i < 200; i++) perceiveText(`${'C'.repeat((i % 20) + 1)}O ${i}${title}`);
+		for (let i = 0; i < 200; i++) {
+			perceiveText(`${'C'.repeat((i % 20) + 1)}O ${i}${title}`);
+		}
 		const use = perceptionCacheUse().byText;
 		expect(use.entries).toBe(200);
 		expect(use.bytes).toBeLessThan(200 * 2048);

@@ -59,7 +59,9 @@ describe('the imagined removal of a PG', () => {
 						);
 						removals++;
 						const fromTable = derivedTable(parent.table, leaving, masked, pg.restore);
-						if (!fromTable) continue;
+						if (!fromTable) {
+							continue;
+						}
 						derived++;
 						expect(fromTable.atomMap, `${pg.id} on ${smiles}`).toEqual(
 							Array.from(fromOpenchemlib.atomMap)

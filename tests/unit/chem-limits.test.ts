@@ -15,7 +15,9 @@ function failure(text: string): StructureError {
 	try {
 		readStructures(text);
 	} catch (caught) {
-		if (caught instanceof StructureError) return caught;
+		if (caught instanceof StructureError) {
+			return caught;
+		}
 		throw caught;
 	}
 	throw new Error(`expected ${JSON.stringify(text.slice(0, 40))} to be refused`);

@@ -9,15 +9,19 @@ import { StructureError } from '../../src/lib/chem/errors';
 import { canonicalForm, formulaOf } from '../../src/lib/chem/properties';
 import { smilesAtoms } from '../../src/lib/chem/smiles-atoms';
 
-const fixture = (name: string) => readFileSync(new URL(`../fixtures/${name}`, import.meta.url), 'utf8');
-const keyOf = (text: string) => canonicalForm(readStructure(text, { coordinates: true }).molecule).key;
+const fixture = (name: string) =>
+	readFileSync(new URL(`../fixtures/${name}`, import.meta.url), 'utf8');
+const keyOf = (text: string) =>
+	canonicalForm(readStructure(text, { coordinates: true }).molecule).key;
 
 /** The StructureError a read throws (fails the test when nothing is thrown). */
 function failure(text: string): StructureError {
 	try {
 		readStructure(text);
 	} catch (caught) {
-		if (caught instanceof StructureError) return caught;
+		if (caught instanceof StructureError) {
+			return caught;
+		}
 		throw caught;
 	}
 	throw new Error(`expected ${JSON.stringify(text.slice(0, 40))} to be refused`);
@@ -63,7 +67,9 @@ describe('round trips', () => {
 		expect(read[0]!.fields.NOTE).toBe('line one\nline two');
 		expect(keyOf(sdf)).toBe(keyOf('OCCO')); // readStructure takes the first record
 		// And the SDF record written back out reads as the same molecule.
-		expect(canonicalForm(Molecule.fromMolfile(read[2]!.molecule.toMolfile())).key).toBe(keyOf(SMILES));
+		expect(canonicalForm(Molecule.fromMolfile(read[2]!.molecule.toMolfile())).key).toBe(
+			keyOf(SMILES)
+		);
 	});
 	it('reads hand-written V2000 and V3000 files (not made by openchemlib)', () => {
 		// Acetic acid C2H4O2 and ethanol C2H6O (formulas: common practice).
@@ -115,7 +121,8 @@ describe('bad input', () => {
 	});
 	it('bad valence in a molfile names the atom', () => {
 		// A carbon with five carbon neighbours, written by hand.
-		const atom = (x: number, y: number) => `${x.toFixed(4).padStart(10)}${y.toFixed(4).padStart(10)}    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0`;
+		const atom = (x: number, y: number) =>
+			`${x.toFixed(4).padStart(10)}${y.toFixed(4).padStart(10)}    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0`;
 		const bond = (a: number, b: number) => `${String(a).padStart(3)}${String(b).padStart(3)}  1  0`;
 		const molfile = [
 			'OG-9999 impossible carbon',

@@ -13,9 +13,16 @@ import { referenceMolecules } from '../reference/molecules';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
 import { routeOG2031 } from '../../scripts/bench/route-og2031';
 
-const structures = [...referenceMolecules.map((m) => m.smiles), ...routeOG2031.map((s) => s.smiles), ...aromaticityDisagreements.map((c) => c.smiles)];
+const structures = [
+	...referenceMolecules.map((m) => m.smiles),
+	...routeOG2031.map((s) => s.smiles),
+	...aromaticityDisagreements.map((c) => c.smiles)
+];
 const rules = perceptionRules();
-const patterns = [...rules.groups.map((g) => g.compiled), ...rules.protectingGroups.flatMap((pg) => pg.compiled)];
+const patterns = [
+	...rules.groups.map((g) => g.compiled),
+	...rules.protectingGroups.flatMap((pg) => pg.compiled)
+];
 
 describe('the loose pre-test', () => {
 	it('reads every pattern of the rule table', () => {
@@ -34,10 +41,13 @@ describe('the loose pre-test', () => {
 				searcher.setFragment(pattern.fragment);
 				const found = searcher.findFragmentInMolecule({ countMode: 'overlapping' });
 				const may = mayMatch(table, pattern.loose!);
-				if (found > 0) expect(may, `${pattern.smarts} on ${smiles}`).toBe(true);
-				else {
+				if (found > 0) {
+					expect(may, `${pattern.smarts} on ${smiles}`).toBe(true);
+				} else {
 					misses++;
-					if (!may) skipped++;
+					if (!may) {
+						skipped++;
+					}
 				}
 			}
 		}
@@ -54,7 +64,9 @@ describe('the loose pre-test', () => {
 describe('reading without warnings', () => {
 	it('perceives the same and fails the same', () => {
 		for (const smiles of structures) {
-			expect(perceive(readStructure(smiles, { warnings: false }).molecule), smiles).toEqual(perceive(readStructure(smiles).molecule));
+			expect(perceive(readStructure(smiles, { warnings: false }).molecule), smiles).toEqual(
+				perceive(readStructure(smiles).molecule)
+			);
 		}
 		for (const bad of ['CC(C)(C)(C)(C)C', 'c1cccc1', 'C1CC']) {
 			const error = (options: { warnings?: boolean }) => {

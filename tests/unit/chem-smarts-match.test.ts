@@ -61,7 +61,9 @@ function openchemlibMappings(molecule: Molecule, pattern: CompiledPattern): numb
 	const searcher = new SSSearcher();
 	searcher.setMolecule(molecule);
 	searcher.setFragment(pattern.fragment);
-	if (searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) return [];
+	if (searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) {
+		return [];
+	}
 	return searcher
 		.getMatchList()
 		.map((mapping) => mapping.filter((atom) => atom >= 0))
@@ -95,9 +97,11 @@ describe('the TypeScript SMARTS matcher', () => {
 					if (!table.plain) {
 						// Odd atoms (next test): where the walk does answer, it answers as openchemlib does.
 						const found = distinctMatches(table, pattern.exact!);
-						if (found)
+						if (found) {
 							expect(found, `${pattern.smarts} on ${smiles}`).toEqual(firstPerAtomSet(expected));
-						else handedOver++;
+						} else {
+							handedOver++;
+						}
 						continue;
 					}
 					expect(allMappings(table, pattern.exact!), `${pattern.smarts} on ${smiles}`).toEqual(
@@ -108,7 +112,9 @@ describe('the TypeScript SMARTS matcher', () => {
 						firstPerAtomSet(expected)
 					);
 					compared++;
-					if (expected.length > 0) matched++;
+					if (expected.length > 0) {
+						matched++;
+					}
 				}
 			}
 		}
@@ -145,8 +151,9 @@ describe('the TypeScript SMARTS matcher', () => {
 		expect(Array.from(atomTable(readStructure('[2H]OC(C)C').molecule).odd)).toEqual([
 			1, 1, 0, 0, 0
 		]);
-		for (const smiles of ['C[CH2]', 'O=[N+]([O-])c1ccccc1'])
+		for (const smiles of ['C[CH2]', 'O=[N+]([O-])c1ccccc1']) {
 			expect(atomTable(readStructure(smiles).molecule).plain, smiles).toBe(false);
+		}
 	});
 
 	it('reads SMARTS as openchemlib does where Daylight differs, and agrees on the corners', () => {
@@ -193,8 +200,9 @@ describe('the TypeScript SMARTS matcher', () => {
 			'[C;r8]',
 			'[C;!r5]',
 			'[C;r5,r6]'
-		])
+		]) {
 			expect(exactQuery(smarts), smarts).toBeNull();
+		}
 		const ringCarbinol = compilePattern('[C;R][OH]', 'test', []);
 		expect(ringCarbinol.exact).toBeNull();
 		const target = searchTarget(readStructure('OC1CCCCC1CO').molecule);

@@ -107,8 +107,9 @@ describe('editing a SMILES in place draws what the Reactor drew', () => {
 			const spliced = splice(smiles, masks);
 			expect(idCode(spliced), spliced).toBe(idCode(drawnByReactor(smiles, masks)));
 			// The untouched text keeps the chemist's stereo marks as written.
-			for (const mark of smiles.match(/\[[^\]]*@[^\]]*\]|[/\\]/g) ?? [])
+			for (const mark of smiles.match(/\[[^\]]*@[^\]]*\]|[/\\]/g) ?? []) {
 				expect(spliced).toContain(mark);
+			}
 		});
 	}
 });

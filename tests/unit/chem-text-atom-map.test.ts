@@ -28,8 +28,12 @@ describe('atom maps from the text two SMILES share', () => {
 				(atom) => mcs.has(atom) && unitAtoms(product).includes(mcs.get(atom)!)
 			);
 			const text = byText(substrate, product, surviving);
-			if (text === null) return; // left to the MCS: nothing to compare
-			for (const atom of surviving) expect(text.get(atom), `atom ${atom}`).toBe(mcs.get(atom));
+			if (text === null) {
+				return;
+			} // left to the MCS: nothing to compare
+			for (const atom of surviving) {
+				expect(text.get(atom), `atom ${atom}`).toBe(mcs.get(atom));
+			}
 		});
 	}
 

@@ -10,9 +10,11 @@ const read = (smiles: string) => Molecule.fromSmiles(smiles, { noCoordinates: tr
 
 describe('reaction SMARTS transforms on chosen atoms', () => {
 	it('compiles every install transform in the rule table', () => {
-		for (const row of rows)
-			for (const t of row.install.transforms)
+		for (const row of rows) {
+			for (const t of row.install.transforms) {
 				expect(() => compileTransform(t.smarts), `${row.id}: ${t.smarts}`).not.toThrow();
+			}
+		}
 	});
 
 	it('refuses a transform with no mapped atom, two reactants, or SMARTS it would ignore', () => {

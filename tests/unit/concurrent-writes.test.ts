@@ -41,8 +41,9 @@ describe('parallel writes on a SQLite file', () => {
 
 	it('saves 20 different routes in parallel, every one succeeding', async () => {
 		const routes = [];
-		for (let i = 0; i < 20; i++)
+		for (let i = 0; i < 20; i++) {
 			routes.push(await createRoute(f.people.chemist, project, doc(`Route ${i}`)));
+		}
 		const saved = await Promise.allSettled(
 			routes.map((route, i) =>
 				saveRoute(f.people.chemist, route, 1, doc(`Route ${i}, revised`), f.team.id)
@@ -65,7 +66,9 @@ describe('parallel writes on a SQLite file', () => {
 		const lost = results.flatMap((r) => (r.status === 'rejected' ? [r.reason] : []));
 		expect(won).toHaveLength(1);
 		expect(lost).toHaveLength(9);
-		for (const reason of lost) expect(reason).toBeInstanceOf(VersionConflict);
+		for (const reason of lost) {
+			expect(reason).toBeInstanceOf(VersionConflict);
+		}
 		expect((await Route.findByPk(route.id))?.version).toBe(2);
 	});
 });

@@ -18,22 +18,57 @@ describe('npm run user:create', () => {
 		const databaseUrl = `sqlite:${path.join(dir, 'cli.db')}`;
 		const output = execFileSync(
 			'npx',
-			['tsx', 'scripts/create-user.ts', '--email', 'First.Lead@lab.example', '--name', 'Ada Quill', '--team', 'Quill Group', '--password', 'a-strong-password'],
-			{ env: { ...process.env, DATABASE_URL: databaseUrl, ORTHOGON_DATA_DIR: dir }, encoding: 'utf8' }
+			[
+				'tsx',
+				'scripts/create-user.ts',
+				'--email',
+				'First.Lead@lab.example',
+				'--name',
+				'Ada Quill',
+				'--team',
+				'Quill Group',
+				'--password',
+				'a-strong-password'
+			],
+			{
+				env: { ...process.env, DATABASE_URL: databaseUrl, ORTHOGON_DATA_DIR: dir },
+				encoding: 'utf8'
+			}
 		);
 		expect(output).toContain('Created team “Quill Group” with first.lead@lab.example as lead.');
 		openDatabase(databaseUrl);
 		const user = await verifyCredentials('first.lead@lab.example', 'a-strong-password');
 		expect(user?.name).toBe('Ada Quill');
-		expect(await teamsOf(user!.id)).toEqual([{ id: expect.any(String), name: 'Quill Group', role: 'lead' }]);
+		expect(await teamsOf(user!.id)).toEqual([
+			{ id: expect.any(String), name: 'Quill Group', role: 'lead' }
+		]);
 	}, 30_000);
 
 	it('refuses a short password', () => {
 		expect(() =>
-			execFileSync('npx', ['tsx', 'scripts/create-user.ts', '--email', 'x@lab.example', '--name', 'X', '--team', 'T', '--password', 'short'], {
-				env: { ...process.env, DATABASE_URL: `sqlite:${path.join(dir, 'short.db')}`, ORTHOGON_DATA_DIR: dir },
-				stdio: 'pipe'
-			})
+			execFileSync(
+				'npx',
+				[
+					'tsx',
+					'scripts/create-user.ts',
+					'--email',
+					'x@lab.example',
+					'--name',
+					'X',
+					'--team',
+					'T',
+					'--password',
+					'short'
+				],
+				{
+					env: {
+						...process.env,
+						DATABASE_URL: `sqlite:${path.join(dir, 'short.db')}`,
+						ORTHOGON_DATA_DIR: dir
+					},
+					stdio: 'pipe'
+				}
+			)
 		).toThrow();
 	}, 30_000);
 });

@@ -29,10 +29,15 @@ describe('DATABASE_URL', () => {
 describe('SQLite file databases', () => {
 	it('run in WAL mode with a busy timeout on every connection', async () => {
 		const sequelize = createSequelize(`sqlite:${path.join(dir, 'wal.db')}`);
-		const [mode] = await sequelize.query<{ journal_mode: string }>('PRAGMA journal_mode', { type: QueryTypes.SELECT });
+		const [mode] = await sequelize.query<{ journal_mode: string }>('PRAGMA journal_mode', {
+			type: QueryTypes.SELECT
+		});
 		expect(mode!.journal_mode).toBe('wal');
 		const timeouts = await sequelize.transaction(async (transaction) =>
-			sequelize.query<{ timeout: number }>('PRAGMA busy_timeout', { type: QueryTypes.SELECT, transaction })
+			sequelize.query<{ timeout: number }>('PRAGMA busy_timeout', {
+				type: QueryTypes.SELECT,
+				transaction
+			})
 		);
 		expect(timeouts[0]!.timeout).toBe(5000);
 		await sequelize.close();
@@ -45,8 +50,24 @@ describe('migrations', () => {
 		expect(await migrate(sequelize)).toEqual(migrations.map((m) => m.name));
 		expect(await migrate(sequelize)).toEqual([]);
 		const tables = async () =>
-			(await sequelize.getQueryInterface().showAllTables()).filter((t) => t !== 'schema_migrations').sort();
-		expect(await tables()).toEqual(['activity_events', 'api_tokens', 'intermediates', 'memberships', 'planned_routes', 'projects', 'routes', 'sessions', 'set_password_links', 'sign_in_limits', 'steps', 'teams', 'users']);
+			(await sequelize.getQueryInterface().showAllTables())
+				.filter((t) => t !== 'schema_migrations')
+				.sort();
+		expect(await tables()).toEqual([
+			'activity_events',
+			'api_tokens',
+			'intermediates',
+			'memberships',
+			'planned_routes',
+			'projects',
+			'routes',
+			'sessions',
+			'set_password_links',
+			'sign_in_limits',
+			'steps',
+			'teams',
+			'users'
+		]);
 		await migrateDownAll(sequelize);
 		expect(await tables()).toEqual([]);
 		expect(await migrate(sequelize)).toHaveLength(migrations.length);
@@ -58,15 +79,63 @@ describe('migrations', () => {
 		await migrate(sequelize);
 		const qi = sequelize.getQueryInterface();
 		const at = new Date();
-		const ids = { team: crypto.randomUUID(), project: crypto.randomUUID(), route: crypto.randomUUID() };
-		await qi.bulkInsert('teams', [{ id: ids.team, name: 'Cormorant team', createdAt: at, updatedAt: at }]);
-		await qi.bulkInsert('projects', [{ id: ids.project, teamId: ids.team, name: 'Cormorant', description: '', createdAt: at, updatedAt: at }]);
-		await qi.bulkInsert('routes', [{ id: ids.route, projectId: ids.project, name: 'OG-2031', status: 'draft', version: 1, createdAt: at, updatedAt: at }]);
-		await qi.bulkInsert('intermediates', [{ id: crypto.randomUUID(), routeId: ids.route, key: 'a', structure: 'CC(=O)CCC(=O)OC', ordinal: 0, createdAt: at, updatedAt: at }]);
-		await qi.bulkInsert('planned_routes', [{ id: crypto.randomUUID(), routeId: ids.route, plannedFromId: null, rank: 1, createdAt: at, updatedAt: at }]);
+		const ids = {
+			team: crypto.randomUUID(),
+			project: crypto.randomUUID(),
+			route: crypto.randomUUID()
+		};
+		await qi.bulkInsert('teams', [
+			{ id: ids.team, name: 'Cormorant team', createdAt: at, updatedAt: at }
+		]);
+		await qi.bulkInsert('projects', [
+			{
+				id: ids.project,
+				teamId: ids.team,
+				name: 'Cormorant',
+				description: '',
+				createdAt: at,
+				updatedAt: at
+			}
+		]);
+		await qi.bulkInsert('routes', [
+			{
+				id: ids.route,
+				projectId: ids.project,
+				name: 'OG-2031',
+				status: 'draft',
+				version: 1,
+				createdAt: at,
+				updatedAt: at
+			}
+		]);
+		await qi.bulkInsert('intermediates', [
+			{
+				id: crypto.randomUUID(),
+				routeId: ids.route,
+				key: 'a',
+				structure: 'CC(=O)CCC(=O)OC',
+				ordinal: 0,
+				createdAt: at,
+				updatedAt: at
+			}
+		]);
+		await qi.bulkInsert('planned_routes', [
+			{
+				id: crypto.randomUUID(),
+				routeId: ids.route,
+				plannedFromId: null,
+				rank: 1,
+				createdAt: at,
+				updatedAt: at
+			}
+		]);
 		await migrations.find((m) => m.name === '0003-planned-routes')!.down(qi);
 		const count = async (table: string) =>
-			(await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM ${table}`, { type: QueryTypes.SELECT }))[0]!.n;
+			(
+				await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM ${table}`, {
+					type: QueryTypes.SELECT
+				})
+			)[0]!.n;
 		expect(await count('routes')).toBe(1);
 		expect(await count('intermediates')).toBe(1);
 		expect((await qi.showAllTables()).includes('planned_routes')).toBe(false);

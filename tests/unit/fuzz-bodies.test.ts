@@ -77,8 +77,9 @@ const nulForm = () => {
 		'current',
 		'next',
 		'confirm'
-	])
+	]) {
 		form.set(field, `x\u0000${field}`);
+	}
 	return form;
 };
 const FORM_BODIES: Body[] = [
@@ -116,7 +117,6 @@ beforeAll(async () => {
 	);
 }, 120_000);
 
-
 /** Every stored row, in every table, that holds a NUL or another C0 control but tab/CR/LF. */
 async function rowsHoldingControlCharacters(): Promise<string[]> {
 	const sequelize = Project.sequelize!;
@@ -149,19 +149,26 @@ async function verdict(run: () => Promise<unknown>): Promise<Verdict> {
 		const result = await Promise.race([run(), hang]);
 		if (result instanceof Response) {
 			const text = await result.text();
-			if (result.status < 400) return { status: result.status, message: '' };
+			if (result.status < 400) {
+				return { status: result.status, message: '' };
+			}
 			const type = result.headers.get('content-type') ?? '';
 			const message = type.includes('json')
 				? ((JSON.parse(text) as { error?: { message?: string } }).error?.message ?? '')
 				: text;
 			return { status: result.status, message };
 		}
-		if (isActionFailure(result))
+		if (isActionFailure(result)) {
 			return { status: result.status, message: JSON.stringify(result.data) };
+		}
 		return { status: 200, message: '' };
 	} catch (caught) {
-		if (isRedirect(caught)) return { status: caught.status, message: '' };
-		if (isHttpError(caught)) return { status: caught.status, message: caught.body.message };
+		if (isRedirect(caught)) {
+			return { status: caught.status, message: '' };
+		}
+		if (isHttpError(caught)) {
+			return { status: caught.status, message: caught.body.message };
+		}
 		return {
 			status: 500,
 			message: `thrown: ${caught instanceof Error ? caught.message : String(caught)}`
@@ -210,10 +217,11 @@ async function send(endpoint: Endpoint, body: Body): Promise<Verdict> {
 		cookies: noCookies,
 		setHeaders: () => undefined
 	} as unknown as RequestEvent;
-	if (endpoint.kind === 'method')
+	if (endpoint.kind === 'method') {
 		return verdict(async () =>
 			(module[endpoint.name] as (e: RequestEvent) => Promise<Response>)(event)
 		);
+	}
 	const action = (module.actions as Record<string, (e: RequestEvent) => Promise<unknown>>)[
 		endpoint.name
 	]!;
@@ -239,8 +247,11 @@ describe('malformed bodies at every endpoint that reads one', () => {
 			for (const body of endpoint.kind === 'method' ? JSON_BODIES : FORM_BODIES) {
 				const { status, message } = await send(endpoint, body);
 				const where = `${endpoint.key} ← ${body.name}: ${status}`;
-				if (status >= 500) problems.push(`${where} ${message}`);
-				else if (status >= 400 && !message.trim()) problems.push(`${where} without a message`);
+				if (status >= 500) {
+					problems.push(`${where} ${message}`);
+				} else if (status >= 400 && !message.trim()) {
+					problems.push(`${where} without a message`);
+				}
 			}
 		}
 		expect(problems).toEqual([]);

@@ -64,7 +64,9 @@ const endpoints: Record<string, (text: string) => Promise<Answer>> = {
 			{ version, document: routeWith(text) },
 			{ routeId }
 		);
-		if (answer.status === 200) version = (answer.body as { version: number }).version;
+		if (answer.status === 200) {
+			version = (answer.body as { version: number }).version;
+		}
 		return answer;
 	},
 	'SDF import': (text) => upload(text)

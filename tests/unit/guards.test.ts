@@ -1,7 +1,11 @@
 import { isHttpError, isRedirect } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ACTIONS, can, ROLES } from '../../src/lib/policy';
-import { requireProjectAction, requireTeamAction, requireUser } from '../../src/lib/server/auth/guards';
+import {
+	requireProjectAction,
+	requireTeamAction,
+	requireUser
+} from '../../src/lib/server/auth/guards';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 type Fixture = Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
@@ -12,8 +16,12 @@ async function outcome(run: () => Promise<unknown> | unknown): Promise<string> {
 		await run();
 		return 'allowed';
 	} catch (caught) {
-		if (isRedirect(caught)) return `redirect ${caught.location}`;
-		if (isHttpError(caught)) return String(caught.status);
+		if (isRedirect(caught)) {
+			return `redirect ${caught.location}`;
+		}
+		if (isHttpError(caught)) {
+			return String(caught.status);
+		}
 		throw caught;
 	}
 }
@@ -59,24 +67,50 @@ describe('requireTeamAction: every role × every action', () => {
 		const { Membership } = await import('../../src/lib/server/db');
 		const event = fakeEvent({ user: f.people.viewer });
 		expect(await outcome(() => requireTeamAction(event, f.team.id, 'project.create'))).toBe('403');
-		await Membership.update({ role: 'chemist' }, { where: { userId: f.people.viewer.id, teamId: f.team.id } });
-		expect(await outcome(() => requireTeamAction(event, f.team.id, 'project.create'))).toBe('allowed');
-		await Membership.update({ role: 'viewer' }, { where: { userId: f.people.viewer.id, teamId: f.team.id } });
+		await Membership.update(
+			{ role: 'chemist' },
+			{ where: { userId: f.people.viewer.id, teamId: f.team.id } }
+		);
+		expect(await outcome(() => requireTeamAction(event, f.team.id, 'project.create'))).toBe(
+			'allowed'
+		);
+		await Membership.update(
+			{ role: 'viewer' },
+			{ where: { userId: f.people.viewer.id, teamId: f.team.id } }
+		);
 	});
 });
 
 describe('requireProjectAction', () => {
 	it('finds the project for members and hides it from other teams', async () => {
 		const project = await makeProject(f.team.id, 'Guarded project');
-		const mine = await requireProjectAction(fakeEvent({ user: f.people.reviewer }), project.id, 'project.read');
+		const mine = await requireProjectAction(
+			fakeEvent({ user: f.people.reviewer }),
+			project.id,
+			'project.read'
+		);
 		expect(mine.project.id).toBe(project.id);
 		expect(mine.role).toBe('reviewer');
-		expect(await outcome(() => requireProjectAction(fakeEvent({ user: f.people.outsider }), project.id, 'project.read'))).toBe('404');
-		expect(await outcome(() => requireProjectAction(fakeEvent({ user: f.people.viewer }), project.id, 'project.edit'))).toBe('403');
+		expect(
+			await outcome(() =>
+				requireProjectAction(fakeEvent({ user: f.people.outsider }), project.id, 'project.read')
+			)
+		).toBe('404');
+		expect(
+			await outcome(() =>
+				requireProjectAction(fakeEvent({ user: f.people.viewer }), project.id, 'project.edit')
+			)
+		).toBe('403');
 	});
 	it('answers 404 for ids that do not exist or are not ids at all', async () => {
 		const event = fakeEvent({ user: f.people.lead });
-		expect(await outcome(() => requireProjectAction(event, '00000000-0000-4000-8000-000000000000', 'project.read'))).toBe('404');
-		expect(await outcome(() => requireProjectAction(event, 'not-an-id', 'project.read'))).toBe('404');
+		expect(
+			await outcome(() =>
+				requireProjectAction(event, '00000000-0000-4000-8000-000000000000', 'project.read')
+			)
+		).toBe('404');
+		expect(await outcome(() => requireProjectAction(event, 'not-an-id', 'project.read'))).toBe(
+			'404'
+		);
 	});
 });

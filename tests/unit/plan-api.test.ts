@@ -13,8 +13,17 @@ beforeAll(async () => {
 });
 
 type Who = keyof typeof f.people;
-async function call(handler: unknown, who: Who | null, options: { params?: Record<string, string>; body?: unknown } = {}) {
-	const event = fakeEvent({ user: who ? f.people[who] : null, path: '/api/plan', method: 'POST', body: options.body }) as RequestEvent & {
+async function call(
+	handler: unknown,
+	who: Who | null,
+	options: { params?: Record<string, string>; body?: unknown } = {}
+) {
+	const event = fakeEvent({
+		user: who ? f.people[who] : null,
+		path: '/api/plan',
+		method: 'POST',
+		body: options.body
+	}) as RequestEvent & {
 		params: Record<string, string>;
 	};
 	event.params = options.params ?? {};
@@ -32,33 +41,70 @@ describe('POST /api/plan', () => {
 		expect(body.unsolved).toBeUndefined();
 		const [plan] = body.plans;
 		// The fields, plus what the plan asks of the people who run it.
-		expect(Object.keys(plan).sort()).toEqual(['addedSteps', 'cautions', 'hazards', 'protections', 'rank', 'rationale', 'route', 'score', 'unrecognized']);
+		expect(Object.keys(plan).sort()).toEqual([
+			'addedSteps',
+			'cautions',
+			'hazards',
+			'protections',
+			'rank',
+			'rationale',
+			'route',
+			'score',
+			'unrecognized'
+		]);
 		// Every reagent of the route and of the steps the plan adds is known.
 		expect(plan.unrecognized).toEqual([]);
-		expect(Object.keys(plan.protections[0]).sort()).toEqual(['atoms', 'group', 'install', 'intermediate', 'protectingGroup', 'removal']);
-		expect(plan.protections[0]).toMatchObject({ group: 'ketone', install: { before: 's1' }, removal: { after: 'end' } });
-		expect(plan.route.steps.map((s: { intent?: string }) => s.intent ?? 'transform')).toEqual(['protect', 'transform', 'deprotect']);
+		expect(Object.keys(plan.protections[0]).sort()).toEqual([
+			'atoms',
+			'group',
+			'install',
+			'intermediate',
+			'protectingGroup',
+			'removal'
+		]);
+		expect(plan.protections[0]).toMatchObject({
+			group: 'ketone',
+			install: { before: 's1' },
+			removal: { after: 'end' }
+		});
+		expect(plan.route.steps.map((s: { intent?: string }) => s.intent ?? 'transform')).toEqual([
+			'protect',
+			'transform',
+			'deprotect'
+		]);
 	});
 
 	it('lists the hazards of the reagents a plan adds, each deferring to the SDS — rules/reagents.json hazard notes', async () => {
 		const { body } = await call(planPost, 'viewer', { body: grignard });
-		const added = new Set(body.plans[0].route.steps.filter((s: { intent?: string }) => s.intent).map((s: { id: string }) => s.id));
+		const added = new Set(
+			body.plans[0].route.steps
+				.filter((s: { intent?: string }) => s.intent)
+				.map((s: { id: string }) => s.id)
+		);
 		expect(body.plans[0].hazards.length).toBeGreaterThan(0);
 		for (const hazard of body.plans[0].hazards) {
 			expect(added.has(hazard.step)).toBe(true);
 			expect(hazard.note).toMatch(/SDS/);
 		}
 		// The Grignard step is the chemist's own: its hazards are not the plan's to list.
-		expect(body.plans[0].hazards.map((h: { reagent: string }) => h.reagent)).not.toContain('MeMgBr');
+		expect(body.plans[0].hazards.map((h: { reagent: string }) => h.reagent)).not.toContain(
+			'MeMgBr'
+		);
 	});
 
 	it('names the reagent text its re-check did not recognise, on the step the plan passes through', async () => {
 		// A house additive code beside the Grignard: the plan cannot say what it does, and says so.
-		const withAdditive = line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, OG-Cat 17, THF'], 'OG-2031 additive');
+		const withAdditive = line(
+			['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'],
+			['MeMgBr, OG-Cat 17, THF'],
+			'OG-2031 additive'
+		);
 		const { status, body } = await call(planPost, 'viewer', { body: withAdditive });
 		expect(status).toBe(200);
 		expect(body.plans.length).toBeGreaterThan(0);
-		for (const plan of body.plans) expect(plan.unrecognized).toEqual([{ step: 's1', text: ['OG-Cat 17'] }]);
+		for (const plan of body.plans) {
+			expect(plan.unrecognized).toEqual([{ step: 's1', text: ['OG-Cat 17'] }]);
+		}
 	});
 
 	it('answers 422 for a bad route document and 401 without a user', async () => {
@@ -74,7 +120,10 @@ describe('POST /api/plan', () => {
 describe('POST /api/routes/{id}/plan', () => {
 	it('plans a stored route for anyone who may read it; 404 for outsiders, 401 without a user', async () => {
 		const project = await makeProject(f.team.id);
-		const created = await call(createRoute, 'chemist', { params: { projectId: project.id }, body: grignard });
+		const created = await call(createRoute, 'chemist', {
+			params: { projectId: project.id },
+			body: grignard
+		});
 		expect(created.status).toBe(201);
 		const params = { routeId: created.body.id };
 		const { status, body } = await call(routePlan, 'viewer', { params });
@@ -82,6 +131,12 @@ describe('POST /api/routes/{id}/plan', () => {
 		expect(body.plans[0].protections[0].group).toBe('ketone');
 		expect((await call(routePlan, 'outsider', { params })).status).toBe(404);
 		expect((await call(routePlan, null, { params })).status).toBe(401);
-		expect((await call(routePlan, 'lead', { params: { routeId: '00000000-0000-0000-0000-000000000000' } })).status).toBe(404);
+		expect(
+			(
+				await call(routePlan, 'lead', {
+					params: { routeId: '00000000-0000-0000-0000-000000000000' }
+				})
+			).status
+		).toBe(404);
 	});
 });

@@ -183,48 +183,64 @@ function judge(c: PlanCase, answer: PlanAnswer): string[] {
 	const { expect: want } = c;
 	const failures: string[] = [];
 	if (want.unsolved) {
-		if (answer.plans.length || !answer.unsolved?.length)
+		if (answer.plans.length || !answer.unsolved?.length) {
 			failures.push('expected unsolved, a plan came back');
+		}
 		return failures;
 	}
-	if (answer.unsolved?.length || !answer.plans.length)
+	if (answer.unsolved?.length || !answer.plans.length) {
 		return ['expected a plan, the answer is unsolved'];
+	}
 	const first = answer.plans[0]!;
 	const pgsOf = (group: string) =>
 		first.protections.filter((p) => p.group === group).map((p) => p.protectingGroup);
-	if (want.nothingToMask && first.protections.length)
+	if (want.nothingToMask && first.protections.length) {
 		failures.push('expected nothing to mask, plan 1 masks something');
-	for (const group of want.masks ?? [])
-		if (!pgsOf(group).length) failures.push(`plan 1 does not mask the ${group}`);
+	}
+	for (const group of want.masks ?? []) {
+		if (!pgsOf(group).length) {
+			failures.push(`plan 1 does not mask the ${group}`);
+		}
+	}
 	for (const [group, allowed] of Object.entries(want.firstChoice ?? {})) {
 		const any = ([] as string[]).concat(allowed);
 		const used = pgsOf(group);
-		if (!used.length)
+		if (!used.length) {
 			failures.push(`plan 1 does not mask the ${group}; expected ${any.join(' or ')}`);
-		for (const pg of used.filter((pg) => !any.includes(pg)))
+		}
+		for (const pg of used.filter((pg) => !any.includes(pg))) {
 			failures.push(`plan 1 puts ${pg} on the ${group}; expected ${any.join(' or ')}`);
+		}
 	}
 	const firstPgs = first.protections.map((p) => p.protectingGroup);
-	for (const pg of want.neverFirst ?? [])
-		if (firstPgs.includes(pg)) failures.push(`plan 1 uses ${pg}`);
+	for (const pg of want.neverFirst ?? []) {
+		if (firstPgs.includes(pg)) {
+			failures.push(`plan 1 uses ${pg}`);
+		}
+	}
 	for (const pg of want.never ?? []) {
 		const ranks = answer.plans
 			.filter((p) => p.protections.some((x) => x.protectingGroup === pg))
 			.map((p) => p.rank);
-		if (ranks.length) failures.push(`${pg} is offered (plan ${ranks.join(', ')})`);
+		if (ranks.length) {
+			failures.push(`${pg} is offered (plan ${ranks.join(', ')})`);
+		}
 	}
-	if (want.rationaleMatches && !new RegExp(want.rationaleMatches).test(first.rationale.join(' ')))
+	if (want.rationaleMatches && !new RegExp(want.rationaleMatches).test(first.rationale.join(' '))) {
 		failures.push(`plan 1's rationale does not match /${want.rationaleMatches}/`);
+	}
 	for (const [pg, recipe] of Object.entries(want.installs ?? {})) {
 		for (const plan of answer.plans) {
 			for (const p of plan.protections.filter((x) => x.protectingGroup === pg)) {
 				const reagents = p.install.reagents;
-				if (recipe.matches && !new RegExp(recipe.matches).test(reagents))
+				if (recipe.matches && !new RegExp(recipe.matches).test(reagents)) {
 					failures.push(
 						`plan ${plan.rank} puts ${pg} on with "${reagents}", not /${recipe.matches}/`
 					);
-				if (recipe.not && new RegExp(recipe.not).test(reagents))
+				}
+				if (recipe.not && new RegExp(recipe.not).test(reagents)) {
 					failures.push(`plan ${plan.rank} puts ${pg} on with "${reagents}"`);
+				}
 			}
 		}
 	}

@@ -55,7 +55,9 @@ describe('caution-level needs', () => {
 		]);
 		const masked = answer.plans.slice(1);
 		expect(masked.length).toBeGreaterThan(0);
-		for (const plan of masked) expect(masks(plan)).toEqual(['alcohol-secondary']);
+		for (const plan of masked) {
+			expect(masks(plan)).toEqual(['alcohol-secondary']);
+		}
 		expect(said(answer)).not.toContain('nothing needs masking');
 	});
 

@@ -17,14 +17,23 @@ describe('drawing protected intermediates', () => {
 				expect(MODELS[group], `a model substrate for ${group}`).toBeDefined();
 				const transform = row.install.transforms.find((t) => t.groups.includes(group))!.smarts;
 				const unit = freeUnits(MODELS[group]!).find((u) => u.id === group)!;
-				const drawn = protectedStructure(MODELS[group]!, [{ pg: row.id, transform, atoms: unit.atoms }]);
+				const drawn = protectedStructure(MODELS[group]!, [
+					{ pg: row.id, transform, atoms: unit.atoms }
+				]);
 				const found = perceiveText(drawn).protectingGroups.filter((pg) => pg.id === row.id);
-				expect(found.map((pg) => pg.masks), `${row.id} on ${group}: ${drawn}`).toContain(group);
+				expect(
+					found.map((pg) => pg.masks),
+					`${row.id} on ${group}: ${drawn}`
+				).toContain(group);
 			}
 		});
 	}
 
-	it('draws a dioxolane in place of a ketone oxygen, editing the chemist\'s SMILES in place — Greene\'s (from memory)', () => {
-		expect(protectedStructure('CC(=O)CCC', [{ pg: 'dioxolane', transform: '[C:1]=O>>[C:1]1OCCO1', atoms: [0, 1, 2, 3] }])).toBe('CC1(OCCO1)CCC');
+	it("draws a dioxolane in place of a ketone oxygen, editing the chemist's SMILES in place — Greene's (from memory)", () => {
+		expect(
+			protectedStructure('CC(=O)CCC', [
+				{ pg: 'dioxolane', transform: '[C:1]=O>>[C:1]1OCCO1', atoms: [0, 1, 2, 3] }
+			])
+		).toBe('CC1(OCCO1)CCC');
 	});
 });

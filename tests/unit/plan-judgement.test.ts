@@ -19,9 +19,13 @@ const table = loadRuleTable();
 const rules = checkRulesFrom(table);
 const verify = (route: RouteDocument) => {
 	for (const step of checkRouteDocument(route, rules)) {
-		if (step.error) return step.error.message;
+		if (step.error) {
+			return step.error.message;
+		}
 		const clash = step.clashes.find((c) => c.severity === 'clash');
-		if (clash) return clash.message;
+		if (clash) {
+			return clash.message;
+		}
 	}
 	return null;
 };
@@ -35,7 +39,9 @@ describe('the first plan is the one a chemist would sign', () => {
 		expect(order[0]).toBe('TBS');
 		expect(answer.plans[0]!.protections[0]!.install.reagents).toBe('TBSCl, imidazole, DMF');
 		// Imidazole does not count against the ketone, so no caution sets TBS behind THP.
-		for (const worse of ['TES', 'THP', 'TMS']) expect(order.indexOf(worse)).not.toBe(0);
+		for (const worse of ['TES', 'THP', 'TMS']) {
+			expect(order.indexOf(worse)).not.toBe(0);
+		}
 		expect(answer.plans[0]!.rationale[0]).toMatch(
 			/^Plan 1 comes first: TBS is preferred to \S+ for a primary alcohol: TBS is the general-purpose alcohol protection/
 		);
@@ -50,8 +56,9 @@ describe('the first plan is the one a chemist would sign', () => {
 		}
 		const all = plan(doc).plans;
 		const thp = all.find((p) => pgs(p) === 'THP');
-		if (thp)
+		if (thp) {
 			expect(thp.rationale.join(' ')).toContain('THP puts a new stereocentre at its acetal carbon');
+		}
 	});
 
 	it("masks a ketone as the dioxolane before the dimethyl acetal and the dithiane through LiAlH4 — Greene's, 1,3-dioxolanes; acyclic acetals are the most acid-labile", () => {
@@ -84,14 +91,18 @@ describe('the first plan is the one a chemist would sign', () => {
 		const bn = answer.plans.find((p) => pgs(p) === 'Bn');
 		// Acid (the imidate) or silver oxide: either puts Bn on without an alkoxide.
 		expect(bn?.protections[0]!.install.reagents).toMatch(/^(BnOC\(=NH\)CCl3, TfOH|Ag2O, BnBr)/);
-		for (const p of answer.plans) expect(p.protections[0]!.install.reagents).not.toMatch(/NaH/);
+		for (const p of answer.plans) {
+			expect(p.protections[0]!.install.reagents).not.toMatch(/NaH/);
+		}
 	});
 
 	it('makes the methyl ester of a free amino acid with SOCl2/MeOH, never MeI/K2CO3 — Brenner & Huber, Helv. Chim. Acta 1953, 36, 1109; Clayden, amines are alkylated by MeI', () => {
 		const answer = plan(line(['NCCC(=O)O', 'c1ccccc1CNCCC(=O)O'], ['BnBr, K2CO3, DMF']));
 		const methyl = answer.plans.find((p) => pgs(p) === 'methyl-ester')!;
 		expect(methyl.protections[0]!.install.reagents).toBe('SOCl2, MeOH');
-		for (const p of answer.plans) expect(p.protections[0]!.install.reagents).not.toMatch(/MeI/);
+		for (const p of answer.plans) {
+			expect(p.protections[0]!.install.reagents).not.toMatch(/MeI/);
+		}
 		// The bundled table has no amine-safe recipe yet: there it must not fall back to MeI either.
 		for (const p of planRouteDocument(
 			line(['NCCC(=O)O', 'c1ccccc1CNCCC(=O)O'], ['BnBr, K2CO3, DMF'])
@@ -106,7 +117,9 @@ describe('the first plan is the one a chemist would sign', () => {
 		// TBSCl (at 0 °C), TBDPSCl and TrCl take the primary OH first (rules/protecting-groups.json `prefers`).
 		expect(['TBS', 'TBDPS', 'Tr']).toContain(pgs(answer.plans[0]!));
 		expect(answer.plans.map(pgs)).toEqual(expect.arrayContaining(['TBDPS', 'Tr']));
-		for (const p of answer.plans) expect(['THP', 'MOM', 'TMS', 'TES']).not.toContain(pgs(p));
+		for (const p of answer.plans) {
+			expect(['THP', 'MOM', 'TMS', 'TES']).not.toContain(pgs(p));
+		}
 		const said = answer.plans.flatMap((p) => p.rationale).join(' ');
 		expect(said).toMatch(
 			/TES rejected: installing it \(TESCl, imidazole, DMF\) would also put TES on the free secondary alcohol/

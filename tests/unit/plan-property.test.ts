@@ -25,7 +25,9 @@ const STEPS = [
 function* routes() {
 	for (const [b, bystander] of BYSTANDERS.entries()) {
 		for (const [s, step] of STEPS.entries()) {
-			if ((b + s) % 2) continue; // a spread of pairs, not every pair: keeps the run short
+			if ((b + s) % 2) {
+				continue;
+			} // a spread of pairs, not every pair: keeps the run short
 			yield line(
 				[bystander + step.from, bystander + step.to],
 				[step.reagents],
@@ -36,7 +38,9 @@ function* routes() {
 	// Convergent: an acid half with a bystander coupled to an amine half (HATU acylates amines,
 	// thiols and alcohols that stand by, so the bystander may need a mask on its own branch).
 	for (const [b, bystander] of BYSTANDERS.entries()) {
-		if (b % 2) continue;
+		if (b % 2) {
+			continue;
+		}
 		yield {
 			name: `OG-2031 generated coupling ${b}`,
 			intermediates: [
@@ -64,10 +68,11 @@ describe('every returned plan re-checks clean', () => {
 			const threatened = checkRouteDocument(route).some((step) =>
 				step.clashes.some((c) => c.kind === 'attacks-free-group')
 			);
-			if (threatened)
+			if (threatened) {
 				expect(answer.plans.flatMap((p) => p.rationale).join(' '), route.name).not.toContain(
 					'nothing needs masking'
 				);
+			}
 			for (const plan of answer.plans) {
 				plans++;
 				const clashes = checkRouteDocument(plan.route).flatMap((step) => [
@@ -118,8 +123,12 @@ describe('plan 1 carries no drawback an equally long plan avoids', () => {
 	const rules = checkRulesFrom(table);
 	const verify = (route: RouteDocument) => {
 		for (const step of checkRouteDocument(route, rules)) {
-			if (step.error) return step.error.message;
-			if (step.clashes.some((c) => c.severity === 'clash')) return step.id;
+			if (step.error) {
+				return step.error.message;
+			}
+			if (step.clashes.some((c) => c.severity === 'clash')) {
+				return step.id;
+			}
 		}
 		return null;
 	};
@@ -158,7 +167,9 @@ describe('plan 1 carries no drawback an equally long plan avoids', () => {
 				`OG-2031 seeded ${n}`
 			);
 			const { plans } = planRoute(doc, { verify, table, rules, plans: 20 });
-			if (plans.length < 2) continue;
+			if (plans.length < 2) {
+				continue;
+			}
 			const first = drawbacksOf(plans[0]!);
 			for (const other of plans.slice(1).filter((p) => p.addedSteps === plans[0]!.addedSteps)) {
 				compared++;
@@ -167,7 +178,9 @@ describe('plan 1 carries no drawback an equally long plan avoids', () => {
 					first.all,
 					`${doc.intermediates[0]!.structure}: plan 1 (${plans[0]!.protections.map((p) => p.protectingGroup)}) vs ${other.protections.map((p) => p.protectingGroup)}`
 				).toBeLessThanOrEqual(mine.all);
-				if (first.own > mine.own) expect(first.all).toBeLessThan(mine.all);
+				if (first.own > mine.own) {
+					expect(first.all).toBeLessThan(mine.all);
+				}
 			}
 		}
 		expect(compared).toBeGreaterThan(10);

@@ -11,60 +11,117 @@ import { line } from '../factories/plan-routes';
 // Clayden, Greeves & Warren, Organic Chemistry; "Kocienski" is Kocienski, Protecting Groups,
 // 3rd ed. — all from memory. Molecules are invented intermediates of the OG-2031 scenario.
 
-const pgsOf = (answer: ReturnType<typeof planRouteDocument>) => answer.plans.map((p) => p.protections.map((x) => x.protectingGroup).join('+'));
+const pgsOf = (answer: ReturnType<typeof planRouteDocument>) =>
+	answer.plans.map((p) => p.protections.map((x) => x.protectingGroup).join('+'));
 
 describe('strategy cases from textbook practice', () => {
-	it('masks a ketone as a cyclic acetal through a Grignard addition to the ester — Clayden; Greene\'s (from memory)', () => {
-		const answer = planRouteDocument(line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, THF']));
+	it("masks a ketone as a cyclic acetal through a Grignard addition to the ester — Clayden; Greene's (from memory)", () => {
+		const answer = planRouteDocument(
+			line(['CC(=O)CCC(=O)OC', 'CC(=O)CCC(C)(C)O'], ['MeMgBr, THF'])
+		);
 		expect(answer.unsolved).toBeUndefined();
 		expect(pgsOf(answer)).toContain('dioxolane');
-		expect(answer.plans.every((p) => ['dioxolane', 'dioxane', 'dimethyl-acetal', 'dithiane'].includes(p.protections[0]!.protectingGroup))).toBe(true);
+		expect(
+			answer.plans.every((p) =>
+				['dioxolane', 'dioxane', 'dimethyl-acetal', 'dithiane'].includes(
+					p.protections[0]!.protectingGroup
+				)
+			)
+		).toBe(true);
 		const dioxolane = answer.plans.find((p) => p.protections[0]!.protectingGroup === 'dioxolane')!;
-		expect(dioxolane.protections[0]).toMatchObject({ group: 'ketone', install: { before: 's1' }, removal: { after: 'end' } });
+		expect(dioxolane.protections[0]).toMatchObject({
+			group: 'ketone',
+			install: { before: 's1' },
+			removal: { after: 'end' }
+		});
 		expect(dioxolane.addedSteps).toBe(2);
-		const masked = dioxolane.route.intermediates.find((n) => n.id === dioxolane.protections[0]!.intermediate)!;
-		expect(perceiveText(masked.structure).protectingGroups.map((pg) => pg.id)).toContain('dioxolane');
+		const masked = dioxolane.route.intermediates.find(
+			(n) => n.id === dioxolane.protections[0]!.intermediate
+		)!;
+		expect(perceiveText(masked.structure).protectingGroups.map((pg) => pg.id)).toContain(
+			'dioxolane'
+		);
 		// The free ketone comes back at the end: the last intermediate is the original product.
 		expect(dioxolane.route.intermediates.at(-1)!.structure).toBe('CC(=O)CCC(C)(C)O');
 		// Labels say which PGs a drawn intermediate carries; the freed product keeps the plain name.
-		expect(dioxolane.route.intermediates.map((n) => n.label)).toEqual(['i0', 'i0 (with dioxolane)', 'i1 (with dioxolane)', 'i1']);
+		expect(dioxolane.route.intermediates.map((n) => n.label)).toEqual([
+			'i0',
+			'i0 (with dioxolane)',
+			'i1 (with dioxolane)',
+			'i1'
+		]);
 	});
 
-	it('keeps a 1,2-diol as an acetonide through a hydrogenation, not as a benzylidene acetal — Greene\'s, benzylidene acetals fall to hydrogenolysis (from memory)', () => {
+	it("keeps a 1,2-diol as an acetonide through a hydrogenation, not as a benzylidene acetal — Greene's, benzylidene acetals fall to hydrogenolysis (from memory)", () => {
 		// The diol is attacked before the hydrogenation (Swern) and after it (Grignard), so its mask must sit through it.
 		const answer = planRouteDocument(
-			line(['OCC(O)CC=CCCO', 'OCC(O)CC=CCC=O', 'OCC(O)CCCCC=O', 'OCC(O)CCCCC(C)O'], ['(COCl)2, DMSO, Et3N', 'H2, Pd/C, EtOH', 'MeMgBr, THF'])
+			line(
+				['OCC(O)CC=CCCO', 'OCC(O)CC=CCC=O', 'OCC(O)CCCCC=O', 'OCC(O)CCCCC(C)O'],
+				['(COCl)2, DMSO, Et3N', 'H2, Pd/C, EtOH', 'MeMgBr, THF']
+			)
 		);
 		expect(answer.plans.length).toBeGreaterThan(0);
-		expect(answer.plans.every((p) => p.protections.find((x) => x.group === 'diol-1,2')!.protectingGroup === 'acetonide')).toBe(true);
-		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/benzylidene rejected: .*hydrogenation.*"s2"/);
+		expect(
+			answer.plans.every(
+				(p) => p.protections.find((x) => x.group === 'diol-1,2')!.protectingGroup === 'acetonide'
+			)
+		).toBe(true);
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(
+			/benzylidene rejected: .*hydrogenation.*"s2"/
+		);
 	});
 
-	it('takes a benzylidene acetal off before a hydrogenation that the diol itself can stand — Greene\'s, benzylidene acetals fall to hydrogenolysis (from memory)', () => {
-		const answer = planRouteDocument(line(['OCC(O)CC=CCCO', 'OCC(O)CC=CCC=O', 'OCC(O)CCCCC=O'], ['(COCl)2, DMSO, Et3N', 'H2, Pd/C, EtOH']));
+	it("takes a benzylidene acetal off before a hydrogenation that the diol itself can stand — Greene's, benzylidene acetals fall to hydrogenolysis (from memory)", () => {
+		const answer = planRouteDocument(
+			line(
+				['OCC(O)CC=CCCO', 'OCC(O)CC=CCC=O', 'OCC(O)CCCCC=O'],
+				['(COCl)2, DMSO, Et3N', 'H2, Pd/C, EtOH']
+			)
+		);
 		expect(pgsOf(answer)[0]).toBe('acetonide');
-		const benzylidene = answer.plans.find((p) => p.protections[0]!.protectingGroup === 'benzylidene')!;
+		const benzylidene = answer.plans.find(
+			(p) => p.protections[0]!.protectingGroup === 'benzylidene'
+		)!;
 		expect(benzylidene.protections[0]!.removal.after).toBe('s1');
-		expect(benzylidene.rationale[0]).toContain('after step "s1" ((COCl)2, DMSO, Et3N), as soon as nothing attacks it');
+		expect(benzylidene.rationale[0]).toContain(
+			'after step "s1" ((COCl)2, DMSO, Et3N), as soon as nothing attacks it'
+		);
 		// Its removal step runs before the hydrogenation.
 		const order = benzylidene.route.steps.map((st) => st.intent ?? st.id);
 		expect(order.indexOf('deprotect')).toBeLessThan(order.indexOf('s2'));
 	});
 
-	it('takes a benzyl ether off by hydrogenolysis before the alkene is made, not at the end — Greene\'s, hydrogenolysis of benzyl ethers also reduces alkenes (from memory)', () => {
+	it("takes a benzyl ether off by hydrogenolysis before the alkene is made, not at the end — Greene's, hydrogenolysis of benzyl ethers also reduces alkenes (from memory)", () => {
 		// The Grignard reagent adds twice to the ester; acid then dehydrates the tertiary alcohol to the alkene.
 		// Bn is a harsh choice here (NaH to put it on), so ask for every plan, not the best five.
-		const answer = planRoute(line(['OCCCCC(=O)OC', 'OCCCCC(C)(C)O', 'OCCCCC(C)=C'], ['MeMgBr, THF', 'TsOH, toluene, reflux']), { verify: firstClash, plans: 20 });
+		const answer = planRoute(
+			line(
+				['OCCCCC(=O)OC', 'OCCCCC(C)(C)O', 'OCCCCC(C)=C'],
+				['MeMgBr, THF', 'TsOH, toluene, reflux']
+			),
+			{ verify: firstClash, plans: 20 }
+		);
 		const bn = answer.plans.find((p) => p.protections[0]!.protectingGroup === 'Bn')!;
-		expect(bn.protections[0]!.removal).toMatchObject({ after: 's1', conditions: ['hydrogenation'] });
-		expect(bn.rationale[0]).toContain('off after step "s1" (MeMgBr, THF), as soon as nothing attacks it');
+		expect(bn.protections[0]!.removal).toMatchObject({
+			after: 's1',
+			conditions: ['hydrogenation']
+		});
+		expect(bn.rationale[0]).toContain(
+			'off after step "s1" (MeMgBr, THF), as soon as nothing attacks it'
+		);
 		expect(bn.rationale.join(' ')).not.toContain('Bn rejected');
 	});
 
 	it('gives two amines orthogonal PGs that come off at different points — Kocienski, orthogonal amine protection (from memory)', () => {
 		const answer = planRouteDocument(
 			line(
-				['NCCC(CC(=O)O)CCN=[N+]=[N-]', 'NCCC(CC(=O)OC)CCN=[N+]=[N-]', 'NCCC(CC(=O)OC)CCN', 'CC(=O)NCCC(CC(=O)OC)CCN', 'CC(=O)NCCC(CC(=O)OC)CCNC(=O)c1ccccc1'],
+				[
+					'NCCC(CC(=O)O)CCN=[N+]=[N-]',
+					'NCCC(CC(=O)OC)CCN=[N+]=[N-]',
+					'NCCC(CC(=O)OC)CCN',
+					'CC(=O)NCCC(CC(=O)OC)CCN',
+					'CC(=O)NCCC(CC(=O)OC)CCNC(=O)c1ccccc1'
+				],
 				['MeI, K2CO3, DMF', 'PPh3, THF, H2O', 'Ac2O, pyridine', 'BzCl, Et3N, CH2Cl2']
 			)
 		);
@@ -77,19 +134,31 @@ describe('strategy cases from textbook practice', () => {
 		}
 	});
 
-	it('finds no plan for a terminal alkyne that Grignard steps attack on both sides of a fluoride step — Greene\'s, TMS alkynes are cleaved by fluoride (from memory)', () => {
+	it("finds no plan for a terminal alkyne that Grignard steps attack on both sides of a fluoride step — Greene's, TMS alkynes are cleaved by fluoride (from memory)", () => {
 		const answer = planRouteDocument(
 			line(
-				['C#CCCC(C=O)CCO[Si](C)(C)C(C)(C)C', 'C#CCCC(C(C)O)CCO[Si](C)(C)C(C)(C)C', 'C#CCCC(C(C)O)CCO', 'C#CCCC(C(C)O)CC=O', 'C#CCCC(C(C)O)CC(C)O'],
+				[
+					'C#CCCC(C=O)CCO[Si](C)(C)C(C)(C)C',
+					'C#CCCC(C(C)O)CCO[Si](C)(C)C(C)(C)C',
+					'C#CCCC(C(C)O)CCO',
+					'C#CCCC(C(C)O)CC=O',
+					'C#CCCC(C(C)O)CC(C)O'
+				],
 				['MeMgBr, THF', 'TBAF, THF', '(COCl)2, DMSO, Et3N', 'MeMgBr, THF']
 			)
 		);
 		expect(answer.plans).toEqual([]);
-		expect(answer.unsolved).toContainEqual({ group: 'alkyne-terminal', atoms: [0, 1], reason: expect.stringContaining('Step "s2" (TBAF, THF) makes it impossible') });
+		expect(answer.unsolved).toContainEqual({
+			group: 'alkyne-terminal',
+			atoms: [0, 1],
+			reason: expect.stringContaining('Step "s2" (TBAF, THF) makes it impossible')
+		});
 	});
 
 	it('finds no plan when a Grignard reagent meets a methyl ester the step keeps — Clayden, esters react with Grignard reagents (from memory)', () => {
-		const answer = planRouteDocument(line(['CC(=O)CCC(=O)OC', 'CC(O)(C)CCC(=O)OC'], ['MeMgBr, THF']));
+		const answer = planRouteDocument(
+			line(['CC(=O)CCC(=O)OC', 'CC(O)(C)CCC(=O)OC'], ['MeMgBr, THF'])
+		);
 		expect(answer.plans).toEqual([]);
 		expect(answer.unsolved![0]!.reason).toMatch(/methyl-ester.*step "s1"|step "s1".*methyl-ester/);
 	});
@@ -99,33 +168,54 @@ describe('strategy cases from textbook practice', () => {
 		const used = pgsOf(answer);
 		expect(used.some((pg) => ['TES', 'TBS', 'THP', 'TIPS', 'TBDPS'].includes(pg))).toBe(true);
 		expect(used).not.toContain('Ac');
-		expect(answer.plans[0]!.rationale.join(' ')).toContain('Ac rejected: the grignard reagent conditions of step "s1"');
+		expect(answer.plans[0]!.rationale.join(' ')).toContain(
+			'Ac rejected: the grignard reagent conditions of step "s1"'
+		);
 	});
 
-	it('rejects Cbz for an amine that must stay masked through a hydrogenation, and offers Boc — Greene\'s, Cbz is cleaved by H2/Pd-C, Boc is not (from memory)', () => {
+	it("rejects Cbz for an amine that must stay masked through a hydrogenation, and offers Boc — Greene's, Cbz is cleaved by H2/Pd-C, Boc is not (from memory)", () => {
 		// The amine is attacked before the hydrogenation (MeI) and after it (Ac2O).
 		const answer = planRouteDocument(
-			line(['NCCC=CCC(=O)O', 'NCCC=CCC(=O)OC', 'NCCCCCC(=O)OC', 'NCCCCCC(O)(C)C', 'NCCCCCC(OC(C)=O)(C)C'], ['MeI, K2CO3, DMF', 'H2, Pd/C, EtOH', 'MeMgBr, THF', 'Ac2O, DMAP, CH2Cl2'])
+			line(
+				[
+					'NCCC=CCC(=O)O',
+					'NCCC=CCC(=O)OC',
+					'NCCCCCC(=O)OC',
+					'NCCCCCC(O)(C)C',
+					'NCCCCCC(OC(C)=O)(C)C'
+				],
+				['MeI, K2CO3, DMF', 'H2, Pd/C, EtOH', 'MeMgBr, THF', 'Ac2O, DMAP, CH2Cl2']
+			)
 		);
 		expect(pgsOf(answer)).toContain('Boc');
 		expect(pgsOf(answer)).not.toContain('Cbz');
-		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/Cbz rejected: the catalytic hydrogenation conditions of step "s2"/);
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(
+			/Cbz rejected: the catalytic hydrogenation conditions of step "s2"/
+		);
 	});
 
-	it('masks a thiol as a trityl thioether through a Swern oxidation — Greene\'s, S-trityl protection of thiols (from memory)', () => {
+	it("masks a thiol as a trityl thioether through a Swern oxidation — Greene's, S-trityl protection of thiols (from memory)", () => {
 		const answer = planRouteDocument(line(['SCCCCO', 'SCCCC=O'], ['(COCl)2, DMSO, Et3N']));
 		expect(new Set(pgsOf(answer))).toEqual(new Set(['S-Tr']));
 	});
 
-	it('does not benzylate a phenol with NaH while a ketone is free, but by a recipe without strong base — common practice, NaH enolises ketones; Greene\'s, Ag2O/BnBr benzylation (from memory)', () => {
-		const answer = planRouteDocument(line(['Oc1ccc(CC(C)=O)cc1', 'Oc1ccc(CC(C)(O)C)cc1'], ['MeMgBr, THF']));
-		const benzyl = answer.plans.flatMap((p) => p.protections).filter((x) => x.protectingGroup === 'Bn');
+	it("does not benzylate a phenol with NaH while a ketone is free, but by a recipe without strong base — common practice, NaH enolises ketones; Greene's, Ag2O/BnBr benzylation (from memory)", () => {
+		const answer = planRouteDocument(
+			line(['Oc1ccc(CC(C)=O)cc1', 'Oc1ccc(CC(C)(O)C)cc1'], ['MeMgBr, THF'])
+		);
+		const benzyl = answer.plans
+			.flatMap((p) => p.protections)
+			.filter((x) => x.protectingGroup === 'Bn');
 		expect(benzyl.length).toBeGreaterThan(0);
-		for (const bn of benzyl) expect(bn.install.reagents).not.toMatch(/NaH/);
+		for (const bn of benzyl) {
+			expect(bn.install.reagents).not.toMatch(/NaH/);
+		}
 	});
 
 	it('carries a carboxylic acid through a Grignard step only as the hindered tBu ester, with cautions — Clayden, esters are attacked by organometallics; Lundt et al. 1978, tertiary alcohols survive TFA/CH2Cl2 (from memory)', () => {
-		const answer = planRouteDocument(line(['OC(=O)CCCC(C)=O', 'OC(=O)CCCC(C)(C)O'], ['MeMgBr, THF']));
+		const answer = planRouteDocument(
+			line(['OC(=O)CCCC(C)=O', 'OC(=O)CCCC(C)(C)O'], ['MeMgBr, THF'])
+		);
 		// Methyl, benzyl and allyl esters are attacked by the Grignard reagent; the tBu ester only
 		// calls for care. TFA in CH2Cl2 leaves the aliphatic tertiary alcohol made in the step: the
 		// planner's removal step is judged by its reagent, as a chemist's own TFA step would be.
@@ -136,15 +226,24 @@ describe('strategy cases from textbook practice', () => {
 		expect(answer.plans[0]!.rationale.join(' ')).toContain('methyl-ester rejected');
 	});
 
-	it('counts THP\'s new stereocentre as a drawback on a chiral substrate only — Greene\'s, THP ethers of chiral alcohols are diastereomer mixtures (from memory)', () => {
+	it("counts THP's new stereocentre as a drawback on a chiral substrate only — Greene's, THP ethers of chiral alcohols are diastereomer mixtures (from memory)", () => {
 		const note = 'THP puts a new stereocentre at its acetal carbon';
-		const thp = (answer: ReturnType<typeof planRoute>) => answer.plans.find((p) => p.protections[0]!.protectingGroup === 'THP')!;
-		const chiral = planRoute(line(['C[C@H](O)CCC(=O)OC', 'C[C@H](O)CCC(C)(C)O'], ['MeMgBr, THF']), { verify: firstClash, plans: 20 });
-		const achiral = planRoute(line(['OCCCCC(=O)OC', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']), { verify: firstClash, plans: 20 });
+		const thp = (answer: ReturnType<typeof planRoute>) =>
+			answer.plans.find((p) => p.protections[0]!.protectingGroup === 'THP')!;
+		const chiral = planRoute(line(['C[C@H](O)CCC(=O)OC', 'C[C@H](O)CCC(C)(C)O'], ['MeMgBr, THF']), {
+			verify: firstClash,
+			plans: 20
+		});
+		const achiral = planRoute(line(['OCCCCC(=O)OC', 'OCCCCC(C)(C)O'], ['MeMgBr, THF']), {
+			verify: firstClash,
+			plans: 20
+		});
 		expect(thp(chiral).rationale[0]).toContain(note);
 		expect(thp(achiral).rationale[0]).not.toContain(note);
 		// One drawback more than on the achiral alcohol (a tier above any caution), so a silyl ether ranks above THP there.
-		expect(thp(chiral).score - thp(achiral).score).toBe(scoreOf({ addedSteps: 0, drawbacks: 1, cautions: 0, preference: 0, harshness: 0 }));
+		expect(thp(chiral).score - thp(achiral).score).toBe(
+			scoreOf({ addedSteps: 0, drawbacks: 1, cautions: 0, preference: 0, harshness: 0 })
+		);
 		expect(chiral.plans[0]!.protections[0]!.protectingGroup).not.toBe('THP');
 	});
 
@@ -161,22 +260,44 @@ describe('strategy cases from textbook practice', () => {
 		};
 		const answer = planRouteDocument(doc);
 		expect(answer.plans.length).toBeGreaterThan(0);
-		for (const plan of answer.plans) expect(['TMS', 'TES', 'TBS', 'TIPS', 'TBDPS']).not.toContain(plan.protections[0]!.protectingGroup);
-		expect(answer.plans[0]!.rationale.join(' ')).toMatch(/TBS rejected: installing it \(TBSCl, imidazole, DMF\) would also attack the free primary alkylamine/);
+		for (const plan of answer.plans) {
+			expect(['TMS', 'TES', 'TBS', 'TIPS', 'TBDPS']).not.toContain(
+				plan.protections[0]!.protectingGroup
+			);
+		}
+		expect(answer.plans[0]!.rationale.join(' ')).toMatch(
+			/TBS rejected: installing it \(TBSCl, imidazole, DMF\) would also attack the free primary alkylamine/
+		);
 	});
 
-	it('says why the usual cyclic acetal is not used when the diol\'s acetonide goes on later under acid — Greene\'s, acetals exchange under acid catalysis (from memory)', () => {
+	it("says why the usual cyclic acetal is not used when the diol's acetonide goes on later under acid — Greene's, acetals exchange under acid catalysis (from memory)", () => {
 		const answer = planRouteDocument(
-			line(['OC[C@@H](O)CC(=O)CCC(=O)OC', 'OC[C@@H](O)CC(=O)CCC=O', 'OC[C@@H](O)CC(=O)CC/C=C/C(=O)OCC'], ['DIBAL-H, CH2Cl2, –78 °C', '(EtO)2P(O)CH2CO2Et, NaH, THF'])
+			line(
+				[
+					'OC[C@@H](O)CC(=O)CCC(=O)OC',
+					'OC[C@@H](O)CC(=O)CCC=O',
+					'OC[C@@H](O)CC(=O)CC/C=C/C(=O)OCC'
+				],
+				['DIBAL-H, CH2Cl2, –78 °C', '(EtO)2P(O)CH2CO2Et, NaH, THF']
+			)
 		);
 		// Plan 1 keeps the usual dioxolane and gives the diol a silylene, which goes on without acid;
 		// the acetonide comes with a dithiane (removed with MeI, a carcinogen) further down.
 		const best = answer.plans[0]!;
-		expect(best.protections.map((p) => `${p.protectingGroup}:${p.group}`)).toEqual(['dioxolane:ketone', 'DTBS:diol-1,2']);
-		expect(best.rationale).toContain('acetonide not used for the 1,2-diol: putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane on the ketone.');
-		const acetonide = answer.plans.find((p) => p.protections.some((x) => x.protectingGroup === 'acetonide'))!;
+		expect(best.protections.map((p) => `${p.protectingGroup}:${p.group}`)).toEqual([
+			'dioxolane:ketone',
+			'DTBS:diol-1,2'
+		]);
+		expect(best.rationale).toContain(
+			'acetonide not used for the 1,2-diol: putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane on the ketone.'
+		);
+		const acetonide = answer.plans.find((p) =>
+			p.protections.some((x) => x.protectingGroup === 'acetonide')
+		)!;
 		expect(acetonide.protections.map((p) => p.protectingGroup)).toEqual(['dithiane', 'acetonide']);
-		expect(acetonide.rationale).toContain('dioxolane not used for the ketone: putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane on the ketone.');
+		expect(acetonide.rationale).toContain(
+			'dioxolane not used for the ketone: putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane on the ketone.'
+		);
 	});
 
 	it('masks nothing for an amide coupling beside a free alcohol — Montalbetti & Falque, Tetrahedron 2005, 61, 10827: HATU acylates the amine, not the alcohol (from memory)', () => {
@@ -208,10 +329,12 @@ describe('strategy cases from textbook practice', () => {
 		expect(new Set(pgsOf(answer)).size).toBe(answer.plans.length);
 	});
 
-	it('masks two ketones in one ketalisation and frees them in one hydrolysis — Greene\'s, acetals form and hydrolyse under the same acid catalysis (from memory)', () => {
+	it("masks two ketones in one ketalisation and frees them in one hydrolysis — Greene's, acetals form and hydrolyse under the same acid catalysis (from memory)", () => {
 		// An ester, not an aldehyde, is what the Grignard reagent attacks: beside a free aldehyde no
 		// ketone can be ketalised (the aldehyde takes the diol first; tests/unit/plan-judgement.test.ts).
-		const answer = planRouteDocument(line(['CC(=O)CCC(CC(=O)OC)CCC(C)=O', 'CC(=O)CCC(CC(C)(C)O)CCC(C)=O'], ['MeMgBr, THF']));
+		const answer = planRouteDocument(
+			line(['CC(=O)CCC(CC(=O)OC)CCC(C)=O', 'CC(=O)CCC(CC(C)(C)O)CCC(C)=O'], ['MeMgBr, THF'])
+		);
 		const best = answer.plans[0]!;
 		expect(best.protections).toHaveLength(2);
 		expect(best.protections[0]!.protectingGroup).toBe(best.protections[1]!.protectingGroup);
@@ -234,25 +357,40 @@ describe('strategy cases from textbook practice', () => {
 		expect(answer.unsolved).toBeUndefined();
 		// An amine carbamate or sulfonamide masks it (Boc, Cbz, Teoc, Troc, Alloc …: which one ranks
 		// first is the planner's choice among equals, so the first plan is followed here).
-		expect(answer.plans.map((p) => p.protections[0]!.protectingGroup).every((pg) => ['Boc', 'Cbz', 'Fmoc', 'Alloc', 'Teoc', 'Troc', 'Ts', 'Ns'].includes(pg))).toBe(true);
+		expect(
+			answer.plans
+				.map((p) => p.protections[0]!.protectingGroup)
+				.every((pg) => ['Boc', 'Cbz', 'Fmoc', 'Alloc', 'Teoc', 'Troc', 'Ts', 'Ns'].includes(pg))
+		).toBe(true);
 		const first = answer.plans[0]!;
 		const chosen = first.protections[0]!.protectingGroup;
-		expect(first.protections).toEqual([expect.objectContaining({ group: 'amine-primary', atoms: [0, 1], install: expect.objectContaining({ before: 'join' }), removal: expect.objectContaining({ after: 'end' }) })]);
+		expect(first.protections).toEqual([
+			expect.objectContaining({
+				group: 'amine-primary',
+				atoms: [0, 1],
+				install: expect.objectContaining({ before: 'join' }),
+				removal: expect.objectContaining({ after: 'end' })
+			})
+		]);
 		// The mask goes on the acid half; the coupling joins the protected acid with the untouched amine.
 		const protect = first.route.steps.find((st) => st.intent === 'protect')!;
 		expect(protect.from).toEqual(['acid']);
 		const join = first.route.steps.find((st) => st.id === 'join')!;
 		expect(join.from).toEqual([protect.to, 'amine']);
 		const masked = first.route.intermediates.find((n) => n.id === protect.to)!;
-		expect(perceiveText(masked.structure).protectingGroups).toEqual([expect.objectContaining({ id: chosen, masks: 'amine-primary' })]);
+		expect(perceiveText(masked.structure).protectingGroups).toEqual([
+			expect.objectContaining({ id: chosen, masks: 'amine-primary' })
+		]);
 		expect(first.route.intermediates.find((n) => n.id === 'amine')!.structure).toBe('NCc1ccccc1');
 		// Free again at the end: the last step removes the mask and gives the drawn target back.
 		const last = first.route.steps.at(-1)!;
 		expect(last.intent).toBe('deprotect');
-		expect(first.route.intermediates.find((n) => n.id === last.to)!.structure).toBe('NCCC(=O)NCc1ccccc1');
+		expect(first.route.intermediates.find((n) => n.id === last.to)!.structure).toBe(
+			'NCCC(=O)NCc1ccccc1'
+		);
 	});
 
-	it('masks a ketone on one branch of a convergent route through that branch\'s Grignard step — Clayden; Greene\'s (from memory)', () => {
+	it("masks a ketone on one branch of a convergent route through that branch's Grignard step — Clayden; Greene's (from memory)", () => {
 		const doc: RouteDocument = {
 			name: 'OG-2031 convergent',
 			intermediates: [
@@ -278,12 +416,18 @@ describe('strategy cases from textbook practice', () => {
 	it('says plainly that a route whose intermediate feeds two steps is planned one branch at a time — common practice', () => {
 		const doc: RouteDocument = {
 			name: 'OG-2031 analogues',
-			intermediates: [{ id: 'a', structure: 'CC(=O)CCC(=O)OC' }, { id: 'b', structure: 'CC(=O)CCC(C)(C)O' }, { id: 'c', structure: 'CC(=O)CCC(CC)(CC)O' }],
+			intermediates: [
+				{ id: 'a', structure: 'CC(=O)CCC(=O)OC' },
+				{ id: 'b', structure: 'CC(=O)CCC(C)(C)O' },
+				{ id: 'c', structure: 'CC(=O)CCC(CC)(CC)O' }
+			],
 			steps: [
 				{ id: 'me', from: ['a'], to: 'b', reagents: 'MeMgBr, THF' },
 				{ id: 'et', from: ['a'], to: 'c', reagents: 'EtMgBr, THF' }
 			]
 		};
-		expect(planRouteDocument(doc).unsolved![0]!.reason).toContain('Intermediate "a" is used by two steps ("me" and "et")');
+		expect(planRouteDocument(doc).unsolved![0]!.reason).toContain(
+			'Intermediate "a" is used by two steps ("me" and "et")'
+		);
 	});
 });

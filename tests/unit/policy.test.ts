@@ -6,7 +6,14 @@ import { ACTIONS, can, ROLES, type Action, type Role } from '../../src/lib/polic
 // routes and adds library entries; reviewer reads, comments, approves or asks for changes; viewer reads.
 const EXPECTED: Record<Role, Action[]> = {
 	lead: [...ACTIONS],
-	chemist: ['project.read', 'project.create', 'project.edit', 'route.edit', 'route.comment', 'library.add'],
+	chemist: [
+		'project.read',
+		'project.create',
+		'project.edit',
+		'route.edit',
+		'route.comment',
+		'library.add'
+	],
 	reviewer: ['project.read', 'route.comment', 'route.review'],
 	viewer: ['project.read']
 };
@@ -22,7 +29,9 @@ describe('role × action policy', () => {
 	}
 
 	it('grants nothing without a role', () => {
-		for (const action of ACTIONS) expect(can(null, action)).toBe(false);
+		for (const action of ACTIONS) {
+			expect(can(null, action)).toBe(false);
+		}
 	});
 
 	it('keeps reviewers from editing structures (DESIGN.md: "cannot edit structures")', () => {

@@ -52,8 +52,11 @@ describe.skipIf(!url)('the same models and migrations on PostgreSQL', () => {
 			)
 		);
 		expect(contested.filter((r) => r.status === 'fulfilled')).toHaveLength(1);
-		for (const r of contested)
-			if (r.status === 'rejected') expect(r.reason).toBeInstanceOf(VersionConflict);
+		for (const r of contested) {
+			if (r.status === 'rejected') {
+				expect(r.reason).toBeInstanceOf(VersionConflict);
+			}
+		}
 		// A form's route id that is not a uuid is a 404, not PostgreSQL's invalid-uuid error (500).
 		const actionUrl = new URL(`http://localhost/projects/${project.id}?/archiveRoute`);
 		const request = new Request(actionUrl, {

@@ -15,21 +15,26 @@ beforeAll(freshDatabase);
 /** One attempt that checks the password and finds it wrong. */
 async function fail(email: string, address: string) {
 	const allowance = await takeSignInAttempt(email, address);
-	if (allowance.allowed) await settleSignInAttempt(email, address, false);
+	if (allowance.allowed) {
+		await settleSignInAttempt(email, address, false);
+	}
 	return allowance;
 }
 
 /** One attempt with the right password. */
 async function succeed(email: string, address: string) {
 	const allowance = await takeSignInAttempt(email, address);
-	if (allowance.allowed) await settleSignInAttempt(email, address, true);
+	if (allowance.allowed) {
+		await settleSignInAttempt(email, address, true);
+	}
 	return allowance;
 }
 
 describe('sign-in limits', () => {
 	it('allows five failures for one e-mail from one address in 15 minutes, then asks to wait', async () => {
-		for (let i = 0; i < 5; i++)
+		for (let i = 0; i < 5; i++) {
 			expect(await fail('limit@lab.example', '10.0.0.1')).toEqual({ allowed: true });
+		}
 		const refused = await takeSignInAttempt('LIMIT@lab.example', '10.0.0.1');
 		expect(refused.allowed).toBe(false);
 		if (!refused.allowed) {
@@ -39,7 +44,9 @@ describe('sign-in limits', () => {
 	});
 
 	it('does not let a stranger’s failures from another address lock the owner out', async () => {
-		for (let i = 0; i < 12; i++) await fail('owner@lab.example', '203.0.113.66');
+		for (let i = 0; i < 12; i++) {
+			await fail('owner@lab.example', '203.0.113.66');
+		}
 		expect((await takeSignInAttempt('owner@lab.example', '203.0.113.66')).allowed).toBe(false);
 		expect(await succeed('owner@lab.example', '10.0.0.7')).toEqual({ allowed: true });
 	});
@@ -57,15 +64,19 @@ describe('sign-in limits', () => {
 		for (let i = 0; i < SIGN_IN_LIMITS.perAddress + 5; i++) {
 			expect(await succeed('scripted@lab.example', '10.5.5.5')).toEqual({ allowed: true });
 		}
-		for (let i = 0; i < 5; i++)
+		for (let i = 0; i < 5; i++) {
 			expect((await fail('scripted@lab.example', '10.5.5.5')).allowed).toBe(true);
+		}
 	});
 
 	it('forgets an account’s failures after a successful sign-in', async () => {
-		for (let i = 0; i < 4; i++) await fail('back@lab.example', '10.1.0.1');
+		for (let i = 0; i < 4; i++) {
+			await fail('back@lab.example', '10.1.0.1');
+		}
 		await succeed('back@lab.example', '10.1.0.1');
-		for (let i = 0; i < 5; i++)
+		for (let i = 0; i < 5; i++) {
 			expect((await fail('back@lab.example', '10.1.0.1')).allowed).toBe(true);
+		}
 	});
 
 	it('lets no more than five parallel guesses through', async () => {
@@ -89,11 +100,12 @@ describe('authorizeSignIn (what Auth.js runs for every credentials sign-in)', ()
 				retryAfterSeconds: context.retryAfterSeconds
 			}));
 
-		for (let i = 0; i < 5; i++)
+		for (let i = 0; i < 5; i++) {
 			expect(await attempt('wrong', '198.51.100.9')).toEqual({
 				user: null,
 				retryAfterSeconds: null
 			});
+		}
 		const refused = await attempt('right-password', '198.51.100.9');
 		expect(refused.user).toBeNull();
 		expect(refused.retryAfterSeconds).toBeGreaterThan(0);

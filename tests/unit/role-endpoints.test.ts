@@ -87,7 +87,9 @@ async function outcomeOf(run: () => unknown): Promise<Outcome> {
 	try {
 		const result = await run();
 		const status = result instanceof Response ? result.status : 200;
-		if (status === 401 || status === 403) return String(status) as Outcome;
+		if (status === 401 || status === 403) {
+			return String(status) as Outcome;
+		}
 		// The API's catch-all says 404 in its own words; a guard's 404 says "not shared with you".
 		if (status === 404 && result instanceof Response) {
 			const body = (await result.json()) as { error: { code: string } };
@@ -95,10 +97,15 @@ async function outcomeOf(run: () => unknown): Promise<Outcome> {
 		}
 		return 'ok';
 	} catch (caught) {
-		if (isRedirect(caught)) return caught.location.startsWith('/signin') ? 'sign-in' : 'ok';
-		if (isHttpError(caught) && [401, 403, 404].includes(caught.status))
+		if (isRedirect(caught)) {
+			return caught.location.startsWith('/signin') ? 'sign-in' : 'ok';
+		}
+		if (isHttpError(caught) && [401, 403, 404].includes(caught.status)) {
 			return String(caught.status) as Outcome;
-		if (isHttpError(caught)) return 'ok';
+		}
+		if (isHttpError(caught)) {
+			return 'ok';
+		}
 		throw caught;
 	}
 }
@@ -172,11 +179,14 @@ describe('role × endpoint, from the route tree', () => {
 		const wrong: string[] = [];
 		for (const entry of entries) {
 			const expected = EXPECTED[entry.key];
-			if (!expected || 'skip' in expected) continue;
+			if (!expected || 'skip' in expected) {
+				continue;
+			}
 			for (const caller of CALLERS) {
 				const got = await call(entry, caller);
-				if (got !== expected[caller])
+				if (got !== expected[caller]) {
 					wrong.push(`${entry.key} as ${caller}: expected ${expected[caller]}, got ${got}`);
+				}
 			}
 		}
 		expect(wrong).toEqual([]);

@@ -12,7 +12,13 @@ const route: RouteDocument = {
 		{ id: 'target', structure: 'CC(=O)CCC(C)(C)O' }
 	],
 	steps: [
-		{ id: 's1', from: ['keto-ester'], to: 'protected', reagents: 'ethylene glycol, TsOH, toluene, reflux', intent: 'protect' },
+		{
+			id: 's1',
+			from: ['keto-ester'],
+			to: 'protected',
+			reagents: 'ethylene glycol, TsOH, toluene, reflux',
+			intent: 'protect'
+		},
 		{ id: 's2', from: ['protected'], to: 'alcohol', reagents: 'MeMgBr, THF' },
 		{ id: 's3', from: ['alcohol'], to: 'target', reagents: 'aq. HCl, acetone', intent: 'deprotect' }
 	]
@@ -30,7 +36,10 @@ describe('route documents', () => {
 	});
 
 	it('names duplicate ids', () => {
-		const doc = { ...route, intermediates: [...route.intermediates, { id: 'target', structure: 'C' }] };
+		const doc = {
+			...route,
+			intermediates: [...route.intermediates, { id: 'target', structure: 'C' }]
+		};
 		expect(problemsOf(doc)).toEqual(['Duplicate intermediate id "target".']);
 		const steps = { ...route, steps: [...route.steps, { ...route.steps[0]!, to: 'alcohol' }] };
 		expect(problemsOf(steps)).toEqual(['Duplicate step id "s1".']);
@@ -45,11 +54,16 @@ describe('route documents', () => {
 	});
 
 	it('finds cycles and says which way they run', () => {
-		const doc = { ...route, steps: [...route.steps, { id: 'back', from: ['target'], to: 'protected' }] };
-		expect(problemsOf(doc)).toEqual(['The steps form a cycle: protected → alcohol → target → protected.']);
-		expect(problemsOf({ ...route, steps: [{ id: 'self', from: ['target'], to: 'target' }] })).toEqual([
-			'Step "self" leads back to its own starting intermediate "target".'
+		const doc = {
+			...route,
+			steps: [...route.steps, { id: 'back', from: ['target'], to: 'protected' }]
+		};
+		expect(problemsOf(doc)).toEqual([
+			'The steps form a cycle: protected → alcohol → target → protected.'
 		]);
+		expect(
+			problemsOf({ ...route, steps: [{ id: 'self', from: ['target'], to: 'target' }] })
+		).toEqual(['Step "self" leads back to its own starting intermediate "target".']);
 	});
 
 	it('accepts a convergent step with two inputs', () => {
@@ -69,7 +83,11 @@ describe('route documents', () => {
 		const result = validateRouteDocument({ name: '', intermediates: [{ id: 'a' }], steps: 'none' });
 		expect(result.ok).toBe(false);
 		if (!result.ok) {
-			expect(result.problems.map((p) => p.path.join('.')).sort()).toEqual(['intermediates.0.structure', 'name', 'steps']);
+			expect(result.problems.map((p) => p.path.join('.')).sort()).toEqual([
+				'intermediates.0.structure',
+				'name',
+				'steps'
+			]);
 		}
 	});
 });

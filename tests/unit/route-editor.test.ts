@@ -20,7 +20,9 @@ let answers: Answer[];
 let release: (() => void) | null;
 const client = {
 	save: vi.fn(async (): Promise<Answer> => {
-		if (release === null) return answers.shift()!;
+		if (release === null) {
+			return answers.shift()!;
+		}
 		await new Promise<void>((resolve) => (release = resolve));
 		return answers.shift()!;
 	}),
@@ -176,8 +178,9 @@ describe('route editor flush (before the planner reads the stored route)', () =>
 describe('route editor undo and roles', () => {
 	it('undoes a burst of typing in one field as one edit', () => {
 		const editor = make();
-		for (const text of ['M', 'Me', 'MeMgBr'])
+		for (const text of ['M', 'Me', 'MeMgBr']) {
 			editor.updateStep('s1', { reagents: text }, 'reagents');
+		}
 		editor.connect('b', 'a');
 		expect(editor.doc.steps[0]!.reagents).toBe('MeMgBr');
 		editor.undo();

@@ -33,7 +33,9 @@ describe('route map document edits', () => {
 		expect(convergent.ok && convergent.doc.steps).toEqual([
 			{ id: 's1', from: ['a', 'g'], to: 'b', reagents: 'TsOH' }
 		]);
-		if (convergent.ok) expect(validateRouteDocument(convergent.doc).ok).toBe(true);
+		if (convergent.ok) {
+			expect(validateRouteDocument(convergent.doc).ok).toBe(true);
+		}
 	});
 
 	it('refuses a step that closes a cycle or repeats one', () => {
@@ -51,7 +53,9 @@ describe('route map document edits', () => {
 	it('removes an intermediate with the steps that need it, or just one input of a convergent step', () => {
 		expect(ops.removeElements(base, ['a'], []).steps).toEqual([]);
 		const convergent = ops.connect(base, 'g', 'b');
-		if (!convergent.ok) throw new Error('expected a step');
+		if (!convergent.ok) {
+			throw new Error('expected a step');
+		}
 		expect(
 			ops.removeElements(convergent.doc, [], [{ stepId: 's1', from: 'g' }]).steps[0]!.from
 		).toEqual(['a']);

@@ -96,7 +96,7 @@ describe('route SDF import', () => {
 	});
 
 	it('joins records without fields by consecutive steps with generated ids', () => {
-		const plain = routeToSdf(linear).replace(/^>  <[^>]+>\n[^\n]*\n\n/gm, '');
+		const plain = routeToSdf(linear).replace(/^> {2}<[^>]+>\n[^\n]*\n\n/gm, '');
 		const back = routeFromSdf(plain, 'Plain');
 		expect(back.intermediates.map((n) => n.id)).toEqual(['i1', 'i2', 'i3']);
 		expect(back.steps.map(({ id, from, to }) => ({ id, from, to }))).toEqual([

@@ -114,7 +114,9 @@ describe('reagent context in the rule files', () => {
 			buildRuleTable(raw);
 			return [];
 		} catch (error) {
-			if (error instanceof RuleTableError) return [...error.problems];
+			if (error instanceof RuleTableError) {
+				return [...error.problems];
+			}
 			throw error;
 		}
 	};

@@ -194,8 +194,9 @@ describe('classifier: hazards shown beside the step', () => {
 			const notes = conditionsForReagents(text).hazards.map((h) => h.note);
 			expect(notes.length, text).toBeGreaterThan(0);
 			expect(notes.join(' ')).toMatch(pattern);
-			for (const note of notes)
+			for (const note of notes) {
 				expect(note).toMatch(/Check the SDS and follow your institution’s safety rules/);
+			}
 		});
 	}
 

@@ -330,8 +330,9 @@ describe('textbook facts: free-group reactivity', () => {
 			'thiol',
 			'indole-nh'
 		];
-		for (const group of protic)
+		for (const group of protic) {
 			expect(table.reactivityOf(group, 'organometallic')?.rating, group).toBe('reacts');
+		}
 		for (const group of ['amine-primary', 'amine-secondary'] as const) {
 			expect(table.reactivityOf(group, 'organometallic'), group).toBeDefined();
 		}

@@ -17,7 +17,9 @@ function problemsOf(raw: Raw): string[] {
 		buildRuleTable(raw);
 		return [];
 	} catch (error) {
-		if (error instanceof RuleTableError) return [...error.problems];
+		if (error instanceof RuleTableError) {
+			return [...error.problems];
+		}
 		throw error;
 	}
 }

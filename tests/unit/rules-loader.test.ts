@@ -22,7 +22,9 @@ function problemsOf(raw: RawRuleFiles): readonly string[] {
 	try {
 		parseRuleFiles(raw);
 	} catch (error) {
-		if (error instanceof RuleTableError) return error.problems;
+		if (error instanceof RuleTableError) {
+			return error.problems;
+		}
 		throw error;
 	}
 	throw new Error('expected the broken copy to fail');
@@ -60,17 +62,34 @@ describe('rule-table loader: error messages name file, path and reason', () => {
 
 	it('rejects install transforms that leave a protected group undrawn or draw one the row does not protect', () => {
 		const raw = good();
-		const tbs = (raw.protectingGroups as { id: string; install: { transforms: { groups: string[] }[] } }[]).find((pg) => pg.id === 'TBS')!;
-		tbs.install.transforms[0]!.groups = ['alcohol-primary', 'alcohol-secondary', 'alcohol-tertiary', 'thiol'];
+		const tbs = (
+			raw.protectingGroups as { id: string; install: { transforms: { groups: string[] }[] } }[]
+		).find((pg) => pg.id === 'TBS')!;
+		tbs.install.transforms[0]!.groups = [
+			'alcohol-primary',
+			'alcohol-secondary',
+			'alcohol-tertiary',
+			'thiol'
+		];
 		const problems = problemsOf(raw);
-		expect(problems).toContain('rules/protecting-groups.json: [2].install.transforms: no transforms for "phenol" (each protected group needs exactly one)');
-		expect(problems).toContain('rules/protecting-groups.json: [2].install.transforms: a transform for "thiol", which the row does not protect');
+		expect(problems).toContain(
+			'rules/protecting-groups.json: [2].install.transforms: no transforms for "phenol" (each protected group needs exactly one)'
+		);
+		expect(problems).toContain(
+			'rules/protecting-groups.json: [2].install.transforms: a transform for "thiol", which the row does not protect'
+		);
 	});
 
 	it('rejects a transform that is not one reaction SMARTS', () => {
 		const raw = good();
-		(raw.protectingGroups as { install: { transforms: { smarts: string }[] } }[])[0]!.install.transforms[0]!.smarts = '[O;H1:1]';
-		expect(problemsOf(raw)).toEqual([expect.stringMatching(/^rules\/protecting-groups\.json: \[0\]\.install\.transforms\[0\]\.smarts: must be one reaction SMARTS/)]);
+		(
+			raw.protectingGroups as { install: { transforms: { smarts: string }[] } }[]
+		)[0]!.install.transforms[0]!.smarts = '[O;H1:1]';
+		expect(problemsOf(raw)).toEqual([
+			expect.stringMatching(
+				/^rules\/protecting-groups\.json: \[0\]\.install\.transforms\[0\]\.smarts: must be one reaction SMARTS/
+			)
+		]);
 	});
 
 	it('rejects a stability cell for a condition class that does not exist', () => {
@@ -254,7 +273,12 @@ describe('rule-table override layer', () => {
 describe('rule-table loader: usuallyMasked', () => {
 	it('accepts it only on a caution row', () => {
 		const raw = good();
-		const rows = raw.reactivity as { group: string; condition: string; rating: string; usuallyMasked?: boolean }[];
+		const rows = raw.reactivity as {
+			group: string;
+			condition: string;
+			rating: string;
+			usuallyMasked?: boolean;
+		}[];
 		const index = rows.findIndex((r) => r.rating === 'reacts');
 		rows[index]!.usuallyMasked = true;
 		expect(problemsOf(raw)).toEqual([

@@ -66,8 +66,9 @@ describe('perception: each new group, and the near misses', () => {
 	});
 	it('reads a 2-pyridone as neither azole, aniline nor Michael acceptor, though openchemlib keeps its C=C bonds', () => {
 		const ids = groupsOf('O=c1cccc[nH]1');
-		for (const id of ['azole-nh', 'aniline', 'michael-acceptor', 'azine-nitrogen'])
+		for (const id of ['azole-nh', 'aniline', 'michael-acceptor', 'azine-nitrogen']) {
 			expect(ids, id).not.toContain(id);
+		}
 	});
 	it('finds the azine N of a pyridine and a pyrimidine, not of an N-oxide or an imidazole', () => {
 		expect(count('Clc1ccnc(Cl)n1', 'azine-nitrogen')).toBe(2);
@@ -83,16 +84,18 @@ describe('perception: each new group, and the near misses', () => {
 		expect(groupsOf('C=CC(=O)N1CCCC1')).toEqual(
 			expect.arrayContaining(['michael-acceptor', 'alkene'])
 		);
-		for (const miss of ['CN(C)/C=C/C(=O)c1ccccc1', 'C=COCCCC', 'CC=C(C)N1CCCC1'])
+		for (const miss of ['CN(C)/C=C/C(=O)c1ccccc1', 'C=COCCCC', 'CC=C(C)N1CCCC1']) {
 			expect(count(miss, 'michael-acceptor'), miss).toBe(0);
+		}
 	});
 	it('reports an allylic, benzylic or propargylic OH in addition to its alcohol class; a homoallylic one is plain', () => {
 		expect(groupsOf('OC/C=C/c1ccccc1')).toEqual(
 			expect.arrayContaining(['alcohol-allylic-benzylic', 'alcohol-primary'])
 		);
 		expect(count('OCC#CCO', 'alcohol-allylic-benzylic')).toBe(2);
-		for (const miss of ['OCCC=C', 'CC(C)(O)C#N', 'CC(=O)CO'])
+		for (const miss of ['OCCC=C', 'CC(C)(O)C#N', 'CC(=O)CO']) {
 			expect(count(miss, 'alcohol-allylic-benzylic'), miss).toBe(0);
+		}
 	});
 	it('reports an internal alkyne and a vinyl halide, not a silyl-capped alkyne', () => {
 		expect(count('OCC#CCO', 'alkyne-internal')).toBe(1);

@@ -28,7 +28,9 @@ function problemsOf(raw: RawRuleFiles): readonly string[] {
 	try {
 		parseRuleFiles(raw);
 	} catch (error) {
-		if (error instanceof RuleTableError) return error.problems;
+		if (error instanceof RuleTableError) {
+			return error.problems;
+		}
 		throw error;
 	}
 	throw new Error('expected the broken copy to fail');
@@ -131,13 +133,14 @@ describe('preferences: a chemist’s first reach per group type, sourced', () =>
 		expect([...installable].filter((g) => !rowed.has(g))).toEqual([]);
 		for (const row of table.preferences) {
 			expect(row.source).toMatch(/from memory|common practice/);
-			for (const group of row.groups)
+			for (const group of row.groups) {
 				for (const pg of row.order) {
 					expect(protects.get(pg), `${pg} on ${group}`).toContain(group);
 					// A listed PG with no recipe for the group could never be offered for it.
 					const recipes = pgRow(pg).install.methods.filter((m) => takes(pg, m).includes(group));
 					expect(recipes.length, `${pg} recipes for ${group}`).toBeGreaterThan(0);
 				}
+			}
 		}
 	});
 
@@ -208,10 +211,11 @@ describe('install recipes: selectivity as data', () => {
 
 	it('every acetal and ketal recipe takes an aldehyde before a ketone — Greene’s 5th ed., ch. 4 (from memory)', () => {
 		for (const id of ['dioxolane', 'dioxane', 'dimethyl-acetal', 'dithiane']) {
-			for (const m of pgRow(id).install.methods)
+			for (const m of pgRow(id).install.methods) {
 				expect(m.prefers, id).toEqual([
 					expect.objectContaining({ group: 'aldehyde', over: ['ketone'] })
 				]);
+			}
 		}
 	});
 
@@ -223,17 +227,20 @@ describe('install recipes: selectivity as data', () => {
 				id
 			).toBe(false);
 		}
-		for (const group of ['alcohol-primary', 'alcohol-secondary', 'alcohol-tertiary'] as const)
+		for (const group of ['alcohol-primary', 'alcohol-secondary', 'alcohol-tertiary'] as const) {
 			expect(table.reactivityOf(group, 'acylating-amine', ['Boc2O'])).toBeUndefined();
+		}
 	});
 
 	it('names a source beside every recipe whose selectivity is data (`takes`, `prefers`)', () => {
-		for (const pg of table.protectingGroups)
+		for (const pg of table.protectingGroups) {
 			pg.install.methods.forEach((m) => {
 				const sources = [m.note ?? '', ...m.prefers.map((p) => p.reason)].join(' ');
-				if (m.takes || m.prefers.length)
+				if (m.takes || m.prefers.length) {
 					expect(sources, `${pg.id}: ${m.reagents[0]}`).toMatch(/from memory|common practice/);
+				}
 			});
+		}
 	});
 
 	it('offers each alternative a chemist uses where the usual recipe fails', () => {
@@ -299,28 +306,36 @@ describe('drawbacks and concerns', () => {
 		expect(kinds('dimethyl-acetal')).toEqual(['fragile']);
 		expect(kinds('Ac')).toEqual(['migrates']);
 		// MOMCl's carcinogen is the reagent's, not the MOM group's (the P2O5 route avoids it).
-		for (const id of ['MOM', 'BOM', 'SEM', 'MEM', 'TBS', 'dioxolane'])
+		for (const id of ['MOM', 'BOM', 'SEM', 'MEM', 'TBS', 'dioxolane']) {
 			expect(kinds(id)).toEqual([]);
+		}
 	});
 
 	it('HgCl2 carries toxic-metal, the chloromethyl ethers carcinogen, TMSCHN2 highly-toxic, diazomethane explosive, t-BuLi pyrophoric (GHS classes on the SDS)', () => {
 		expect(concernsOf('HgCl2')).toEqual(['toxic-metal']);
-		for (const name of ['MOMCl', 'BOMCl', 'MEMCl', 'SEMCl', 'MeI', 'Me2SO4', 'CrO3', 'benzene'])
+		for (const name of ['MOMCl', 'BOMCl', 'MEMCl', 'SEMCl', 'MeI', 'Me2SO4', 'CrO3', 'benzene']) {
 			expect(concernsOf(name), name).toContain('carcinogen');
-		for (const name of ['Hg(OAc)2', 'Na/Hg', 'Pb(OAc)4', 'Bu3SnH'])
+		}
+		for (const name of ['Hg(OAc)2', 'Na/Hg', 'Pb(OAc)4', 'Bu3SnH']) {
 			expect(concernsOf(name), name).toContain('toxic-metal');
-		for (const name of ['TMSCHN2', 'triphosgene', 'OsO4', 'TMSCN'])
+		}
+		for (const name of ['TMSCHN2', 'triphosgene', 'OsO4', 'TMSCN']) {
 			expect(concernsOf(name), name).toContain('highly-toxic');
+		}
 		expect(concernsOf('diazomethane')).toContain('explosive');
 		expect(concernsOf('t-BuLi')).toEqual(['pyrophoric']);
 		// Routine reagents carry none.
-		for (const name of ['TBSCl', 'imidazole', 'DHP', 'Boc2O', 'NaH', 'CSA'])
+		for (const name of ['TBSCl', 'imidazole', 'DHP', 'Boc2O', 'NaH', 'CSA']) {
 			expect(concernsOf(name), name).toEqual([]);
+		}
 	});
 
 	it('names the source of every concern beside it', () => {
-		for (const row of table.reagents.filter((r) => r.concerns))
-			for (const concern of row.concerns!) expect(row.source, row.name).toContain(`${concern}:`);
+		for (const row of table.reagents.filter((r) => r.concerns)) {
+			for (const concern of row.concerns!) {
+				expect(row.source, row.name).toContain(`${concern}:`);
+			}
+		}
 	});
 
 	it('the dithiane removal needs a reagent with a concern, the dioxolane’s does not', () => {

@@ -22,7 +22,7 @@ describe('remembered ratings', () => {
 		const rules = checkRulesFrom(table);
 		// Pd(0) inserts into Ar–Br/Ar–I, but PdCl2(PPh3)2/CuI at room temperature takes an aryl
 		// iodide well before a bromide (Chinchilla & Nájera, Chem. Rev. 2007, 107, 874 — from memory).
-		const byClass = rules.reactivity('aryl-halide-br-i', 'palladium-zero');
+		const byClass = rules.reactivity('aryl-halide-br-i', 'palladium-zero', []);
 		const byReagent = rules.reactivity('aryl-halide-br-i', 'palladium-zero', ['PdCl2(PPh3)2']);
 		expect(byClass?.rating).toBe('reacts');
 		expect(byReagent?.rating).toBe('caution');
@@ -33,7 +33,7 @@ describe('remembered ratings', () => {
 		const rules = checkRulesFrom(table);
 		// Greene's Protective Groups, 5th ed., ch. 4 (from memory).
 		expect(rules.stability('TBS', 'base-aqueous', [], 'aryl-oxygen').rating).toBe('labile');
-		expect(rules.stability('TBS', 'base-aqueous').rating).toBe('stable');
+		expect(rules.stability('TBS', 'base-aqueous', []).rating).toBe('stable');
 		expect(rules.stability('TBS', 'base-aqueous', [], 'aryl-oxygen').rating).toBe('labile');
 	});
 });

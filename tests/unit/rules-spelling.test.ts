@@ -85,7 +85,9 @@ describe('rule-table loader: formulas that differ only in case are two spellings
 		try {
 			parseRuleFiles(raw);
 		} catch (error) {
-			if (error instanceof RuleTableError) problems = error.problems;
+			if (error instanceof RuleTableError) {
+				problems = error.problems;
+			}
 		}
 		expect(problems.some((p) => p.includes('"CoCl2" is already a spelling of "CoCl2"'))).toBe(true);
 	});

@@ -49,10 +49,11 @@ describe('rule table: ids and coverage', () => {
 	it('rates every protecting group under every condition class (finer classes by inheritance where not rated)', () => {
 		for (const pg of table.protectingGroups) {
 			for (const condition of table.conditions) {
-				if (!condition.refines)
+				if (!condition.refines) {
 					expect(STABILITY_RATINGS, `${pg.id} × ${condition.id}`).toContain(
 						pg.stability[condition.id]
 					);
+				}
 				expect(STABILITY_RATINGS, `${pg.id} × ${condition.id}`).toContain(
 					table.ratingsOf(pg.id)[condition.id]
 				);
@@ -63,7 +64,9 @@ describe('rule table: ids and coverage', () => {
 	it('rates only known free groups, each pair once', () => {
 		const pairs = table.reactivity.map((r) => `${r.group}|${r.condition}`);
 		expect(new Set(pairs).size).toBe(pairs.length);
-		for (const entry of table.reactivity) expect(FREE_GROUP_IDS).toContain(entry.group);
+		for (const entry of table.reactivity) {
+			expect(FREE_GROUP_IDS).toContain(entry.group);
+		}
 	});
 
 	it('gives every free group at least one reactivity entry', () => {
@@ -102,8 +105,9 @@ describe('rule table: protecting groups come off the way their rows say', () => 
 					expect(read.unknown, reagents).toEqual([]);
 					// A listed class is read as itself or as a finer class inside it (n-BuLi and EtMgBr
 					// both bring `organometallic`; EtMgBr the finer `organometallic-grignard`).
-					for (const c of method.conditions)
+					for (const c of method.conditions) {
 						expect(readsAs(read.conditions, c), `${reagents}: ${c}`).toBe(true);
+					}
 				}
 				// A broader class that every recipe reads as one finer class should name that class.
 				for (const c of method.conditions) {
@@ -138,18 +142,22 @@ describe('rule table: reagents', () => {
 
 	it('maps every reagent to known condition classes, and every true reagent to at least one', () => {
 		for (const reagent of table.reagents) {
-			for (const c of reagent.conditions) expect(CONDITION_IDS).toContain(c);
-			if (reagent.kind === 'reagent')
+			for (const c of reagent.conditions) {
+				expect(CONDITION_IDS).toContain(c);
+			}
+			if (reagent.kind === 'reagent') {
 				expect(reagent.conditions.length, reagent.name).toBeGreaterThan(0);
+			}
 		}
 	});
 
 	it('ends every hazard note by deferring to the SDS and institutional safety rules', () => {
 		for (const reagent of table.reagents) {
-			if (reagent.hazard)
+			if (reagent.hazard) {
 				expect(reagent.hazard, reagent.name).toMatch(
 					/SDS and follow your institution’s safety rules/
 				);
+			}
 		}
 	});
 

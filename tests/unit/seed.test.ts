@@ -59,7 +59,9 @@ describe('demo scenario', () => {
 		).toBe('ketone');
 		expect(
 			planned.get('OG-2031 side chain — first sketch')!.plans[0]!.rationale.join(' ')
-		).toContain('acetonide not used for the 1,2-diol: putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane on the ketone');
+		).toContain(
+			'acetonide not used for the 1,2-diol: putting the acetonide on (2,2-dimethoxypropane, PPTS, acetone) would strip the dioxolane on the ketone'
+		);
 		// HATU acylates the amine, not the two alcohols (Montalbetti & Falque, Tetrahedron 2005, 61,
 		// 10827 — from memory): judged reagent by reagent, the coupling needs no protection.
 		expect(planned.get('OG-2044 amide coupling')!.plans[0]!).toMatchObject({

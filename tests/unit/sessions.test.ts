@@ -30,7 +30,9 @@ function accountPost(
 ): AccountEvent {
 	const url = new URL(`http://localhost/account?/${action}`);
 	const body = new FormData();
-	for (const [name, value] of Object.entries(fields)) body.set(name, value);
+	for (const [name, value] of Object.entries(fields)) {
+		body.set(name, value);
+	}
 	return {
 		url,
 		request: new Request(url, { method: 'POST', body }),
@@ -46,7 +48,9 @@ async function statusOf(run: () => unknown): Promise<number | 'ok'> {
 		await run();
 		return 'ok';
 	} catch (caught) {
-		if (isHttpError(caught)) return caught.status;
+		if (isHttpError(caught)) {
+			return caught.status;
+		}
 		throw caught;
 	}
 }

@@ -33,8 +33,9 @@ async function call(handler: unknown, body: unknown, params: Record<string, stri
 
 describe('control characters in text fields', () => {
 	it('refuses NUL and other C0 controls but keeps tabs and line breaks (molfiles need them)', () => {
-		for (const bad of ['a\u0000b', 'a\u0007', '\u001b[31m', 'x\u007f'])
+		for (const bad of ['a\u0000b', 'a\u0007', '\u001b[31m', 'x\u007f']) {
 			expect(text().safeParse(bad).success, JSON.stringify(bad)).toBe(false);
+		}
 		expect(text().safeParse('line one\r\n\tline two').success).toBe(true);
 	});
 
@@ -109,8 +110,9 @@ describe('form bodies on pages', () => {
 describe('id matchers', () => {
 	it('takes UUIDs and plan ranks only', () => {
 		expect(isUuid('7d3f1c2e-8a4b-4c6d-9e0f-112233445566')).toBe(true);
-		for (const bad of ['1', 'abc', "' or 1=1 --", '7d3f1c2e-8a4b-4c6d-9e0f-1122334455667'])
+		for (const bad of ['1', 'abc', "' or 1=1 --", '7d3f1c2e-8a4b-4c6d-9e0f-1122334455667']) {
 			expect(isUuid(bad)).toBe(false);
+		}
 		expect(['1', '2', '12'].map(isRank)).toEqual([true, true, true]);
 		expect(['0', 'first', '1e9', '-1', '01'].map(isRank)).toEqual([
 			false,
@@ -126,8 +128,12 @@ describe('id matchers', () => {
 		const walk = (dir: string) => {
 			for (const name of readdirSync(dir)) {
 				const path = join(dir, name);
-				if (!statSync(path).isDirectory()) continue;
-				if (/^\[\w+Id\]$/.test(name)) unguarded.push(path);
+				if (!statSync(path).isDirectory()) {
+					continue;
+				}
+				if (/^\[\w+Id\]$/.test(name)) {
+					unguarded.push(path);
+				}
 				walk(path);
 			}
 		};

@@ -19,7 +19,9 @@ describe('WriteQueue', () => {
 				await wait(5);
 				log.push(name);
 				running--;
-				if (fail) throw new Error(name);
+				if (fail) {
+					throw new Error(name);
+				}
 				return name;
 			};
 		const results = await Promise.allSettled([

@@ -41,7 +41,9 @@ export function analyzeStructure(text: string, options: AnalyzeOptions = {}): An
 			masks
 		}))
 	};
-	if (!options.depict) return analysis;
+	if (!options.depict) {
+		return analysis;
+	}
 	const heavyAtoms = countHeavyAtoms(molecule);
 	if (heavyAtoms > STRUCTURE_LIMITS.maxDrawingHeavyAtoms) {
 		analysis.drawingSkipped = `No drawing: the structure has ${heavyAtoms} heavy atoms, and drawings are made for up to ${STRUCTURE_LIMITS.maxDrawingHeavyAtoms}. The analysis above is complete.`;
@@ -53,7 +55,10 @@ export function analyzeStructure(text: string, options: AnalyzeOptions = {}): An
 
 function countHeavyAtoms(molecule: ReturnType<typeof readStructure>['molecule']): number {
 	let heavy = 0;
-	for (let atom = 0; atom < molecule.getAllAtoms(); atom++)
-		if (molecule.getAtomicNo(atom) !== 1) heavy += 1;
+	for (let atom = 0; atom < molecule.getAllAtoms(); atom++) {
+		if (molecule.getAtomicNo(atom) !== 1) {
+			heavy += 1;
+		}
+	}
 	return heavy;
 }

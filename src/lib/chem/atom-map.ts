@@ -18,13 +18,21 @@ export function mapAtoms(substrate: Molecule, product: Molecule): AtomMap | null
 	const taken = new Set<number>();
 	for (const { piece, toSubstrate } of fragmentsOf(substrate)) {
 		const common = commonStructure(piece, product);
-		if (!common) continue;
+		if (!common) {
+			continue;
+		}
 		const inPiece = matches(common, piece, 'firstMatch')[0];
-		const inProduct = matches(common, product, 'overlapping').find((m) => m.every((a) => a < 0 || !taken.has(a)));
-		if (!inPiece || !inProduct) continue;
+		const inProduct = matches(common, product, 'overlapping').find((m) =>
+			m.every((a) => a < 0 || !taken.has(a))
+		);
+		if (!inPiece || !inProduct) {
+			continue;
+		}
 		inPiece.forEach((pieceAtom, i) => {
 			const productAtom = inProduct[i]!;
-			if (pieceAtom < 0 || productAtom < 0) return;
+			if (pieceAtom < 0 || productAtom < 0) {
+				return;
+			}
 			map.set(toSubstrate[pieceAtom]!, productAtom);
 			taken.add(productAtom);
 		});
@@ -37,14 +45,23 @@ function fragmentsOf(molecule: Molecule): { piece: Molecule; toSubstrate: number
 	const atoms = molecule.getAllAtoms();
 	const fragmentNo = new Array<number>(atoms).fill(0);
 	const count = molecule.getFragmentNumbers(fragmentNo, false, false);
-	if (count <= 1) return [{ piece: molecule, toSubstrate: Array.from({ length: atoms }, (_, i) => i) }];
+	if (count <= 1) {
+		return [{ piece: molecule, toSubstrate: Array.from({ length: atoms }, (_, i) => i) }];
+	}
 	return Array.from({ length: count }, (_, f) => {
 		const piece = new Molecule(0, 0);
 		const atomMap = new Array<number>(atoms).fill(-1);
-		molecule.copyMoleculeByAtoms(piece, fragmentNo.map((n) => n === f), true, atomMap);
+		molecule.copyMoleculeByAtoms(
+			piece,
+			fragmentNo.map((n) => n === f),
+			true,
+			atomMap
+		);
 		const toSubstrate: number[] = [];
 		atomMap.forEach((pieceAtom, atom) => {
-			if (pieceAtom >= 0) toSubstrate[pieceAtom] = atom;
+			if (pieceAtom >= 0) {
+				toSubstrate[pieceAtom] = atom;
+			}
 		});
 		piece.ensureHelperArrays(Molecule.cHelperRings);
 		return { piece, toSubstrate };
@@ -54,17 +71,28 @@ function fragmentsOf(molecule: Molecule): { piece: Molecule; toSubstrate: number
 function commonStructure(a: Molecule, b: Molecule): Molecule | null {
 	const mcs = new MCS();
 	// MCS wants the molecule with more bonds first.
-	if (a.getAllBonds() >= b.getAllBonds()) mcs.set(a, b);
-	else mcs.set(b, a);
+	if (a.getAllBonds() >= b.getAllBonds()) {
+		mcs.set(a, b);
+	} else {
+		mcs.set(b, a);
+	}
 	const common = mcs.getMCS();
-	if (!common || common.getAllAtoms() === 0) return null;
+	if (!common || common.getAllAtoms() === 0) {
+		return null;
+	}
 	common.setFragment(true);
 	return common;
 }
 
-function matches(fragment: Molecule, target: Molecule, countMode: 'firstMatch' | 'overlapping'): number[][] {
+function matches(
+	fragment: Molecule,
+	target: Molecule,
+	countMode: 'firstMatch' | 'overlapping'
+): number[][] {
 	const searcher = new SSSearcher();
 	searcher.setMol(fragment, target);
-	if (searcher.findFragmentInMolecule({ countMode }) === 0) return [];
+	if (searcher.findFragmentInMolecule({ countMode }) === 0) {
+		return [];
+	}
 	return searcher.getMatchList();
 }

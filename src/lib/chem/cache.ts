@@ -63,7 +63,9 @@ export class LruCache<V extends NonNullable<unknown>> {
 	getOrSet(key: string, make: () => V): V {
 		const digest = digestKey(key);
 		const stored = this.#entries.get(digest);
-		if (stored !== undefined) return stored;
+		if (stored !== undefined) {
+			return stored;
+		}
 		const fresh = make();
 		this.#entries.set(digest, fresh);
 		return fresh;

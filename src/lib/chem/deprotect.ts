@@ -10,7 +10,12 @@ export type Restore = 'hydrogen' | 'carbonyl';
  * atom gets a double-bonded oxygen back, e.g. a dioxolane ketal becomes the ketone.
  * `atomMap[old]` is the atom's new index (-1 when deleted).
  */
-export function withoutProtectingGroup(molecule: Molecule, leaving: number[], masked: number[], restore: Restore) {
+export function withoutProtectingGroup(
+	molecule: Molecule,
+	leaving: number[],
+	masked: number[],
+	restore: Restore
+) {
 	const freed = molecule.getCompactCopy();
 	const atomMap = freed.deleteAtoms(leaving);
 	if (restore === 'carbonyl') {

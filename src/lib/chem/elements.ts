@@ -60,7 +60,9 @@ export function isHydrogenSymbol(symbol: string): boolean {
  */
 export function isPlausibleMassNumber(atomicNo: number, massNumber: number): boolean {
 	const usual = Molecule.cRoundedMass[atomicNo];
-	if (!usual) return true;
+	if (!usual) {
+		return true;
+	}
 	return (
 		massNumber >= atomicNo && Math.abs(massNumber - usual) <= Math.max(4, Math.round(usual * 0.3))
 	);

@@ -39,10 +39,18 @@ export class StructureError extends Error {
 		super(message);
 		this.name = 'StructureError';
 		this.code = code;
-		if (where.position !== undefined) this.position = where.position;
-		if (where.atom !== undefined) this.atom = where.atom;
-		if (where.record !== undefined) this.record = where.record;
-		if (where.limit !== undefined) this.limit = where.limit;
+		if (where.position !== undefined) {
+			this.position = where.position;
+		}
+		if (where.atom !== undefined) {
+			this.atom = where.atom;
+		}
+		if (where.record !== undefined) {
+			this.record = where.record;
+		}
+		if (where.limit !== undefined) {
+			this.limit = where.limit;
+		}
 	}
 }
 

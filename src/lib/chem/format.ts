@@ -14,11 +14,12 @@ const RECORD_END = /^\$\$\$\$\s*$/m;
 
 /** Guesses the format from the text, e.g. `detectFormat('CCO')` → `'smiles'`; throws StructureError when nothing fits. */
 export function detectFormat(text: string): StructureFormat {
-	if (text.trim() === '')
+	if (text.trim() === '') {
 		throw new StructureError(
 			'empty',
 			'The structure is empty: paste a SMILES string, a molfile or an SDF record.'
 		);
+	}
 	if (isOverByteLimit(text)) {
 		throw new StructureError(
 			'too_large',
@@ -29,12 +30,20 @@ export function detectFormat(text: string): StructureFormat {
 		);
 	}
 	const hasMolEnd = /^M {2}END\s*$/m.test(text);
-	if (hasMolEnd && (RECORD_END.test(text) || SDF_DATA_HEADER.test(text))) return 'sdf';
-	if (/V3000/.test(text) && /M {2}V30 BEGIN CTAB/.test(text)) return 'molfile-v3000';
-	if (/^.{33,39}V2000\s*$/m.test(text)) return 'molfile-v2000';
+	if (hasMolEnd && (RECORD_END.test(text) || SDF_DATA_HEADER.test(text))) {
+		return 'sdf';
+	}
+	if (/V3000/.test(text) && /M {2}V30 BEGIN CTAB/.test(text)) {
+		return 'molfile-v3000';
+	}
+	if (/^.{33,39}V2000\s*$/m.test(text)) {
+		return 'molfile-v2000';
+	}
 	const lines = text.trim().split(/\r?\n/);
 	// A SMILES is one line; a title after whitespace is allowed by the SMILES convention.
-	if (lines.length === 1) return 'smiles';
+	if (lines.length === 1) {
+		return 'smiles';
+	}
 	if (hasMolEnd || /V2000|V3000/.test(text)) {
 		throw new StructureError(
 			'molfile_syntax',
@@ -50,7 +59,11 @@ export function detectFormat(text: string): StructureFormat {
 /** Whether the UTF-8 form of the text exceeds the limit, without Node's Buffer (the core also runs in a browser). */
 function isOverByteLimit(text: string): boolean {
 	// A UTF-16 unit is 1 to 3 UTF-8 bytes: only encode when the length alone cannot decide.
-	if (text.length > MAX_STRUCTURE_BYTES) return true;
-	if (text.length * 3 <= MAX_STRUCTURE_BYTES) return false;
+	if (text.length > MAX_STRUCTURE_BYTES) {
+		return true;
+	}
+	if (text.length * 3 <= MAX_STRUCTURE_BYTES) {
+		return false;
+	}
 	return new TextEncoder().encode(text).length > MAX_STRUCTURE_BYTES;
 }

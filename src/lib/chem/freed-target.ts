@@ -77,12 +77,16 @@ export function derivedTable(
 	const count = parent.element.length;
 	const gone = new Uint8Array(count);
 	for (const atom of leaving) {
-		if (parent.odd[atom]) return null;
+		if (parent.odd[atom]) {
+			return null;
+		}
 		gone[atom] = 1;
 	}
 	const atomMap = new Array<number>(count);
 	let kept = 0;
-	for (let atom = 0; atom < count; atom++) atomMap[atom] = gone[atom] ? -1 : kept++;
+	for (let atom = 0; atom < count; atom++) {
+		atomMap[atom] = gone[atom] ? -1 : kept++;
+	}
 	const carbonyl = restore === 'carbonyl' ? masked[0]! : -1;
 	let ringCut = false;
 	const size = kept + (carbonyl >= 0 ? 1 : 0);
@@ -98,7 +102,9 @@ export function derivedTable(
 		plain: true
 	};
 	for (let atom = 0; atom < count; atom++) {
-		if (gone[atom]) continue;
+		if (gone[atom]) {
+			continue;
+		}
 		const to = atomMap[atom]!;
 		const neighbours: number[] = [];
 		const bonds: number[] = [];
@@ -110,22 +116,33 @@ export function derivedTable(
 			if (!gone[other]) {
 				neighbours.push(atomMap[other]!);
 				bonds.push(bits);
-			} else if (bits & AROMATIC)
-				lost = -Infinity; // a ring cut open: aromaticity may change
+			} else if (bits & AROMATIC) {
+				lost = -Infinity;
+			} // a ring cut open: aromaticity may change
 			else {
 				lost += bondOrder(bits);
-				if (parent.ringSize[atom]! > 0 && parent.ringSize[other]! > 0) ringCut = true;
+				if (parent.ringSize[atom]! > 0 && parent.ringSize[other]! > 0) {
+					ringCut = true;
+				}
 			}
 		});
-		if (lost < 0 || (lost > 0 && parent.odd[atom])) return null;
+		if (lost < 0 || (lost > 0 && parent.odd[atom])) {
+			return null;
+		}
 		let hydrogens = parent.hydrogens[atom]!;
 		if (lost > 0) {
-			if (USUAL_VALENCE[parent.element[atom]!] !== valence) return null;
+			if (USUAL_VALENCE[parent.element[atom]!] !== valence) {
+				return null;
+			}
 			if (atom === carbonyl) {
-				if (lost !== 2) return null;
+				if (lost !== 2) {
+					return null;
+				}
 				neighbours.push(size - 1);
 				bonds.push(DOUBLE);
-			} else hydrogens += lost;
+			} else {
+				hydrogens += lost;
+			}
 		}
 		table.element[to] = parent.element[atom]!;
 		table.aromatic[to] = parent.aromatic[atom]!;
@@ -138,16 +155,22 @@ export function derivedTable(
 	}
 	table.plain = !table.odd.includes(1);
 	if (carbonyl >= 0) {
-		if (gone[carbonyl]) return null;
+		if (gone[carbonyl]) {
+			return null;
+		}
 		table.element[size - 1] = 8;
 		table.neighbours.push([atomMap[carbonyl]!]);
 		table.bonds.push([DOUBLE]);
 	}
 	if (ringCut) {
 		for (let atom = 0; atom < size; atom++) {
-			if (table.ringSize[atom] === 0) continue;
+			if (table.ringSize[atom] === 0) {
+				continue;
+			}
 			const ring = smallestRing(table, atom);
-			if (ring > MAX_SMALL_RING) return null;
+			if (ring > MAX_SMALL_RING) {
+				return null;
+			}
 			table.ringSize[atom] = ring;
 		}
 	}
@@ -170,14 +193,17 @@ function smallestRing(table: AtomTable, start: number): number {
 	let smallest = Infinity;
 	for (let head = 0; head < queue.length; head++) {
 		const atom = queue[head]!;
-		if (2 * distance[atom]! + 1 >= smallest) break;
+		if (2 * distance[atom]! + 1 >= smallest) {
+			break;
+		}
 		for (const other of table.neighbours[atom]!) {
 			if (distance[other] === -1) {
 				distance[other] = distance[atom]! + 1;
 				branch[other] = atom === start ? other : branch[atom]!;
 				queue.push(other);
-			} else if (other !== start && atom !== start && branch[other] !== branch[atom])
+			} else if (other !== start && atom !== start && branch[other] !== branch[atom]) {
 				smallest = Math.min(smallest, distance[atom]! + distance[other]! + 1);
+			}
 		}
 	}
 	return smallest === Infinity ? 0 : smallest;
@@ -192,23 +218,37 @@ function tableFeatures(
 	parentFeatures: ReadonlySet<string | number>
 ): Set<string | number> {
 	const features = new Set<string | number>();
-	if (parentFeatures.has('ring-3')) features.add('ring-3');
+	if (parentFeatures.has('ring-3')) {
+		features.add('ring-3');
+	}
 	for (let atom = 0; atom < table.element.length; atom++) {
 		const element = table.element[atom]!;
 		features.add(element);
 		if (table.hydrogens[atom]! > 0) {
-			if (element === 8) features.add('O-H');
-			else if (element === 7) features.add('N-H');
-			else if (element === 16) features.add('S-H');
+			if (element === 8) {
+				features.add('O-H');
+			} else if (element === 7) {
+				features.add('N-H');
+			} else if (element === 16) {
+				features.add('S-H');
+			}
 		}
 		table.neighbours[atom]!.forEach((other, i) => {
 			const bits = table.bonds[atom]![i]!;
-			if (bits & TRIPLE) features.add('triple');
-			if (!(bits & DOUBLE) || bits & AROMATIC) return;
+			if (bits & TRIPLE) {
+				features.add('triple');
+			}
+			if (!(bits & DOUBLE) || bits & AROMATIC) {
+				return;
+			}
 			const pair = element * 100 + table.element[other]!;
-			if (pair === 608 || pair === 806) features.add('C=O');
-			else if (pair === 606) features.add('C=C');
-			else if (pair === 607 || pair === 706) features.add('C=N');
+			if (pair === 608 || pair === 806) {
+				features.add('C=O');
+			} else if (pair === 606) {
+				features.add('C=C');
+			} else if (pair === 607 || pair === 706) {
+				features.add('C=N');
+			}
 		});
 	}
 	return features;

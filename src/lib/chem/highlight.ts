@@ -18,7 +18,9 @@ export function highlightAtoms(spec: string, perception: Perception, atomCount: 
 	}
 	for (const [alias, ids] of Object.entries(FREE_GROUP_ALIASES)) {
 		const sets = ids.flatMap((id) => byId.get(id) ?? []);
-		if (sets.length > 0) byId.set(alias, sets);
+		if (sets.length > 0) {
+			byId.set(alias, sets);
+		}
 	}
 	const knownIds = [...byId.keys()].sort((a, b) => b.length - a.length);
 	let rest = spec.trim();
@@ -27,7 +29,9 @@ export function highlightAtoms(spec: string, perception: Perception, atomCount: 
 		let item: string;
 		if (id) {
 			item = id;
-			for (const set of byId.get(id)!) set.forEach((atom) => atoms.add(atom));
+			for (const set of byId.get(id)!) {
+				set.forEach((atom) => atoms.add(atom));
+			}
 		} else {
 			item = rest.split(',')[0]!.trim();
 			if (!/^\d+$/.test(item) || Number(item) >= atomCount) {

@@ -16,7 +16,16 @@ import { compareMappings, distinctMatches, firstPerAtomSet, matchedAtoms } from 
 export { matchedAtoms };
 
 /** Features a rule row may list under `needs` (group ids may be listed too). */
-export const MOLECULE_FEATURES = ['O-H', 'N-H', 'S-H', 'C=O', 'C=C', 'C=N', 'triple', 'ring-3'] as const;
+export const MOLECULE_FEATURES = [
+	'O-H',
+	'N-H',
+	'S-H',
+	'C=O',
+	'C=C',
+	'C=N',
+	'triple',
+	'ring-3'
+] as const;
 
 /** One molecule prepared for many searches: its searcher and the features it has. */
 export type SearchTarget = {
@@ -32,27 +41,47 @@ export type SearchTarget = {
 };
 
 /** Prepares a molecule for repeated pattern searches, e.g. `searchTarget(Molecule.fromSmiles('CCO'))`. */
-export function searchTarget(molecule: Molecule, options: { exhaustive?: boolean } = {}): SearchTarget {
+export function searchTarget(
+	molecule: Molecule,
+	options: { exhaustive?: boolean } = {}
+): SearchTarget {
 	molecule.ensureHelperArrays(Molecule.cHelperRings);
 	const features = new Set<string | number>();
 	for (let atom = 0; atom < molecule.getAllAtoms(); atom++) {
 		const element = molecule.getAtomicNo(atom);
 		features.add(element);
 		if (molecule.getAllHydrogens(atom) > 0) {
-			if (element === 8) features.add('O-H');
-			else if (element === 7) features.add('N-H');
-			else if (element === 16) features.add('S-H');
+			if (element === 8) {
+				features.add('O-H');
+			} else if (element === 7) {
+				features.add('N-H');
+			} else if (element === 16) {
+				features.add('S-H');
+			}
 		}
-		if (molecule.getAtomRingSize(atom) === 3) features.add('ring-3');
+		if (molecule.getAtomRingSize(atom) === 3) {
+			features.add('ring-3');
+		}
 	}
 	for (let bond = 0; bond < molecule.getAllBonds(); bond++) {
 		const order = molecule.getBondOrder(bond);
-		if (order === 3) features.add('triple');
-		if (order !== 2 || molecule.isAromaticBond(bond)) continue;
-		const pair = [molecule.getAtomicNo(molecule.getBondAtom(0, bond)), molecule.getAtomicNo(molecule.getBondAtom(1, bond))].sort();
-		if (pair[0] === 6 && pair[1] === 8) features.add('C=O');
-		else if (pair[0] === 6 && pair[1] === 6) features.add('C=C');
-		else if (pair[0] === 6 && pair[1] === 7) features.add('C=N');
+		if (order === 3) {
+			features.add('triple');
+		}
+		if (order !== 2 || molecule.isAromaticBond(bond)) {
+			continue;
+		}
+		const pair = [
+			molecule.getAtomicNo(molecule.getBondAtom(0, bond)),
+			molecule.getAtomicNo(molecule.getBondAtom(1, bond))
+		].sort();
+		if (pair[0] === 6 && pair[1] === 8) {
+			features.add('C=O');
+		} else if (pair[0] === 6 && pair[1] === 6) {
+			features.add('C=C');
+		} else if (pair[0] === 6 && pair[1] === 7) {
+			features.add('C=N');
+		}
 	}
 	let searcher: SSSearcher | null = null;
 	return {
@@ -82,16 +111,26 @@ export function hasFeatures(target: SearchTarget, needs: readonly (string | numb
  * exactly the same atoms count once (the first mapping in that order), as RDKit's uniquify does.
  */
 export function findMatches(target: SearchTarget, pattern: CompiledPattern): number[][] {
-	if (!hasFeatures(target, pattern.requiredElements)) return [];
+	if (!hasFeatures(target, pattern.requiredElements)) {
+		return [];
+	}
 	const exact = pattern.exact && distinctMatches(target.table, pattern.exact);
-	if (exact) return exact;
-	if (!target.exhaustive && pattern.loose && !mayMatch(target.table, pattern.loose)) return [];
+	if (exact) {
+		return exact;
+	}
+	if (!target.exhaustive && pattern.loose && !mayMatch(target.table, pattern.loose)) {
+		return [];
+	}
 	target.searcher.setFragment(pattern.fragment);
 	// 'rigorous' lists every mapping, symmetric ones too: 2–5× cheaper than 'overlapping' on a
 	// TBS pattern (12 mappings per TBS ether), and sorting gives the same order as the TS path.
-	if (target.searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) return [];
+	if (target.searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) {
+		return [];
+	}
 	const mappings = target.searcher.getMatchList();
 	// An exact pattern's roles count in SMARTS order: drop the placeholders of `!$()` atoms.
-	const ordered = pattern.exact ? mappings.map((mapping) => mapping.filter((atom) => atom >= 0)) : mappings;
+	const ordered = pattern.exact
+		? mappings.map((mapping) => mapping.filter((atom) => atom >= 0))
+		: mappings;
 	return firstPerAtomSet(ordered.sort(compareMappings));
 }

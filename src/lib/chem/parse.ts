@@ -40,13 +40,17 @@ export function readStructure(text: string, options: ReadOptions = {}): ParsedSt
 		const first = splitSdf(text)[0]!;
 		return { ...readMolfile(first.molfile, 'sdf', 1, options), fields: first.fields };
 	}
-	if (format === 'smiles') return readSmiles(text, options);
+	if (format === 'smiles') {
+		return readSmiles(text, options);
+	}
 	return readMolfile(text, format, undefined, options);
 }
 
 /** Reads every record of an SDF (or the single structure of any other text), e.g. `readStructures(sdfText).length` → 3. */
 export function readStructures(text: string, options: ReadOptions = {}): ParsedStructure[] {
-	if (detectFormat(text) !== 'sdf') return [readStructure(text, options)];
+	if (detectFormat(text) !== 'sdf') {
+		return [readStructure(text, options)];
+	}
 	return splitSdf(text).map((record, index) => ({
 		...readMolfile(record.molfile, 'sdf', index + 1, options),
 		fields: record.fields
@@ -68,7 +72,9 @@ function readSmiles(text: string, options: ReadOptions): ParsedStructure {
 	} catch (caught) {
 		throw smilesError(caught, offset);
 	}
-	if (molecule.getAllAtoms() === 0) throw new StructureError('empty', 'The SMILES holds no atoms.');
+	if (molecule.getAllAtoms() === 0) {
+		throw new StructureError('empty', 'The SMILES holds no atoms.');
+	}
 	const tokens = smilesAtoms(smiles);
 	const warnings = validateMolecule(molecule, {
 		describeAtom: (atom) => {
@@ -98,14 +104,22 @@ function checkSmilesLexically(smiles: string, offset: number): void {
 	const open: number[] = [];
 	for (let i = 0; i < smiles.length; i++) {
 		const ch = smiles[i]!;
-		if (!/[A-Za-z0-9@+\-[\]()=#$:/\\.%*~]/.test(ch))
+		if (!/[A-Za-z0-9@+\-[\]()=#$:/\\.%*~]/.test(ch)) {
 			throw at(i, `unexpected character ${JSON.stringify(ch)}`);
-		if (ch === '%' && !/^%\d\d/.test(smiles.slice(i)))
+		}
+		if (ch === '%' && !/^%\d\d/.test(smiles.slice(i))) {
 			throw at(i, 'a "%" ring bond needs two digits');
-		if (ch === '(') open.push(i);
-		if (ch === ')' && open.pop() === undefined) throw at(i, 'a ")" without its "("');
+		}
+		if (ch === '(') {
+			open.push(i);
+		}
+		if (ch === ')' && open.pop() === undefined) {
+			throw at(i, 'a ")" without its "("');
+		}
 	}
-	if (open.length > 0) throw at(open[0]!, 'a "(" that is never closed');
+	if (open.length > 0) {
+		throw at(open[0]!, 'a "(" that is never closed');
+	}
 }
 
 function smilesError(caught: unknown, offset: number): StructureError {
@@ -141,8 +155,9 @@ function readMolfile(
 			{ record }
 		);
 	}
-	if (declared === 0)
+	if (declared === 0) {
 		throw new StructureError('empty', `The molfile holds no atoms${inRecord}.`, { record });
+	}
 	// Declared and actual counts before openchemlib, which allocates whatever the counts line says.
 	molfileSize(text, { record });
 	let molecule: Molecule;
@@ -176,9 +191,13 @@ function readMolfile(
 function declaredAtomCount(text: string): number | null {
 	const lines = text.replace(/\r\n?/g, '\n').split('\n');
 	const v3000 = /^M {2}V30 COUNTS\s+(\d+)\s+(\d+)/m.exec(text);
-	if (v3000) return Number(v3000[1]);
+	if (v3000) {
+		return Number(v3000[1]);
+	}
 	const counts = lines[3];
-	if (counts === undefined || !/V2000\s*$/.test(counts)) return null;
+	if (counts === undefined || !/V2000\s*$/.test(counts)) {
+		return null;
+	}
 	const atoms = Number(counts.slice(0, 3));
 	return Number.isInteger(atoms) && counts.slice(0, 3).trim() !== '' ? atoms : null;
 }

@@ -100,7 +100,9 @@ export type PerceptionRules = {
 
 export class RuleTableError extends Error {
 	constructor(file: string, path: (string | number)[], reason: string) {
-		super(`${file}${path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${p}`)).join('')}: ${reason}`);
+		super(
+			`${file}${path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${p}`)).join('')}: ${reason}`
+		);
 		this.name = 'RuleTableError';
 	}
 }
@@ -108,20 +110,33 @@ export class RuleTableError extends Error {
 const smartsParser = new SmilesParser({ smartsMode: 'smarts' });
 
 /** Compiles one SMARTS for openchemlib, e.g. `compilePattern('[OX2H;A:1]c', 'groups.json', ['phenol'])`. */
-export function compilePattern(smarts: string, file: string, path: (string | number)[]): CompiledPattern {
+export function compilePattern(
+	smarts: string,
+	file: string,
+	path: (string | number)[]
+): CompiledPattern {
 	let fragment: Molecule;
 	try {
 		fragment = smartsParser.parseMolecule(smarts, { noCoordinates: true });
 	} catch (caught) {
-		throw new RuleTableError(file, path, `openchemlib cannot read the SMARTS ${smarts}: ${String(caught)}`);
+		throw new RuleTableError(
+			file,
+			path,
+			`openchemlib cannot read the SMARTS ${smarts}: ${String(caught)}`
+		);
 	}
 	fragment.setFragment(true);
-	const fragmentMapNumbers = Array.from({ length: fragment.getAllAtoms() }, (_, atom) => fragment.getAtomMapNo(atom));
+	const fragmentMapNumbers = Array.from({ length: fragment.getAllAtoms() }, (_, atom) =>
+		fragment.getAtomMapNo(atom)
+	);
 	const fragmentRoles = roles(fragmentMapNumbers);
 	const exact = exactQuery(smarts);
 	// Both readings must see the same roles; if not, openchemlib's reading is the one used.
 	const exactRoles = exact && roles(exact.mapNumbers);
-	const agree = exactRoles && exactRoles.masked.length === fragmentRoles.masked.length && exactRoles.context.length === fragmentRoles.context.length;
+	const agree =
+		exactRoles &&
+		exactRoles.masked.length === fragmentRoles.masked.length &&
+		exactRoles.context.length === fragmentRoles.context.length;
 	const used = agree ? exactRoles : fragmentRoles;
 	return {
 		smarts,
@@ -138,15 +153,20 @@ function roles(mapNumbers: number[]): { key: number; masked: number[]; context: 
 	const masked: number[] = [];
 	const context: number[] = [];
 	mapNumbers.forEach((map, atom) => {
-		if (map === 1) masked.push(atom);
-		else if (map === 2) context.push(atom);
+		if (map === 1) {
+			masked.push(atom);
+		} else if (map === 2) {
+			context.push(atom);
+		}
 	});
 	return { key: masked[0] ?? 0, masked, context };
 }
 
 /** The element of a pattern's key atom (null: not one element), whichever reading it was compiled with. */
 export function keyElement(pattern: CompiledPattern): number | null {
-	if (!pattern.exact) return pattern.fragment.getAtomicNo(pattern.key);
+	if (!pattern.exact) {
+		return pattern.fragment.getAtomicNo(pattern.key);
+	}
 	const elements = queryElements(pattern.exact)[pattern.key];
 	return elements?.length === 1 ? elements[0]! : null;
 }
@@ -158,11 +178,17 @@ function requiredElements(smarts: string, file: string, path: (string | number)[
 	const elements = new Set<number>();
 	for (let atom = 0; atom < fragment.getAllAtoms(); atom++) {
 		const list = fragment.getAtomList(atom);
-		if (list && list.length > 0) continue;
-		if (fragment.getAtomLabel(atom) === '') continue; // 'any atom' style queries
+		if (list && list.length > 0) {
+			continue;
+		}
+		if (fragment.getAtomLabel(atom) === '') {
+			continue;
+		} // 'any atom' style queries
 		elements.add(fragment.getAtomicNo(atom));
 	}
-	if (elements.size === 0) throw new RuleTableError(file, path, `the SMARTS ${smarts} names no element`);
+	if (elements.size === 0) {
+		throw new RuleTableError(file, path, `the SMARTS ${smarts} names no element`);
+	}
 	return [...elements];
 }
 
@@ -173,8 +199,11 @@ function stripRecursive(smarts: string): string {
 			let depth = 0;
 			let j = i + 1;
 			for (; j < smarts.length; j++) {
-				if (smarts[j] === '(') depth++;
-				else if (smarts[j] === ')' && --depth === 0) break;
+				if (smarts[j] === '(') {
+					depth++;
+				} else if (smarts[j] === ')' && --depth === 0) {
+					break;
+				}
 			}
 			// Drop the primitive and the operator that joined it (`;!$(...)` or `&$(...)`).
 			out = out.replace(/[;&,]?!?$/, '');
@@ -189,29 +218,58 @@ function stripRecursive(smarts: string): string {
 /** Validates and compiles raw rule rows, e.g. `compileRules(groupsJson, protectingGroupsJson)`; throws RuleTableError naming file, path and reason. */
 export function compileRules(rawGroups: unknown, rawProtectingGroups: unknown): PerceptionRules {
 	const groups = parseRows(z.array(groupPatternSchema), rawGroups, 'rules/groups.json');
-	const protectingGroups = parseRows(z.array(protectingGroupPatternSchema), rawProtectingGroups, 'rules/protecting-groups.json');
+	const protectingGroups = parseRows(
+		z.array(protectingGroupPatternSchema),
+		rawProtectingGroups,
+		'rules/protecting-groups.json'
+	);
 	const groupsById = new Map<string, CompiledGroup>();
 	const compiledGroups = groups.map((group, index) => {
-		if (groupsById.has(group.id)) throw new RuleTableError('rules/groups.json', [index, 'id'], `duplicate id ${group.id}`);
+		if (groupsById.has(group.id)) {
+			throw new RuleTableError('rules/groups.json', [index, 'id'], `duplicate id ${group.id}`);
+		}
 		checkNeeds(group.needs, [], 'rules/groups.json', index);
-		const compiled = { ...group, compiled: compilePattern(group.pattern ?? group.smarts, 'rules/groups.json', [index, 'pattern']) };
+		const compiled = {
+			...group,
+			compiled: compilePattern(group.pattern ?? group.smarts, 'rules/groups.json', [
+				index,
+				'pattern'
+			])
+		};
 		groupsById.set(group.id, compiled);
 		return compiled;
 	});
 	const seen = new Set<string>();
 	const compiledPgs = protectingGroups.map((pg, index) => {
 		const file = 'rules/protecting-groups.json';
-		if (seen.has(pg.id)) throw new RuleTableError(file, [index, 'id'], `duplicate id ${pg.id}`);
+		if (seen.has(pg.id)) {
+			throw new RuleTableError(file, [index, 'id'], `duplicate id ${pg.id}`);
+		}
 		seen.add(pg.id);
-		for (const [i, id] of [...pg.protects, ...(pg.fallbackMasks ? [pg.fallbackMasks] : [])].entries()) {
-			if (!groupsById.has(id)) throw new RuleTableError(file, [index, 'protects', i], `${id} is not a group in rules/groups.json`);
+		for (const [i, id] of [
+			...pg.protects,
+			...(pg.fallbackMasks ? [pg.fallbackMasks] : [])
+		].entries()) {
+			if (!groupsById.has(id)) {
+				throw new RuleTableError(
+					file,
+					[index, 'protects', i],
+					`${id} is not a group in rules/groups.json`
+				);
+			}
 		}
 		checkNeeds(pg.needs, [...groupsById.keys()], file, index);
 		const compiled = pg.patterns.map((smarts, p) => {
 			const pattern = compilePattern(smarts, file, [index, 'patterns', p]);
-			if (pattern.masked.length === 0) throw new RuleTableError(file, [index, 'patterns', p], 'no atom is marked :1 (masked)');
+			if (pattern.masked.length === 0) {
+				throw new RuleTableError(file, [index, 'patterns', p], 'no atom is marked :1 (masked)');
+			}
 			if (pg.restore === 'carbonyl' && keyElement(pattern) !== 6) {
-				throw new RuleTableError(file, [index, 'patterns', p], 'restore "carbonyl" needs the first :1 atom to be the acetal carbon');
+				throw new RuleTableError(
+					file,
+					[index, 'patterns', p],
+					'restore "carbonyl" needs the first :1 atom to be the acetal carbon'
+				);
 			}
 			return pattern;
 		});
@@ -223,7 +281,11 @@ export function compileRules(rawGroups: unknown, rawProtectingGroups: unknown): 
 function checkNeeds(needs: string[], groupIds: string[], file: string, index: number) {
 	needs.forEach((need, i) => {
 		if (!(MOLECULE_FEATURES as readonly string[]).includes(need) && !groupIds.includes(need)) {
-			throw new RuleTableError(file, [index, 'needs', i], `${need} is neither a molecule feature (${MOLECULE_FEATURES.join(', ')}) nor a group id`);
+			throw new RuleTableError(
+				file,
+				[index, 'needs', i],
+				`${need} is neither a molecule feature (${MOLECULE_FEATURES.join(', ')}) nor a group id`
+			);
 		}
 	});
 }

@@ -18,7 +18,9 @@ const byText = new LruCache<Perception>('perceptionByText');
 /** Perception via the canonical-key cache, e.g. `perceiveWithKey(mol, canonicalForm(mol))`. */
 export function perceiveWithKey(molecule: Molecule, form: CanonicalForm): Perception {
 	const stored = byCanonicalKey.get(form.key);
-	if (stored) return renumber(stored, form.fromCanonical);
+	if (stored) {
+		return renumber(stored, form.fromCanonical);
+	}
 	const fresh = perceive(molecule);
 	byCanonicalKey.set(form.key, renumber(fresh, form.toCanonical));
 	return fresh;

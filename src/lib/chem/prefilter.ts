@@ -17,7 +17,12 @@ import { Molecule } from 'openchemlib';
  * aromatic or not (-1: either), an exact hydrogen count (-1: any), at most `maxNeighbours` heavy
  * neighbours. Plain fields rather than closures: this runs a few hundred thousand times a route.
  */
-type AtomSpec = { elements: number[] | null; aromatic: number; hydrogens: number; maxNeighbours: number };
+type AtomSpec = {
+	elements: number[] | null;
+	aromatic: number;
+	hydrogens: number;
+	maxNeighbours: number;
+};
 
 /** A pattern as a spanning tree in SMARTS order (each atom's parent comes earlier) plus ring closures. */
 export type LooseQuery = {
@@ -56,11 +61,31 @@ const DOUBLE = 2;
 const TRIPLE = 4;
 const AROMATIC = 8;
 const ANY = 15;
-const BOND_SYMBOLS: Record<string, number> = { '-': SINGLE | AROMATIC, '=': DOUBLE | AROMATIC, '#': TRIPLE, ':': AROMATIC, '~': ANY, '/': SINGLE | AROMATIC, '\\': SINGLE | AROMATIC };
+const BOND_SYMBOLS: Record<string, number> = {
+	'-': SINGLE | AROMATIC,
+	'=': DOUBLE | AROMATIC,
+	'#': TRIPLE,
+	':': AROMATIC,
+	'~': ANY,
+	'/': SINGLE | AROMATIC,
+	'\\': SINGLE | AROMATIC
+};
 /** An unwritten bond: openchemlib reads it as single; aromatic is allowed too, to stay loose. */
 const DEFAULT_BOND = SINGLE | AROMATIC;
 
-const ELEMENTS: Record<string, number> = { B: 5, C: 6, N: 7, O: 8, F: 9, Si: 14, P: 15, S: 16, Cl: 17, Br: 35, I: 53 };
+const ELEMENTS: Record<string, number> = {
+	B: 5,
+	C: 6,
+	N: 7,
+	O: 8,
+	F: 9,
+	Si: 14,
+	P: 15,
+	S: 16,
+	Cl: 17,
+	Br: 35,
+	I: 53
+};
 const AROMATIC_ELEMENTS: Record<string, number> = { b: 5, c: 6, n: 7, o: 8, p: 15, s: 16 };
 
 /** Reads the table once per molecule, e.g. `atomTable(Molecule.fromSmiles('CCO'))`. */
@@ -68,29 +93,48 @@ export function atomTable(molecule: Molecule): AtomTable {
 	// Rings and aromaticity first (a no-op when done): a fresh molecule has no hydrogen counts yet.
 	molecule.ensureHelperArrays(Molecule.cHelperRings);
 	const count = molecule.getAtoms();
-	const table: AtomTable = { element: new Int16Array(count), aromatic: new Uint8Array(count), hydrogens: new Int16Array(count), charge: new Int8Array(count), ringSize: new Int16Array(count), neighbours: [], bonds: [], odd: new Uint8Array(count), plain: true };
+	const table: AtomTable = {
+		element: new Int16Array(count),
+		aromatic: new Uint8Array(count),
+		hydrogens: new Int16Array(count),
+		charge: new Int8Array(count),
+		ringSize: new Int16Array(count),
+		neighbours: [],
+		bonds: [],
+		odd: new Uint8Array(count),
+		plain: true
+	};
 	for (let atom = 0; atom < count; atom++) {
 		table.element[atom] = molecule.getAtomicNo(atom);
 		table.aromatic[atom] = molecule.isAromaticAtom(atom) ? 1 : 0;
 		table.hydrogens[atom] = molecule.getAllHydrogens(atom);
 		table.charge[atom] = molecule.getAtomCharge(atom);
 		table.ringSize[atom] = molecule.getAtomRingSize(atom);
-		if (table.charge[atom] !== 0 || molecule.getAtomRadical(atom) !== 0) table.odd[atom] = 1;
+		if (table.charge[atom] !== 0 || molecule.getAtomRadical(atom) !== 0) {
+			table.odd[atom] = 1;
+		}
 		const neighbours: number[] = [];
 		const bonds: number[] = [];
 		for (let i = 0; i < molecule.getConnAtoms(atom); i++) {
 			const bond = molecule.getConnBond(atom, i);
 			const order = molecule.getBondOrder(bond);
 			neighbours.push(molecule.getConnAtom(atom, i));
-			bonds.push((order === 1 ? SINGLE : order === 2 ? DOUBLE : order === 3 ? TRIPLE : 0) | (molecule.isAromaticBond(bond) ? AROMATIC : 0));
+			bonds.push(
+				(order === 1 ? SINGLE : order === 2 ? DOUBLE : order === 3 ? TRIPLE : 0) |
+					(molecule.isAromaticBond(bond) ? AROMATIC : 0)
+			);
 		}
 		table.neighbours.push(neighbours);
 		table.bonds.push(bonds);
 	}
 	for (let atom = 0; atom < count; atom++) {
-		if (table.element[atom] !== 1) continue;
+		if (table.element[atom] !== 1) {
+			continue;
+		}
 		table.odd[atom] = 1;
-		for (const other of table.neighbours[atom]!) table.odd[other] = 1;
+		for (const other of table.neighbours[atom]!) {
+			table.odd[other] = 1;
+		}
 	}
 	table.plain = !table.odd.includes(1);
 	return table;
@@ -100,16 +144,35 @@ export function atomTable(molecule: Molecule): AtomTable {
 export function mayMatch(table: AtomTable, query: LooseQuery): boolean {
 	const placed = new Int32Array(query.atoms.length).fill(-1);
 	const used = new Uint8Array(table.element.length);
-	for (let atom = 0; atom < table.element.length; atom++) if (tryAtom(table, query, placed, used, 0, atom)) return true;
+	for (let atom = 0; atom < table.element.length; atom++) {
+		if (tryAtom(table, query, placed, used, 0, atom)) {
+			return true;
+		}
+	}
 	return false;
 }
 
 /** Puts pattern atom `index` on molecule atom `atom` and, if it fits, goes on with the next one. */
-function tryAtom(table: AtomTable, query: LooseQuery, placed: Int32Array, used: Uint8Array, index: number, atom: number): boolean {
-	if (used[atom] || !fits(table, atom, query.atoms[index]!)) return false;
-	for (const { other, bond } of query.closures[index]!) if (!bonded(table, atom, placed[other]!, bond)) return false;
+function tryAtom(
+	table: AtomTable,
+	query: LooseQuery,
+	placed: Int32Array,
+	used: Uint8Array,
+	index: number,
+	atom: number
+): boolean {
+	if (used[atom] || !fits(table, atom, query.atoms[index]!)) {
+		return false;
+	}
+	for (const { other, bond } of query.closures[index]!) {
+		if (!bonded(table, atom, placed[other]!, bond)) {
+			return false;
+		}
+	}
 	const next = index + 1;
-	if (next === query.atoms.length) return true;
+	if (next === query.atoms.length) {
+		return true;
+	}
 	placed[index] = atom;
 	used[atom] = 1;
 	const from = placed[query.parent[next]!]!;
@@ -117,16 +180,24 @@ function tryAtom(table: AtomTable, query: LooseQuery, placed: Int32Array, used: 
 	const bonds = table.bonds[from]!;
 	const mask = query.parentBond[next]!;
 	for (let i = 0; i < neighbours.length; i++) {
-		if (bonds[i]! & mask && tryAtom(table, query, placed, used, next, neighbours[i]!)) return true;
+		if (bonds[i]! & mask && tryAtom(table, query, placed, used, next, neighbours[i]!)) {
+			return true;
+		}
 	}
 	used[atom] = 0;
 	return false;
 }
 
 function fits(table: AtomTable, atom: number, spec: AtomSpec): boolean {
-	if (spec.elements && !spec.elements.includes(table.element[atom]!)) return false;
-	if (spec.aromatic >= 0 && table.aromatic[atom] !== spec.aromatic) return false;
-	if (spec.hydrogens >= 0 && table.hydrogens[atom] !== spec.hydrogens) return false;
+	if (spec.elements && !spec.elements.includes(table.element[atom]!)) {
+		return false;
+	}
+	if (spec.aromatic >= 0 && table.aromatic[atom] !== spec.aromatic) {
+		return false;
+	}
+	if (spec.hydrogens >= 0 && table.hydrogens[atom] !== spec.hydrogens) {
+		return false;
+	}
 	return table.neighbours[atom]!.length <= spec.maxNeighbours;
 }
 
@@ -145,35 +216,55 @@ export function looseQuery(smarts: string): LooseQuery | null {
 	for (let i = 0; i < smarts.length; i++) {
 		const ch = smarts[i]!;
 		let test: AtomSpec | null = null;
-		if (ch === '(') branches.push(previous);
-		else if (ch === ')') previous = branches.pop() ?? -1;
-		else if (ch in BOND_SYMBOLS) bond = BOND_SYMBOLS[ch]!;
-		else if (/[0-9%]/.test(ch)) {
+		if (ch === '(') {
+			branches.push(previous);
+		} else if (ch === ')') {
+			previous = branches.pop() ?? -1;
+		} else if (ch in BOND_SYMBOLS) {
+			bond = BOND_SYMBOLS[ch]!;
+		} else if (/[0-9%]/.test(ch)) {
 			const label = ch === '%' ? smarts.slice(i, i + 3) : ch;
-			if (ch === '%') i += 2;
+			if (ch === '%') {
+				i += 2;
+			}
 			const open = rings.get(label);
-			if (previous < 0) return null;
+			if (previous < 0) {
+				return null;
+			}
 			if (open) {
 				rings.delete(label);
-				query.closures[previous]!.push({ other: open.atom, bond: bond ?? open.bond ?? DEFAULT_BOND });
-			} else rings.set(label, { atom: previous, bond });
+				query.closures[previous]!.push({
+					other: open.atom,
+					bond: bond ?? open.bond ?? DEFAULT_BOND
+				});
+			} else {
+				rings.set(label, { atom: previous, bond });
+			}
 			bond = null;
 		} else if (ch === '[') {
 			const close = closingBracket(smarts, i);
-			if (close < 0) return null;
+			if (close < 0) {
+				return null;
+			}
 			test = bracketTest(smarts.slice(i + 1, close));
 			i = close;
 		} else {
 			const symbol = /^(Cl|Br|[BCNOPSFI]|[bcnops])/.exec(smarts.slice(i))?.[1];
-			if (!symbol) return null; // '.', '*', … : not worth reading
+			if (!symbol) {
+				return null;
+			} // '.', '*', … : not worth reading
 			test = elementTest(symbol);
 			i += symbol.length - 1;
 		}
-		if (!test) continue;
+		if (!test) {
+			continue;
+		}
 		const index = query.atoms.length;
 		query.atoms.push(test);
 		query.closures.push([]);
-		if (index > 0 && previous < 0) return null;
+		if (index > 0 && previous < 0) {
+			return null;
+		}
 		query.parent.push(previous);
 		query.parentBond.push(bond ?? DEFAULT_BOND);
 		bond = null;
@@ -185,17 +276,27 @@ export function looseQuery(smarts: string): LooseQuery | null {
 function closingBracket(smarts: string, open: number): number {
 	let depth = 0;
 	for (let j = open; j < smarts.length; j++) {
-		if (smarts[j] === '[') depth++;
-		else if (smarts[j] === ']' && --depth === 0) return j;
+		if (smarts[j] === '[') {
+			depth++;
+		} else if (smarts[j] === ']' && --depth === 0) {
+			return j;
+		}
 	}
 	return -1;
 }
 
-const anyAtom = (): AtomSpec => ({ elements: null, aromatic: -1, hydrogens: -1, maxNeighbours: Infinity });
+const anyAtom = (): AtomSpec => ({
+	elements: null,
+	aromatic: -1,
+	hydrogens: -1,
+	maxNeighbours: Infinity
+});
 
 /** Uppercase symbols test the element only: openchemlib does not read them as aliphatic (hence the `;A` in patterns). */
 function elementTest(symbol: string): AtomSpec | null {
-	if (symbol in AROMATIC_ELEMENTS) return { ...anyAtom(), elements: [AROMATIC_ELEMENTS[symbol]!], aromatic: 1 };
+	if (symbol in AROMATIC_ELEMENTS) {
+		return { ...anyAtom(), elements: [AROMATIC_ELEMENTS[symbol]!], aromatic: 1 };
+	}
 	const element = ELEMENTS[symbol];
 	return element === undefined ? null : { ...anyAtom(), elements: [element] };
 }
@@ -209,9 +310,20 @@ function bracketTest(inside: string): AtomSpec {
 	const plain = dropRecursive(inside).replace(/:\d+$/, '');
 	const spec = anyAtom();
 	for (const term of plain.split(';')) {
-		const alternatives = term.split(',').map((alternative) => primitives(alternative.replace(/&/g, '')));
-		if (alternatives.length === 1) merge(spec, alternatives[0]!);
-		else if (alternatives.every((a) => a.elements?.length === 1 && a.aromatic < 0 && a.hydrogens < 0 && a.maxNeighbours === Infinity)) {
+		const alternatives = term
+			.split(',')
+			.map((alternative) => primitives(alternative.replace(/&/g, '')));
+		if (alternatives.length === 1) {
+			merge(spec, alternatives[0]!);
+		} else if (
+			alternatives.every(
+				(a) =>
+					a.elements?.length === 1 &&
+					a.aromatic < 0 &&
+					a.hydrogens < 0 &&
+					a.maxNeighbours === Infinity
+			)
+		) {
 			merge(spec, { ...anyAtom(), elements: alternatives.map((a) => a.elements![0]!) });
 		}
 	}
@@ -220,9 +332,17 @@ function bracketTest(inside: string): AtomSpec {
 
 /** Both must hold; contradictions (two elements, aromatic and not) leave nothing that fits. */
 function merge(into: AtomSpec, spec: AtomSpec): void {
-	if (spec.elements) into.elements = into.elements ? into.elements.filter((e) => spec.elements!.includes(e)) : spec.elements;
-	if (spec.aromatic >= 0) into.aromatic = into.aromatic >= 0 && into.aromatic !== spec.aromatic ? 2 : spec.aromatic;
-	if (spec.hydrogens >= 0) into.hydrogens = into.hydrogens >= 0 && into.hydrogens !== spec.hydrogens ? 99 : spec.hydrogens;
+	if (spec.elements) {
+		into.elements = into.elements
+			? into.elements.filter((e) => spec.elements!.includes(e))
+			: spec.elements;
+	}
+	if (spec.aromatic >= 0) {
+		into.aromatic = into.aromatic >= 0 && into.aromatic !== spec.aromatic ? 2 : spec.aromatic;
+	}
+	if (spec.hydrogens >= 0) {
+		into.hydrogens = into.hydrogens >= 0 && into.hydrogens !== spec.hydrogens ? 99 : spec.hydrogens;
+	}
 	into.maxNeighbours = Math.min(into.maxNeighbours, spec.maxNeighbours);
 }
 
@@ -233,8 +353,11 @@ function dropRecursive(inside: string): string {
 			let depth = 0;
 			let j = inside.indexOf('(', i);
 			for (; j < inside.length; j++) {
-				if (inside[j] === '(') depth++;
-				else if (inside[j] === ')' && --depth === 0) break;
+				if (inside[j] === '(') {
+					depth++;
+				} else if (inside[j] === ')' && --depth === 0) {
+					break;
+				}
 			}
 			i = j;
 			continue;
@@ -246,23 +369,32 @@ function dropRecursive(inside: string): string {
 
 function primitives(run: string): AtomSpec {
 	const spec = anyAtom();
-	for (let i = 0; i < run.length; ) {
+	for (let i = 0; i < run.length;) {
 		const rest = run.slice(i);
 		const negated = rest.startsWith('!');
 		const token = /^!?(#\d+|Cl|Br|Si|[A-Z][a-z]?|[a-z]|[+-]+\d*|\d+|.)(\d*)/.exec(rest)!;
 		i += token[0].length;
-		if (negated) continue; // a negation only narrows: leaving it out stays loose
+		if (negated) {
+			continue;
+		} // a negation only narrows: leaving it out stays loose
 		const head = token[1]!;
 		const count = token[2] === '' ? 1 : Number(token[2]);
-		if (head.startsWith('#')) merge(spec, { ...anyAtom(), elements: [Number(head.slice(1))] });
-		else if (head === 'H') merge(spec, { ...anyAtom(), hydrogens: count });
+		if (head.startsWith('#')) {
+			merge(spec, { ...anyAtom(), elements: [Number(head.slice(1))] });
+		} else if (head === 'H') {
+			merge(spec, { ...anyAtom(), hydrogens: count });
+		}
 		// openchemlib's X is not always neighbours + H (it lets [CH3-] be X4), so only cap the heavy neighbours.
-		else if (head === 'X') merge(spec, { ...anyAtom(), maxNeighbours: count });
-		else if (head === 'A' || head === 'a') merge(spec, { ...anyAtom(), aromatic: head === 'a' ? 1 : 0 });
-		else {
+		else if (head === 'X') {
+			merge(spec, { ...anyAtom(), maxNeighbours: count });
+		} else if (head === 'A' || head === 'a') {
+			merge(spec, { ...anyAtom(), aromatic: head === 'a' ? 1 : 0 });
+		} else {
 			// An element symbol; charges, isotopes and symbols not listed here count as true.
 			const element = elementTest(head);
-			if (element) merge(spec, element);
+			if (element) {
+				merge(spec, element);
+			}
 		}
 	}
 	return spec;

@@ -16,14 +16,18 @@ export function formulaOf(molecule: Molecule): string {
 	const hill = [...counts.keys()]
 		.filter((element) => counts.get(element)! > 0)
 		.sort((a, b) => hillRank(a, counts) - hillRank(b, counts) || a.localeCompare(b));
-	const body = hill.map((element) => `${element}${counts.get(element) === 1 ? '' : counts.get(element)}`).join('');
+	const body = hill
+		.map((element) => `${element}${counts.get(element) === 1 ? '' : counts.get(element)}`)
+		.join('');
 	const size = Math.abs(charge);
 	return charge === 0 ? body : `${body}${size === 1 ? '' : size}${charge > 0 ? '+' : '-'}`;
 }
 
 /** Hill order: carbon first and hydrogen second when there is carbon, then alphabetical. */
 function hillRank(element: string, counts: Map<string, number>): number {
-	if (!counts.get('C')) return 2;
+	if (!counts.get('C')) {
+		return 2;
+	}
 	return element === 'C' ? 0 : element === 'H' ? 1 : 2;
 }
 
@@ -59,6 +63,10 @@ export function canonicalForm(molecule: Molecule): CanonicalForm {
 export function stereocentres(molecule: Molecule): number[] {
 	molecule.ensureHelperArrays(Molecule.cHelperParities);
 	const atoms: number[] = [];
-	for (let atom = 0; atom < molecule.getAtoms(); atom++) if (molecule.getAtomParity(atom) !== Molecule.cAtomParityNone) atoms.push(atom);
+	for (let atom = 0; atom < molecule.getAtoms(); atom++) {
+		if (molecule.getAtomParity(atom) !== Molecule.cAtomParityNone) {
+			atoms.push(atom);
+		}
+	}
 	return atoms;
 }

@@ -13,17 +13,23 @@ export function splitSdf(text: string): SdfRecord[] {
 		// Later chunks start with the newline that ended the previous "$$$$" line; the first chunk's
 		// leading newline is its (empty) title line and must stay.
 		const body = index === 0 ? chunk : chunk.replace(/^\n/, '');
-		if (body.trim() === '') return;
+		if (body.trim() === '') {
+			return;
+		}
 		const end = body.search(/^M {2}END[ \t]*$/m);
 		if (end < 0) {
-			throw new StructureError('sdf_syntax', `SDF record ${index + 1} has no "M  END" line.`, { record: index + 1 });
+			throw new StructureError('sdf_syntax', `SDF record ${index + 1} has no "M  END" line.`, {
+				record: index + 1
+			});
 		}
 		const endOfLine = body.indexOf('\n', end);
 		const molfile = endOfLine < 0 ? body : body.slice(0, endOfLine + 1);
 		const rest = endOfLine < 0 ? '' : body.slice(endOfLine + 1);
 		records.push({ molfile, fields: readDataFields(rest) });
 	});
-	if (records.length === 0) throw new StructureError('sdf_syntax', 'The SDF text holds no records.');
+	if (records.length === 0) {
+		throw new StructureError('sdf_syntax', 'The SDF text holds no records.');
+	}
 	return records;
 }
 
@@ -32,7 +38,9 @@ function readDataFields(text: string): Record<string, string> {
 	let name: string | null = null;
 	let value: string[] = [];
 	const flush = () => {
-		if (name !== null) fields[name] = value.join('\n').trim();
+		if (name !== null) {
+			fields[name] = value.join('\n').trim();
+		}
 		name = null;
 		value = [];
 	};
@@ -42,8 +50,11 @@ function readDataFields(text: string): Record<string, string> {
 			flush();
 			name = header[1]!.trim();
 		} else if (name !== null) {
-			if (line.trim() === '') flush();
-			else value.push(line);
+			if (line.trim() === '') {
+				flush();
+			} else {
+				value.push(line);
+			}
 		}
 	}
 	flush();

@@ -20,8 +20,11 @@ function atomsOf(table: AtomTable, element: number): readonly number[] {
 		index = new Map();
 		for (let atom = 0; atom < table.element.length; atom++) {
 			const list = index.get(table.element[atom]!);
-			if (list) list.push(atom);
-			else index.set(table.element[atom]!, [atom]);
+			if (list) {
+				list.push(atom);
+			} else {
+				index.set(table.element[atom]!, [atom]);
+			}
 		}
 		atomsByElement.set(table, index);
 	}
@@ -61,7 +64,9 @@ function startSearch(
 		};
 		scratch.set(query, arrays);
 	}
-	if (!table.plain) touched.add(arrays);
+	if (!table.plain) {
+		touched.add(arrays);
+	}
 	const leaves = distinct ? leafOrder(query) : null;
 	return { table, query, plan: searchPlan(query, root), ...arrays, found: [], firstOnly, leaves };
 }
@@ -85,7 +90,9 @@ export function distinctMatches(table: AtomTable, query: ExactQuery): number[][]
 		touched.clear();
 		return found;
 	} catch (caught) {
-		if (!(caught instanceof OddAtom)) throw caught;
+		if (!(caught instanceof OddAtom)) {
+			throw caught;
+		}
 		// The search stopped half way: its working arrays must be clean for the next one.
 		for (const arrays of touched) {
 			arrays.placed.fill(-1);
@@ -106,27 +113,47 @@ function search(table: AtomTable, query: ExactQuery, distinct: boolean): number[
 	let fewest = Infinity;
 	for (let atom = 0; atom < elements.length; atom++) {
 		const set = elements[atom];
-		if (!set) continue;
+		if (!set) {
+			continue;
+		}
 		let candidates = 0;
-		for (const element of set) candidates += atomsOf(table, element).length;
-		if (candidates === 0) return [];
-		if (candidates < fewest) [root, fewest] = [atom, candidates];
+		for (const element of set) {
+			candidates += atomsOf(table, element).length;
+		}
+		if (candidates === 0) {
+			return [];
+		}
+		if (candidates < fewest) {
+			[root, fewest] = [atom, candidates];
+		}
 	}
 	const search = startSearch(table, query, root, false, distinct);
 	const set = elements[root];
-	if (set)
-		for (const element of set) for (const atom of atomsOf(table, element)) place(search, 0, atom);
-	else for (let atom = 0; atom < table.element.length; atom++) place(search, 0, atom);
+	if (set) {
+		for (const element of set) {
+			for (const atom of atomsOf(table, element)) {
+				place(search, 0, atom);
+			}
+		}
+	} else {
+		for (let atom = 0; atom < table.element.length; atom++) {
+			place(search, 0, atom);
+		}
+	}
 	return search.found.length > 1 ? search.found.sort(compareMappings) : search.found;
 }
 
 /** The first mapping of each distinct atom set, in the order given, e.g. `firstPerAtomSet([[1, 2], [2, 1]])` → `[[1, 2]]`. */
 export function firstPerAtomSet(mappings: number[][]): number[][] {
-	if (mappings.length < 2) return mappings;
+	if (mappings.length < 2) {
+		return mappings;
+	}
 	const seen = new Set<string>();
 	return mappings.filter((mapping) => {
 		const atomSet = matchedAtoms(mapping).join(',');
-		if (seen.has(atomSet)) return false;
+		if (seen.has(atomSet)) {
+			return false;
+		}
 		seen.add(atomSet);
 		return true;
 	});
@@ -139,18 +166,27 @@ export function matchedAtoms(match: number[]): number[] {
 
 /** Ascending by first atom, then second, …: one order for this walk and openchemlib alike. */
 export function compareMappings(a: readonly number[], b: readonly number[]): number {
-	for (let i = 0; i < a.length && i < b.length; i++) if (a[i] !== b[i]) return a[i]! - b[i]!;
+	for (let i = 0; i < a.length && i < b.length; i++) {
+		if (a[i] !== b[i]) {
+			return a[i]! - b[i]!;
+		}
+	}
 	return a.length - b.length;
 }
 
 /** Whether the query matches with its first atom on `atom` (how `$()` is read). */
 function matchesAt(table: AtomTable, query: ExactQuery, atom: number): boolean {
 	let results = recursiveResults.get(table);
-	if (!results) recursiveResults.set(table, (results = new Map()));
+	if (!results) {
+		recursiveResults.set(table, (results = new Map()));
+	}
 	let known = results.get(query);
-	if (!known) results.set(query, (known = new Int8Array(table.element.length).fill(-1)));
-	if (known[atom] === -1)
+	if (!known) {
+		results.set(query, (known = new Int8Array(table.element.length).fill(-1)));
+	}
+	if (known[atom] === -1) {
 		known[atom] = place(startSearch(table, query, 0, true, true), 0, atom) ? 1 : 0;
+	}
 	return known[atom] === 1;
 }
 
@@ -161,22 +197,30 @@ function matchesAt(table: AtomTable, query: ExactQuery, atom: number): boolean {
 function place(search: Search, step: number, atom: number): boolean {
 	const { table, query, plan, placed, used } = search;
 	const queryAtom = plan.order[step]!;
-	if (used[atom] || !fits(table, atom, query.atoms[queryAtom]!)) return false;
+	if (used[atom] || !fits(table, atom, query.atoms[queryAtom]!)) {
+		return false;
+	}
 	if (search.leaves) {
 		const before = search.leaves.before[queryAtom]!;
 		const after = search.leaves.after[queryAtom]!;
 		if (
 			(before >= 0 && placed[before]! > atom) ||
 			(after >= 0 && placed[after]! >= 0 && placed[after]! < atom)
-		)
+		) {
 			return false;
+		}
 	}
-	for (const { other, bond } of plan.back[step]!)
-		if (!bonded(table, atom, placed[other]!, bond)) return false;
+	for (const { other, bond } of plan.back[step]!) {
+		if (!bonded(table, atom, placed[other]!, bond)) {
+			return false;
+		}
+	}
 	placed[queryAtom] = atom;
 	const next = step + 1;
 	if (next === plan.order.length) {
-		if (!search.firstOnly) search.found.push(Array.from(placed));
+		if (!search.firstOnly) {
+			search.found.push(Array.from(placed));
+		}
 		placed[queryAtom] = -1;
 		return search.firstOnly;
 	}
@@ -187,7 +231,9 @@ function place(search: Search, step: number, atom: number): boolean {
 	const mask = plan.bond[next]!;
 	let done = false;
 	for (let i = 0; i < neighbours.length && !done; i++) {
-		if (bondFits(bonds[i]!, mask)) done = place(search, next, neighbours[i]!);
+		if (bondFits(bonds[i]!, mask)) {
+			done = place(search, next, neighbours[i]!);
+		}
 	}
 	used[atom] = 0;
 	placed[queryAtom] = -1;
@@ -207,10 +253,18 @@ function bonded(table: AtomTable, a: number, b: number, mask: number): boolean {
 function fits(table: AtomTable, atom: number, test: AtomTest): boolean {
 	switch (test.kind) {
 		case 'all':
-			for (const part of test.tests) if (!fits(table, atom, part)) return false;
+			for (const part of test.tests) {
+				if (!fits(table, atom, part)) {
+					return false;
+				}
+			}
 			return true;
 		case 'any':
-			for (const part of test.tests) if (fits(table, atom, part)) return true;
+			for (const part of test.tests) {
+				if (fits(table, atom, part)) {
+					return true;
+				}
+			}
 			return false;
 		case 'not':
 			return !fits(table, atom, test.test);
@@ -219,10 +273,14 @@ function fits(table: AtomTable, atom: number, test: AtomTest): boolean {
 		case 'aromatic':
 			return (table.aromatic[atom] === 1) === test.aromatic;
 		case 'hydrogens':
-			if (table.odd[atom]) throw new OddAtom();
+			if (table.odd[atom]) {
+				throw new OddAtom();
+			}
 			return table.hydrogens[atom] === test.count;
 		case 'connections':
-			if (table.odd[atom]) throw new OddAtom();
+			if (table.odd[atom]) {
+				throw new OddAtom();
+			}
 			return table.neighbours[atom]!.length + table.hydrogens[atom]! === test.count;
 		case 'degree': {
 			const connections = table.neighbours[atom]!.length;

@@ -23,14 +23,18 @@ const elementSets = new WeakMap<ExactQuery, (number[] | null)[]>();
 /** The plan that places `root` first (and every other atom after a bonded one), e.g. `searchPlan(query, 0)`. */
 export function searchPlan(query: ExactQuery, root: number): SearchPlan {
 	let cached = plans.get(query);
-	if (!cached) plans.set(query, (cached = []));
+	if (!cached) {
+		plans.set(query, (cached = []));
+	}
 	return (cached[root] ??= buildPlan(query, root));
 }
 
 /** For each query atom, the elements it can be (null: not known from its test), e.g. `[Cl,Br,I]` → [17, 35, 53]. */
 export function queryElements(query: ExactQuery): (number[] | null)[] {
 	let sets = elementSets.get(query);
-	if (!sets) elementSets.set(query, (sets = query.atoms.map(elementsOf)));
+	if (!sets) {
+		elementSets.set(query, (sets = query.atoms.map(elementsOf)));
+	}
 	return sets;
 }
 
@@ -43,17 +47,23 @@ export function queryElements(query: ExactQuery): (number[] | null)[] {
  */
 export function leafOrder(query: ExactQuery): { before: Int32Array; after: Int32Array } {
 	let order = leafOrders.get(query);
-	if (order) return order;
+	if (order) {
+		return order;
+	}
 	const count = query.atoms.length;
 	order = { before: new Int32Array(count).fill(-1), after: new Int32Array(count).fill(-1) };
 	const inner = new Set<number>(query.parent.filter((parent) => parent >= 0));
 	query.closures.forEach((closures, atom) => {
-		if (closures.length > 0) inner.add(atom);
+		if (closures.length > 0) {
+			inner.add(atom);
+		}
 		closures.forEach(({ other }) => inner.add(other));
 	});
 	const lastOfKind = new Map<string, number>();
 	for (let atom = 1; atom < count; atom++) {
-		if (inner.has(atom)) continue;
+		if (inner.has(atom)) {
+			continue;
+		}
 		const kind = JSON.stringify([
 			query.parent[atom],
 			query.parentBond[atom],
@@ -72,16 +82,22 @@ export function leafOrder(query: ExactQuery): { before: Int32Array; after: Int32
 }
 
 function elementsOf(test: AtomTest): number[] | null {
-	if (test.kind === 'element') return [test.element];
+	if (test.kind === 'element') {
+		return [test.element];
+	}
 	if (test.kind === 'any') {
 		const parts = test.tests.map(elementsOf);
 		return parts.every((part) => part !== null) ? [...new Set(parts.flat() as number[])] : null;
 	}
-	if (test.kind !== 'all') return null;
+	if (test.kind !== 'all') {
+		return null;
+	}
 	let narrowest: number[] | null = null;
 	for (const part of test.tests) {
 		const elements = elementsOf(part);
-		if (elements && (!narrowest || elements.length < narrowest.length)) narrowest = elements;
+		if (elements && (!narrowest || elements.length < narrowest.length)) {
+			narrowest = elements;
+		}
 	}
 	return narrowest;
 }
@@ -93,7 +109,9 @@ function buildPlan(query: ExactQuery, root: number): SearchPlan {
 		edges[a]!.push({ other: b, bond });
 		edges[b]!.push({ other: a, bond });
 	};
-	for (let atom = 1; atom < count; atom++) link(atom, query.parent[atom]!, query.parentBond[atom]!);
+	for (let atom = 1; atom < count; atom++) {
+		link(atom, query.parent[atom]!, query.parentBond[atom]!);
+	}
 	query.closures.forEach((closures, atom) =>
 		closures.forEach(({ other, bond }) => link(atom, other, bond))
 	);
@@ -103,7 +121,9 @@ function buildPlan(query: ExactQuery, root: number): SearchPlan {
 	const stack: { atom: number; from: number; bond: number }[] = [{ atom: root, from: -1, bond: 0 }];
 	while (stack.length > 0) {
 		const { atom, from, bond } = stack.pop()!;
-		if (placedAt[atom]! >= 0) continue;
+		if (placedAt[atom]! >= 0) {
+			continue;
+		}
 		placedAt[atom] = plan.order.length;
 		plan.order.push(atom);
 		plan.from.push(from);
@@ -111,7 +131,9 @@ function buildPlan(query: ExactQuery, root: number): SearchPlan {
 		plan.back.push(edges[atom]!.filter(({ other }) => other !== from && placedAt[other]! >= 0));
 		for (let i = edges[atom]!.length - 1; i >= 0; i--) {
 			const { other, bond: next } = edges[atom]![i]!;
-			if (placedAt[other]! < 0) stack.push({ atom: other, from: atom, bond: next });
+			if (placedAt[other]! < 0) {
+				stack.push({ atom: other, from: atom, bond: next });
+			}
 		}
 	}
 	return plan;

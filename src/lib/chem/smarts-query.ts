@@ -88,7 +88,9 @@ export function exactQuery(smarts: string): ExactQuery | null {
 	try {
 		return readChain(smarts);
 	} catch (caught) {
-		if (caught instanceof Unsupported) return null;
+		if (caught instanceof Unsupported) {
+			return null;
+		}
 		throw caught;
 	}
 }
@@ -105,36 +107,54 @@ function readChain(smarts: string): ExactQuery {
 	for (let i = 0; i < smarts.length; i++) {
 		const ch = smarts[i]!;
 		let atom: { test: AtomTest; aromatic: boolean; map: number } | null = null;
-		if (ch === '(') branches.push(previous);
-		else if (ch === ')') previous = branches.pop() ?? -1;
-		else if (ch in BOND_SYMBOLS) {
-			if (bond !== null) throw new Unsupported(); // a bond expression such as '-,:'
+		if (ch === '(') {
+			branches.push(previous);
+		} else if (ch === ')') {
+			previous = branches.pop() ?? -1;
+		} else if (ch in BOND_SYMBOLS) {
+			if (bond !== null) {
+				throw new Unsupported();
+			} // a bond expression such as '-,:'
 			bond = BOND_SYMBOLS[ch]!;
 		} else if (/[0-9%]/.test(ch)) {
 			const label = ch === '%' ? smarts.slice(i, i + 3) : ch;
-			if (ch === '%') i += 2;
-			if (previous < 0) throw new Unsupported();
+			if (ch === '%') {
+				i += 2;
+			}
+			if (previous < 0) {
+				throw new Unsupported();
+			}
 			const open = rings.get(label);
 			if (open) {
 				rings.delete(label);
 				const closing = bond ?? open.bond ?? unwritten(open.atom, previous);
 				query.closures[previous]!.push({ other: open.atom, bond: closing });
-			} else rings.set(label, { atom: previous, bond });
+			} else {
+				rings.set(label, { atom: previous, bond });
+			}
 			bond = null;
 		} else if (ch === '[') {
 			const close = closingBracket(smarts, i);
-			if (close < 0) throw new Unsupported();
+			if (close < 0) {
+				throw new Unsupported();
+			}
 			atom = bracketAtom(smarts.slice(i + 1, close));
 			i = close;
 		} else {
 			const symbol = /^(Cl|Br|[BCNOPSFI]|[bcnops]|[aA*])/.exec(smarts.slice(i))?.[1];
-			if (!symbol) throw new Unsupported();
+			if (!symbol) {
+				throw new Unsupported();
+			}
 			atom = symbolAtom(symbol);
 			i += symbol.length - 1;
 		}
-		if (!atom) continue;
+		if (!atom) {
+			continue;
+		}
 		const index = query.atoms.length;
-		if (index > 0 && previous < 0) throw new Unsupported(); // '.': disconnected parts
+		if (index > 0 && previous < 0) {
+			throw new Unsupported();
+		} // '.': disconnected parts
 		query.atoms.push(atom.test);
 		query.mapNumbers.push(atom.map);
 		query.closures.push([]);
@@ -144,20 +164,26 @@ function readChain(smarts: string): ExactQuery {
 		bond = null;
 		previous = index;
 	}
-	if (query.atoms.length === 0 || rings.size > 0 || branches.length > 0) throw new Unsupported();
+	if (query.atoms.length === 0 || rings.size > 0 || branches.length > 0) {
+		throw new Unsupported();
+	}
 	return query;
 }
 
 function symbolAtom(symbol: string): { test: AtomTest; aromatic: boolean; map: number } {
-	if (symbol === '*') return { test: { kind: 'all', tests: [] }, aromatic: false, map: 0 };
-	if (symbol === 'a' || symbol === 'A')
+	if (symbol === '*') {
+		return { test: { kind: 'all', tests: [] }, aromatic: false, map: 0 };
+	}
+	if (symbol === 'a' || symbol === 'A') {
 		return {
 			test: { kind: 'aromatic', aromatic: symbol === 'a' },
 			aromatic: symbol === 'a',
 			map: 0
 		};
-	if (symbol in AROMATIC_SYMBOLS)
+	}
+	if (symbol in AROMATIC_SYMBOLS) {
 		return { test: aromaticElement(AROMATIC_SYMBOLS[symbol]!), aromatic: true, map: 0 };
+	}
 	return { test: { kind: 'element', element: ORGANIC[symbol]! }, aromatic: false, map: 0 };
 }
 
@@ -172,8 +198,11 @@ const aromaticElement = (element: number): AtomTest => ({
 function closingBracket(smarts: string, open: number): number {
 	let depth = 0;
 	for (let j = open; j < smarts.length; j++) {
-		if (smarts[j] === '[') depth++;
-		else if (smarts[j] === ']' && --depth === 0) return j;
+		if (smarts[j] === '[') {
+			depth++;
+		} else if (smarts[j] === ']' && --depth === 0) {
+			return j;
+		}
 	}
 	return -1;
 }
@@ -182,8 +211,9 @@ function closingBracket(smarts: string, open: number): number {
 function bracketAtom(inside: string): { test: AtomTest; aromatic: boolean; map: number } {
 	const mapped = /:(\d+)$/.exec(inside);
 	const body = mapped ? inside.slice(0, mapped.index) : inside;
-	if (body === '' || /^\d/.test(body) || /^H[+-]?\d*$/.test(body) || /[@]/.test(body))
+	if (body === '' || /^\d/.test(body) || /^H[+-]?\d*$/.test(body) || /[@]/.test(body)) {
 		throw new Unsupported();
+	}
 	return { test: lowAnd(body), aromatic: /^[a-z]/.test(body), map: mapped ? Number(mapped[1]) : 0 };
 }
 
@@ -193,15 +223,19 @@ function splitTop(text: string, separator: string): string[] {
 	let depth = 0;
 	let start = 0;
 	for (let i = 0; i < text.length; i++) {
-		if (text[i] === '(') depth++;
-		else if (text[i] === ')') depth--;
-		else if (depth === 0 && text[i] === separator) {
+		if (text[i] === '(') {
+			depth++;
+		} else if (text[i] === ')') {
+			depth--;
+		} else if (depth === 0 && text[i] === separator) {
 			parts.push(text.slice(start, i));
 			start = i + 1;
 		}
 	}
 	parts.push(text.slice(start));
-	if (parts.some((part) => part === '')) throw new Unsupported();
+	if (parts.some((part) => part === '')) {
+		throw new Unsupported();
+	}
 	return parts;
 }
 
@@ -211,7 +245,9 @@ const lowAnd = (text: string) => combine('all', splitTop(text, ';').map(or));
 function or(text: string): AtomTest {
 	const alternatives = splitTop(text, ',').map(highAnd);
 	// openchemlib keeps one ring size per atom: it reads `[C;r5,r6]` as r5 and refuses `[C;r5,N]`.
-	if (alternatives.length > 1 && alternatives.some(testsRingSize)) throw new Unsupported();
+	if (alternatives.length > 1 && alternatives.some(testsRingSize)) {
+		throw new Unsupported();
+	}
 	return combine('any', alternatives);
 }
 const highAnd = (text: string) => combine('all', splitTop(text, '&').flatMap(primitives));
@@ -221,7 +257,9 @@ function primitives(run: string): AtomTest[] {
 	const tests: AtomTest[] = [];
 	for (let i = 0; i < run.length;) {
 		const negated = run[i] === '!';
-		if (negated) i++;
+		if (negated) {
+			i++;
+		}
 		let test: AtomTest;
 		const rest = run.slice(i);
 		if (rest.startsWith('$(')) {
@@ -230,17 +268,23 @@ function primitives(run: string): AtomTest[] {
 			// One query object per recursive text, so its per-molecule results are shared by every
 			// pattern that writes it (`!$([#6]=[O,S,N])` is in most PG patterns).
 			let inner = recursiveQueries.get(text);
-			if (!inner) recursiveQueries.set(text, (inner = readChain(text)));
+			if (!inner) {
+				recursiveQueries.set(text, (inner = readChain(text)));
+			}
 			test = { kind: 'recursive', query: inner };
 			i += end + 1;
 		} else {
 			const token = /^(#\d+|[+-]+\d*|[A-Z][a-z]?|[a-z]{1,2}|\d+)(\d*)/.exec(rest);
-			if (!token) throw new Unsupported();
+			if (!token) {
+				throw new Unsupported();
+			}
 			test = primitive(token[1]!, token[2]!, tests.length === 0 && !negated);
 			i += token[0].length;
 		}
 		// openchemlib ignores a negated ring size (`[*;!r5]` matches every atom).
-		if (negated && testsRingSize(test)) throw new Unsupported();
+		if (negated && testsRingSize(test)) {
+			throw new Unsupported();
+		}
 		tests.push(negated ? { kind: 'not', test } : test);
 	}
 	return tests;
@@ -249,8 +293,11 @@ function primitives(run: string): AtomTest[] {
 function closingParen(text: string, open: number): number {
 	let depth = 0;
 	for (let j = open; j < text.length; j++) {
-		if (text[j] === '(') depth++;
-		else if (text[j] === ')' && --depth === 0) return j;
+		if (text[j] === '(') {
+			depth++;
+		} else if (text[j] === ')' && --depth === 0) {
+			return j;
+		}
 	}
 	throw new Unsupported();
 }
@@ -259,35 +306,58 @@ function closingParen(text: string, open: number): number {
 function primitive(head: string, digits: string, first: boolean): AtomTest {
 	const count = digits === '' ? 1 : Number(digits);
 	if (head.startsWith('#')) {
-		if (digits !== '') throw new Unsupported();
+		if (digits !== '') {
+			throw new Unsupported();
+		}
 		return { kind: 'element', element: Number(head.slice(1)) };
 	}
 	if (head.startsWith('+') || head.startsWith('-')) {
 		const signs = head.replace(/\d+$/, '');
-		if (!/^(\++|-+)$/.test(signs) || (signs.length > 1 && signs.length !== head.length))
+		if (!/^(\++|-+)$/.test(signs) || (signs.length > 1 && signs.length !== head.length)) {
 			throw new Unsupported();
+		}
 		const magnitude = signs.length === head.length ? signs.length : Number(head.slice(1));
 		return { kind: 'charge', charge: signs[0] === '+' ? magnitude : -magnitude };
 	}
 	// '[H]' alone (a hydrogen atom) was refused in bracketAtom, so H is always a hydrogen count.
-	if (head === 'H') return { kind: 'hydrogens', count };
-	if (head === 'X') return { kind: 'connections', count };
+	if (head === 'H') {
+		return { kind: 'hydrogens', count };
+	}
+	if (head === 'X') {
+		return { kind: 'connections', count };
+	}
 	if (head === 'A' || head === 'a') {
-		if (digits !== '') throw new Unsupported();
+		if (digits !== '') {
+			throw new Unsupported();
+		}
 		return { kind: 'aromatic', aromatic: head === 'a' };
 	}
-	if (head === 'D') return degreeTest(digits);
-	if (head === 'r') return ringSizeTest(digits);
-	if (digits !== '' || !first) throw new Unsupported(); // isotopes, R, v, x, …
-	if (head in BRACKET_ELEMENTS) return { kind: 'element', element: BRACKET_ELEMENTS[head]! };
-	if (head in AROMATIC_SYMBOLS) return aromaticElement(AROMATIC_SYMBOLS[head]!);
+	if (head === 'D') {
+		return degreeTest(digits);
+	}
+	if (head === 'r') {
+		return ringSizeTest(digits);
+	}
+	if (digits !== '' || !first) {
+		throw new Unsupported();
+	} // isotopes, R, v, x, …
+	if (head in BRACKET_ELEMENTS) {
+		return { kind: 'element', element: BRACKET_ELEMENTS[head]! };
+	}
+	if (head in AROMATIC_SYMBOLS) {
+		return aromaticElement(AROMATIC_SYMBOLS[head]!);
+	}
 	throw new Unsupported();
 }
 
 /** Whether a test (outside recursive parts) asks for a ring size. */
 function testsRingSize(test: AtomTest): boolean {
-	if (test.kind === 'all' || test.kind === 'any') return test.tests.some(testsRingSize);
-	if (test.kind === 'not') return testsRingSize(test.test);
+	if (test.kind === 'all' || test.kind === 'any') {
+		return test.tests.some(testsRingSize);
+	}
+	if (test.kind === 'not') {
+		return testsRingSize(test.test);
+	}
 	return test.kind === 'ringSize';
 }
 
@@ -297,7 +367,9 @@ function testsRingSize(test: AtomTest): boolean {
  */
 function degreeTest(digits: string): AtomTest {
 	const count = Number(digits);
-	if (digits === '' || count > 4) throw new Unsupported();
+	if (digits === '' || count > 4) {
+		throw new Unsupported();
+	}
 	return { kind: 'degree', count, atLeast: count === 4 };
 }
 
@@ -307,6 +379,8 @@ function degreeTest(digits: string): AtomTest {
  */
 function ringSizeTest(digits: string): AtomTest {
 	const size = Number(digits);
-	if (digits === '' || size < 3 || size > 7) throw new Unsupported();
+	if (digits === '' || size < 3 || size > 7) {
+		throw new Unsupported();
+	}
 	return { kind: 'ringSize', size };
 }

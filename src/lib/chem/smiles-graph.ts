@@ -38,7 +38,9 @@ export function writtenGraph(smiles: string): WrittenGraph {
 			branches.push(previous);
 			i++;
 		} else if (ch === ')') {
-			if (branches.length === 0) throw new SmilesGraphError(`")" without "(" in ${smiles}`);
+			if (branches.length === 0) {
+				throw new SmilesGraphError(`")" without "(" in ${smiles}`);
+			}
 			previous = branches.pop()!;
 			i++;
 		} else if (ch === '.') {
@@ -54,7 +56,9 @@ export function writtenGraph(smiles: string): WrittenGraph {
 			if (partner) {
 				bonds.push({ from: partner.atom, to: previous, symbol: partner.symbol || symbol });
 				open.delete(n);
-			} else open.set(n, { atom: previous, symbol });
+			} else {
+				open.set(n, { atom: previous, symbol });
+			}
 			i += written.length;
 			atoms[previous]!.end = i;
 		} else if (BOND.test(rest)) {
@@ -64,24 +68,31 @@ export function writtenGraph(smiles: string): WrittenGraph {
 			let text: string;
 			if (ch === '[') {
 				const close = smiles.indexOf(']', i);
-				if (close < 0) throw new SmilesGraphError(`"[" never closed in ${smiles}`);
+				if (close < 0) {
+					throw new SmilesGraphError(`"[" never closed in ${smiles}`);
+				}
 				text = smiles.slice(i, close + 1);
 			} else {
 				const organic = ORGANIC.exec(rest);
-				if (!organic) throw new SmilesGraphError(`unexpected "${ch}" in ${smiles}`);
+				if (!organic) {
+					throw new SmilesGraphError(`unexpected "${ch}" in ${smiles}`);
+				}
 				text = organic[1]!;
 			}
 			const mapNo = Number(/:(\d+)\]$/.exec(text)?.[1] ?? 0);
 			const index = atoms.length;
 			atoms.push({ text, start: i, end: i + text.length, mapNo });
-			if (previous >= 0) bonds.push({ from: previous, to: index, symbol: bond });
+			if (previous >= 0) {
+				bonds.push({ from: previous, to: index, symbol: bond });
+			}
 			bond = '';
 			previous = index;
 			i += text.length;
 		}
 	}
-	if (open.size || branches.length)
+	if (open.size || branches.length) {
 		throw new SmilesGraphError(`unclosed ring or branch in ${smiles}`);
+	}
 	return { atoms, bonds, ringNumbers };
 }
 

@@ -42,8 +42,9 @@ export function spliceTransforms(
 	if (
 		graph.atoms.length !== molecule.getAllAtoms() ||
 		graph.bonds.length !== molecule.getAllBonds()
-	)
+	) {
 		throw new SpliceUnsupported('the SMILES and its molecule do not number atoms alike');
+	}
 	const neighbours = graph.atoms.map((): { atom: number; symbol: string }[] => []);
 	for (const b of graph.bonds) {
 		neighbours[b.from]!.push({ atom: b.to, symbol: b.symbol });
@@ -56,7 +57,9 @@ export function spliceTransforms(
 	const used = new Set(graph.ringNumbers);
 	const freshRing = () => {
 		for (let n = 1; n < 100; n++) {
-			if (used.has(n)) continue;
+			if (used.has(n)) {
+				continue;
+			}
 			used.add(n);
 			return n < 10 ? String(n) : `%${n}`;
 		}
@@ -79,45 +82,59 @@ export function spliceTransforms(
 		const product = productSide(transform.smarts);
 		const atomOfMap = new Map<number, number>();
 		match.forEach((atom, query) => {
-			if (claimed.has(atom)) throw new SpliceUnsupported(`two transforms claim atom ${atom}`);
+			if (claimed.has(atom)) {
+				throw new SpliceUnsupported(`two transforms claim atom ${atom}`);
+			}
 			claimed.add(atom);
 			const mapNo = reactant.getAtomMapNo(query);
-			if (mapNo) atomOfMap.set(mapNo, atom);
-			else deleted.add(atom);
+			if (mapNo) {
+				atomOfMap.set(mapNo, atom);
+			} else {
+				deleted.add(atom);
+			}
 		});
 		const substrateAtom = (p: number) => atomOfMap.get(product.atoms[p]!.mapNo);
 		// Bonds between mapped atoms must stay as they are (no PG install changes them).
 		for (let b = 0; b < reactant.getAllBonds(); b++) {
 			const [q1, q2] = [reactant.getBondAtom(0, b), reactant.getBondAtom(1, b)];
 			const [m1, m2] = [reactant.getAtomMapNo(q1), reactant.getAtomMapNo(q2)];
-			if (!m1 || !m2) continue;
+			if (!m1 || !m2) {
+				continue;
+			}
 			const kept = product.bonds.some((pb) => {
 				const ends = [product.atoms[pb.from]!.mapNo, product.atoms[pb.to]!.mapNo];
 				return ends.includes(m1) && ends.includes(m2);
 			});
-			if (!kept)
+			if (!kept) {
 				throw new SpliceUnsupported(`${transform.smarts} breaks a bond between mapped atoms`);
+			}
 		}
 		for (const pb of product.bonds) {
 			const [a, b] = [substrateAtom(pb.from), substrateAtom(pb.to)];
-			if (a !== undefined && b !== undefined && bondOrder(a, b) !== writtenOrder(pb.symbol))
+			if (a !== undefined && b !== undefined && bondOrder(a, b) !== writtenOrder(pb.symbol)) {
 				throw new SpliceUnsupported(
 					`${transform.smarts} makes or changes a bond between mapped atoms`
 				);
+			}
 		}
 		// A charged mapped atom (the boron of a MIDA boronate) changes its valence: left to the Reactor.
-		for (const p of product.atoms)
-			if (p.mapNo && /[+-]/.test(p.text))
+		for (const p of product.atoms) {
+			if (p.mapNo && /[+-]/.test(p.text)) {
 				throw new SpliceUnsupported(`${transform.smarts} charges a mapped atom`);
+			}
+		}
 		writeNewAtoms(product, substrateAtom, graph, freshRing, (atom, kind, text, order) => {
 			add(kind === 'digit' ? digits : branches, atom, text);
 			shiftOrder(atom, order);
 		});
 		for (const atom of match) {
-			if (!deleted.has(atom)) continue;
+			if (!deleted.has(atom)) {
+				continue;
+			}
 			const [only, ...more] = neighbours[atom]!;
-			if (!only || more.length || deleted.has(only.atom))
+			if (!only || more.length || deleted.has(only.atom)) {
 				throw new SpliceUnsupported('a removed atom is not an end atom');
+			}
 			shiftOrder(only.atom, -bondOrder(atom, only.atom));
 		}
 	}
@@ -126,16 +143,20 @@ export function spliceTransforms(
 	const cut = (position: number) => edits.find((e) => e.start <= position && position < e.end);
 	for (const [atom, change] of orderChange) {
 		const written = graph.atoms[atom]!;
-		if (written.text.includes('@'))
+		if (written.text.includes('@')) {
 			throw new SpliceUnsupported('a stereo centre would gain or lose a bond');
+		}
 		const token = change ? withHydrogens(written.text, change) : written.text;
-		if (token !== written.text)
+		if (token !== written.text) {
 			edits.push({ start: written.start, end: written.start + written.text.length, text: token });
+		}
 		const after = [...(digits.get(atom) ?? [])];
 		const own = branches.get(atom) ?? [];
 		// The last new branch continues the chain when nothing follows the atom.
 		let next = written.end;
-		while (cut(next)) next = cut(next)!.end;
+		while (cut(next)) {
+			next = cut(next)!.end;
+		}
 		const endsHere = next >= smiles.length || smiles[next] === ')' || smiles[next] === '.';
 		own.forEach((branch, i) =>
 			after.push(endsHere && i === own.length - 1 ? branch : `(${branch})`)
@@ -143,8 +164,9 @@ export function spliceTransforms(
 		edits.push({ start: written.end, end: written.end, text: after.join('') });
 	}
 	let text = smiles;
-	for (const edit of edits.sort((a, b) => b.start - a.start || b.end - a.end))
+	for (const edit of edits.sort((a, b) => b.start - a.start || b.end - a.end)) {
 		text = text.slice(0, edit.start) + edit.text + text.slice(edit.end);
+	}
 	return text;
 }
 
@@ -176,7 +198,9 @@ function writeNewAtoms(
 		.filter((a) => !isNew(a.mapped) && isNew(a.atom))
 		.sort((a, b) => position(a.mapped) - position(b.mapped));
 	for (const root of attachments) {
-		if (visited.has(root.atom)) continue;
+		if (visited.has(root.atom)) {
+			continue;
+		}
 		// Ring numbers of bonds not on the depth-first tree, keyed by their two ends.
 		const ringOf = new Map<string, string>();
 		const pair = (a: number, b: number) => (a < b ? `${a}-${b}` : `${b}-${a}`);
@@ -199,8 +223,9 @@ function writeNewAtoms(
 			for (const e of edges[p]!) {
 				const key = pair(p, e.to);
 				if (tree.has(key)) {
-					if (isNew(e.to) && order.indexOf(e.to) > order.indexOf(p))
+					if (isNew(e.to) && order.indexOf(e.to) > order.indexOf(p)) {
 						children.push(e.symbol + write(e.to));
+					}
 					continue;
 				}
 				if (!isNew(e.to)) {
@@ -210,7 +235,9 @@ function writeNewAtoms(
 					out += e.symbol + ring;
 					continue;
 				}
-				if (!ringOf.has(key)) ringOf.set(key, freshRing());
+				if (!ringOf.has(key)) {
+					ringOf.set(key, freshRing());
+				}
 				out += e.symbol + ringOf.get(key)!;
 			}
 			return out + children.map((c, i) => (i === children.length - 1 ? c : `(${c})`)).join('');
@@ -227,30 +254,44 @@ function writeNewAtoms(
 /** The text to remove for an end atom: its branch `(=O)`, its tail `=O`, or its head `O=`. */
 function cutOut(smiles: string, graph: WrittenGraph, atom: number): Edit {
 	const { start, end, text } = graph.atoms[atom]!;
-	if (end !== start + text.length) throw new SpliceUnsupported('a removed atom closes a ring');
+	if (end !== start + text.length) {
+		throw new SpliceUnsupported('a removed atom closes a ring');
+	}
 	const bonded = /[-=#$:~]/.test(smiles[start - 1] ?? '') ? start - 1 : start;
-	if (/[/\\]/.test(smiles[start - 1] ?? '') || /[/\\]/.test(smiles[end] ?? ''))
+	if (/[/\\]/.test(smiles[start - 1] ?? '') || /[/\\]/.test(smiles[end] ?? '')) {
 		throw new SpliceUnsupported('a removed atom carries a double-bond stereo mark');
+	}
 	const before = smiles[bonded - 1];
-	if (before === '(' && smiles[end] === ')') return { start: bonded - 1, end: end + 1, text: '' };
+	if (before === '(' && smiles[end] === ')') {
+		return { start: bonded - 1, end: end + 1, text: '' };
+	}
 	const last = end >= smiles.length || smiles[end] === ')' || smiles[end] === '.';
-	if (last && bonded > 0 && before !== '(' && before !== '.')
+	if (last && bonded > 0 && before !== '(' && before !== '.') {
 		return { start: bonded, end, text: '' };
+	}
 	if (start === 0 || before === '.') {
 		const bond = /[-=#$:~]/.test(smiles[end] ?? '') ? 1 : 0;
-		if (/^[A-Za-z[*]/.test(smiles[end + bond] ?? '')) return { start, end: end + bond, text: '' };
+		if (/^[A-Za-z[*]/.test(smiles[end + bond] ?? '')) {
+			return { start, end: end + bond, text: '' };
+		}
 	}
 	throw new SpliceUnsupported('a removed atom sits where its text cannot be cut out');
 }
 
 /** A bracket atom with its hydrogen count lowered by `bonds` (`[nH]`, 1 → `n`); plain atoms get theirs from valence. */
 function withHydrogens(token: string, bonds: number): string {
-	if (!token.startsWith('[')) return token;
+	if (!token.startsWith('[')) {
+		return token;
+	}
 	const parts = /^\[(\d*)([A-Z][a-z]?|[a-z][a-z]?|\*)(@*)(?:H(\d*))?(.*)\]$/.exec(token);
-	if (!parts) throw new SpliceUnsupported(`cannot read the atom ${token}`);
+	if (!parts) {
+		throw new SpliceUnsupported(`cannot read the atom ${token}`);
+	}
 	const [, isotope, symbol, chiral, hydrogens, rest] = parts;
 	const count = (hydrogens === undefined ? 0 : hydrogens === '' ? 1 : Number(hydrogens)) - bonds;
-	if (count < 0) throw new SpliceUnsupported(`${token} has no hydrogen left for a new bond`);
+	if (count < 0) {
+		throw new SpliceUnsupported(`${token} has no hydrogen left for a new bond`);
+	}
 	const h = count === 0 ? '' : count === 1 ? 'H' : `H${count}`;
 	return `[${isotope}${symbol}${chiral}${h}${rest}]`;
 }

@@ -60,7 +60,9 @@ function v2000Size(lines: string[], counts: string, where: Where): StructureSize
 	checkSize(size, where);
 	// An empty symbol is a short line: the parser reports the truncation.
 	symbols.forEach((symbol, atom) => {
-		if (symbol !== '') checkMolfileSymbol(symbol, atom, where);
+		if (symbol !== '') {
+			checkMolfileSymbol(symbol, atom, where);
+		}
 	});
 	return size;
 }
@@ -78,30 +80,46 @@ function v3000Size(lines: string[], where: Where): StructureSize {
 	let continued = false;
 	let unknown: { symbol: string; atom: number } | null = null;
 	for (const line of lines) {
-		if (!line.startsWith('M  V30 ')) continue;
+		if (!line.startsWith('M  V30 ')) {
+			continue;
+		}
 		const body = line.slice(7).trim();
 		const wasContinued = continued;
 		continued = body.endsWith('-');
-		if (wasContinued) continue;
+		if (wasContinued) {
+			continue;
+		}
 		const marker = /^(BEGIN|END) (ATOM|BOND)\b/.exec(body);
 		if (marker) {
 			block = marker[1] === 'BEGIN' ? (marker[2] as 'ATOM' | 'BOND') : null;
 			continue;
 		}
-		if (block === 'BOND') bonds += 1;
-		if (block !== 'ATOM') continue;
+		if (block === 'BOND') {
+			bonds += 1;
+		}
+		if (block !== 'ATOM') {
+			continue;
+		}
 		atoms += 1;
 		const symbol = body.split(/\s+/)[1] ?? '';
 		// Atom lists ("[C,N]", "NOT [O,S]") are queries built from element symbols.
 		const isList = /^(NOT\s*)?\[/.test(symbol);
-		if (!isList && !unknown && !isMolfileSymbol(symbol)) unknown = { symbol, atom: atoms - 1 };
-		if (!isHydrogenSymbol(symbol)) heavyAtoms += 1;
+		if (!isList && !unknown && !isMolfileSymbol(symbol)) {
+			unknown = { symbol, atom: atoms - 1 };
+		}
+		if (!isHydrogenSymbol(symbol)) {
+			heavyAtoms += 1;
+		}
 		// Stop counting once a limit is passed: a huge block need not be read to its end.
-		if (atoms > STRUCTURE_LIMITS.maxAtoms || bonds > STRUCTURE_LIMITS.maxBonds) break;
+		if (atoms > STRUCTURE_LIMITS.maxAtoms || bonds > STRUCTURE_LIMITS.maxBonds) {
+			break;
+		}
 	}
 	const size = { atoms, bonds, heavyAtoms };
 	checkSize(size, where);
-	if (unknown) checkMolfileSymbol(unknown.symbol, unknown.atom, where);
+	if (unknown) {
+		checkMolfileSymbol(unknown.symbol, unknown.atom, where);
+	}
 	return size;
 }
 
@@ -115,12 +133,16 @@ export function structureSize(text: string): StructureSize {
 		const offset = text.length - text.trimStart().length;
 		return smilesSize(text.trim().split(/\s+/)[0]!, offset);
 	}
-	if (format === 'sdf') return molfileSize(splitSdf(text)[0]!.molfile, { record: 1 });
+	if (format === 'sdf') {
+		return molfileSize(splitSdf(text)[0]!.molfile, { record: 1 });
+	}
 	return molfileSize(text);
 }
 
 function checkMolfileSymbol(symbol: string, atom: number, where: Where): void {
-	if (isMolfileSymbol(symbol)) return;
+	if (isMolfileSymbol(symbol)) {
+		return;
+	}
 	const inRecord = where.record === undefined ? '' : ` of SDF record ${where.record}`;
 	throw new StructureError(
 		'unknown_element',
@@ -139,7 +161,9 @@ const LIMITS_IN_ORDER = [
 function checkSize(size: StructureSize, where: Where, verb: 'declares' | 'has' = 'has'): void {
 	for (const [field, limit, noun] of LIMITS_IN_ORDER) {
 		const max = STRUCTURE_LIMITS[limit];
-		if (size[field] <= max) continue;
+		if (size[field] <= max) {
+			continue;
+		}
 		const inRecord = where.record === undefined ? '' : ` (SDF record ${where.record})`;
 		throw new StructureError(
 			'too_large',

@@ -23,8 +23,9 @@ export function mapAtomsByText(
 	product: Molecule,
 	needed: readonly number[]
 ): AtomMap | null {
-	if (detectFormat(substrateText) !== 'smiles' || detectFormat(productText) !== 'smiles')
+	if (detectFormat(substrateText) !== 'smiles' || detectFormat(productText) !== 'smiles') {
 		return null;
+	}
 	const [a, b] = [substrateText, productText].map((t) => t.trim().split(/\s+/)[0]!) as [
 		string,
 		string
@@ -37,29 +38,40 @@ export function mapAtomsByText(
 	} catch {
 		return null;
 	}
-	if (atomsA.length !== substrate.getAllAtoms() || atomsB.length !== product.getAllAtoms())
+	if (atomsA.length !== substrate.getAllAtoms() || atomsB.length !== product.getAllAtoms()) {
 		return null;
+	}
 	let head = 0;
-	while (head < a.length && head < b.length && a[head] === b[head]) head++;
+	while (head < a.length && head < b.length && a[head] === b[head]) {
+		head++;
+	}
 	let tail = 0;
 	const room = Math.min(a.length, b.length) - head;
-	while (tail < room && a[a.length - 1 - tail] === b[b.length - 1 - tail]) tail++;
+	while (tail < room && a[a.length - 1 - tail] === b[b.length - 1 - tail]) {
+		tail++;
+	}
 	const map: AtomMap = new Map();
 	for (let i = 0; i < Math.min(atomsA.length, atomsB.length); i++) {
 		const [x, y] = [atomsA[i]!, atomsB[i]!];
-		if (x.start + x.text.length > head || y.start + y.text.length > head) break;
+		if (x.start + x.text.length > head || y.start + y.text.length > head) {
+			break;
+		}
 		map.set(i, i);
 	}
 	for (let k = 1; k <= Math.min(atomsA.length, atomsB.length); k++) {
 		const [i, j] = [atomsA.length - k, atomsB.length - k];
 		const [x, y] = [atomsA[i]!, atomsB[j]!];
-		if (x.start < a.length - tail || y.start < b.length - tail || x.text !== y.text) break;
+		if (x.start < a.length - tail || y.start < b.length - tail || x.text !== y.text) {
+			break;
+		}
 		map.set(i, j);
 	}
 	// Where the edit touches the shared text (`C(=O)C` → `C(O)C` shares the `O`), pairs whose
 	// bonds disagree are dropped, until the rest is a common substructure.
 	for (let misfits = misfitsOf(substrate, product, map); misfits.size;) {
-		for (const atom of misfits) map.delete(atom);
+		for (const atom of misfits) {
+			map.delete(atom);
+		}
 		misfits = misfitsOf(substrate, product, map);
 	}
 	return needed.every((atom) => map.has(atom)) ? map : null;
@@ -68,13 +80,19 @@ export function mapAtomsByText(
 /** Paired substrate atoms with another element, or on a bond among paired atoms that the other side lacks or orders otherwise. */
 function misfitsOf(substrate: Molecule, product: Molecule, map: AtomMap): Set<number> {
 	const misfits = new Set<number>();
-	for (const [x, y] of map) if (substrate.getAtomicNo(x) !== product.getAtomicNo(y)) misfits.add(x);
+	for (const [x, y] of map) {
+		if (substrate.getAtomicNo(x) !== product.getAtomicNo(y)) {
+			misfits.add(x);
+		}
+	}
 	const bondsAmong = (molecule: Molecule, keep: (atom: number) => number | undefined) => {
 		molecule.ensureHelperArrays(Molecule.cHelperRings);
 		const bonds = new Map<string, { ends: [number, number]; order: number | 'aromatic' }>();
 		for (let bond = 0; bond < molecule.getAllBonds(); bond++) {
 			const [u, v] = [keep(molecule.getBondAtom(0, bond)), keep(molecule.getBondAtom(1, bond))];
-			if (u === undefined || v === undefined) continue;
+			if (u === undefined || v === undefined) {
+				continue;
+			}
 			// Two writings of one ring may get different Kekulé bonds: aromatic is aromatic.
 			const order = molecule.isAromaticBond(bond) ? 'aromatic' : molecule.getBondOrder(bond);
 			bonds.set(u < v ? `${u}-${v}` : `${v}-${u}`, { ends: [u, v], order });
@@ -89,8 +107,12 @@ function misfitsOf(substrate: Molecule, product: Molecule, map: AtomMap): Set<nu
 		[inSubstrate, inProduct],
 		[inProduct, inSubstrate]
 	];
-	for (const [one, other] of pairs)
-		for (const [key, bond] of one)
-			if (other.get(key)?.order !== bond.order) bond.ends.forEach((atom) => misfits.add(atom));
+	for (const [one, other] of pairs) {
+		for (const [key, bond] of one) {
+			if (other.get(key)?.order !== bond.order) {
+				bond.ends.forEach((atom) => misfits.add(atom));
+			}
+		}
+	}
 	return misfits;
 }

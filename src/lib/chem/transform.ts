@@ -28,10 +28,13 @@ const reactionCache = new LruCache<Reaction>('combinedReactions', undefined, () 
 /** Parses one reaction SMARTS and checks its shape, e.g. `compileTransform('[C:1]=O>>[C:1]1OCCO1')`. */
 export function compileTransform(smarts: string): Compiled {
 	const stored = compiledCache.get(smarts);
-	if (stored) return stored;
+	if (stored) {
+		return stored;
+	}
 	const parts = smarts.split('>>');
-	if (parts.length !== 2)
+	if (parts.length !== 2) {
 		throw new TransformError(`"${smarts}" is not one reaction SMARTS ("reactant>>product").`);
+	}
 	let reaction: Reaction;
 	try {
 		reaction = smartsParser.parseReaction(smarts);
@@ -41,8 +44,9 @@ export function compileTransform(smarts: string): Compiled {
 		);
 	}
 	const warning = smartsParser.getSmartsWarning();
-	if (warning)
+	if (warning) {
 		throw new TransformError(`"${smarts}" uses SMARTS that openchemlib ignores: ${warning}`);
+	}
 	if (reaction.getReactants() !== 1 || reaction.getProducts() !== 1) {
 		throw new TransformError(`"${smarts}" must have one reactant and one product.`);
 	}
@@ -52,13 +56,16 @@ export function compileTransform(smarts: string): Compiled {
 	let maxMapNo = 0;
 	for (let atom = 0; atom < reactant.getAllAtoms(); atom++) {
 		const mapNo = reactant.getAtomMapNo(atom);
-		if (mapNo) mapped.push(atom);
+		if (mapNo) {
+			mapped.push(atom);
+		}
 		maxMapNo = Math.max(maxMapNo, mapNo);
 	}
-	if (mapped.length === 0)
+	if (mapped.length === 0) {
 		throw new TransformError(
 			`"${smarts}" maps no atom: nothing would say where the change happens.`
 		);
+	}
 	const compiled: Compiled = { reactant, mapped, maxMapNo, parts: parts as [string, string] };
 	compiledCache.set(smarts, compiled);
 	return compiled;
@@ -73,13 +80,17 @@ export function applyTransforms(
 	molecule: Molecule,
 	transforms: readonly SiteTransform[]
 ): Molecule {
-	if (transforms.length === 0) return molecule.getCompactCopy();
+	if (transforms.length === 0) {
+		return molecule.getCompactCopy();
+	}
 	const copy = molecule.getCompactCopy();
 	copy.ensureHelperArrays(Molecule.cHelperRings);
 	const originalMass = new Map<number, number>();
 	transforms.forEach((transform, index) => {
 		for (const atom of siteOf(copy, transform)) {
-			if (originalMass.has(atom)) throw new TransformError(`Two transforms claim atom ${atom}.`);
+			if (originalMass.has(atom)) {
+				throw new TransformError(`Two transforms claim atom ${atom}.`);
+			}
 			originalMass.set(atom, copy.getAtomMass(atom));
 			copy.setAtomMass(atom, MARKER + index);
 			// The label survives the Reactor and says which atom to give its own isotope back.
@@ -89,11 +100,14 @@ export function applyTransforms(
 	const reactor = new Reactor(combinedReaction(transforms.map((t) => t.smarts)));
 	reactor.setReactant(0, copy);
 	const product = reactor.getProducts()[0]?.[0];
-	if (!product)
+	if (!product) {
 		throw new TransformError('The transforms did not apply together at the chosen sites.');
+	}
 	for (let atom = 0; atom < product.getAllAtoms(); atom++) {
 		const label = product.getAtomCustomLabel(atom);
-		if (!label?.startsWith(']')) continue;
+		if (!label?.startsWith(']')) {
+			continue;
+		}
 		product.setAtomCustomLabel(atom, null);
 		product.setAtomMass(atom, originalMass.get(Number(label.slice(1))) ?? 0);
 	}
@@ -121,7 +135,9 @@ export function matchSite(
 	if (searcher.findFragmentInMolecule({ countMode: 'overlapping' }) > 0) {
 		for (const match of searcher.getMatchList()) {
 			const site = mapped.map((q) => match[q]!);
-			if (site.every((a) => allowed.has(a))) return { site, match };
+			if (site.every((a) => allowed.has(a))) {
+				return { site, match };
+			}
 		}
 	}
 	throw new TransformError(
@@ -137,7 +153,9 @@ export function matchSite(
 function combinedReaction(smarts: string[]): Reaction {
 	const key = smarts.join('\u0001');
 	const stored = reactionCache.get(key);
-	if (stored) return stored;
+	if (stored) {
+		return stored;
+	}
 	const reactants: string[] = [];
 	const products: string[] = [];
 	const ranges: number[] = [];
@@ -155,7 +173,9 @@ function combinedReaction(smarts: string[]): Reaction {
 	const reactant = reaction.getReactant(0);
 	for (let atom = 0; atom < reactant.getAllAtoms(); atom++) {
 		const mapNo = reactant.getAtomMapNo(atom);
-		if (mapNo) reactant.setAtomMass(atom, MARKER + ranges.findIndex((end) => mapNo <= end));
+		if (mapNo) {
+			reactant.setAtomMass(atom, MARKER + ranges.findIndex((end) => mapNo <= end));
+		}
 	}
 	reactionCache.set(key, reaction);
 	return reaction;

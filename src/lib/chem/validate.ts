@@ -48,7 +48,9 @@ export function validateMolecule(molecule: Molecule, where: AtomDescriber): stri
 	const warnings: string[] = [];
 	// Its valence check is the getFreeValence() test above (free = max − occupied), so what is left
 	// can only warn.
-	if (where.warnings === false) return warnings;
+	if (where.warnings === false) {
+		return warnings;
+	}
 	try {
 		molecule.validate();
 	} catch (caught) {

@@ -18,8 +18,9 @@ export async function callApi<T>(
 	let response: Response;
 	try {
 		const headers = new Headers(init.headers);
-		if (typeof init.body === 'string' && !headers.has('content-type'))
+		if (typeof init.body === 'string' && !headers.has('content-type')) {
 			headers.set('content-type', 'application/json');
+		}
 		headers.set('accept', 'application/json');
 		response = await fetcher(url, { ...init, headers });
 	} catch {
@@ -31,7 +32,9 @@ export async function callApi<T>(
 		};
 	}
 	const body: unknown = await response.json().catch(() => null);
-	if (response.ok) return { ok: true, status: response.status, data: body as T };
+	if (response.ok) {
+		return { ok: true, status: response.status, data: body as T };
+	}
 	const error = (body as { error?: { code?: string; message?: string; details?: unknown } } | null)
 		?.error;
 	return {

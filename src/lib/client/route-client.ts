@@ -48,8 +48,9 @@ export class RouteClient {
 			jsonBody('PUT', { version, document }),
 			this.fetcher
 		);
-		if (!result.ok && result.status !== 409)
+		if (!result.ok && result.status !== 409) {
 			this.toasts.show(`Not saved: ${result.message}`, 'problem');
+		}
 		return result;
 	}
 
@@ -66,7 +67,9 @@ export class RouteClient {
 	async check(routeId: string): Promise<Map<string, StepCheck> | 'unavailable' | null> {
 		const result = await callApi<CheckAnswer>(`/api/routes/${routeId}/check`, {}, this.fetcher);
 		if (!result.ok) {
-			if (result.status === 404) return 'unavailable';
+			if (result.status === 404) {
+				return 'unavailable';
+			}
 			this.toasts.show(`The clash check failed: ${result.message}`, 'problem');
 			return null;
 		}
@@ -85,7 +88,9 @@ export class RouteClient {
 	/** Condition classes with their labels, or null until `GET /api/rules` exists (raw ids are shown then). */
 	async conditionLabels(): Promise<ConditionLabel[] | null> {
 		const result = await callApi<unknown>('/api/rules', {}, this.fetcher);
-		if (!result.ok) return null;
+		if (!result.ok) {
+			return null;
+		}
 		const body = result.data;
 		const inner =
 			body && typeof body === 'object' && 'conditions' in body
@@ -117,8 +122,9 @@ export class RouteClient {
 			jsonBody('POST', { version }),
 			this.fetcher
 		);
-		if (!result.ok && result.status !== 409)
+		if (!result.ok && result.status !== 409) {
 			this.toasts.show(`Plan ${rank} was not saved: ${result.message}`, 'problem');
+		}
 		return result;
 	}
 
@@ -129,7 +135,9 @@ export class RouteClient {
 			{},
 			this.fetcher
 		);
-		if (!result.ok) return null;
+		if (!result.ok) {
+			return null;
+		}
 		return {
 			groups: labelMap(result.data.groups),
 			protectingGroups: labelMap(result.data.protectingGroups)
@@ -149,7 +157,9 @@ export class RouteClient {
 
 	async #call<T>(url: string, init: RequestInit, failure: string): Promise<ApiResult<T>> {
 		const result = await callApi<T>(url, init, this.fetcher);
-		if (!result.ok) this.toasts.show(`${failure}: ${result.message}`, 'problem');
+		if (!result.ok) {
+			this.toasts.show(`${failure}: ${result.message}`, 'problem');
+		}
 		return result;
 	}
 }

@@ -50,23 +50,52 @@ export function graphProblems(doc: RouteDocument): RouteProblem[] {
 	const problems: RouteProblem[] = [];
 	const known = new Set<string>();
 	doc.intermediates.forEach((node, i) => {
-		if (known.has(node.id)) problems.push({ path: ['intermediates', i, 'id'], message: `Duplicate intermediate id "${node.id}".` });
+		if (known.has(node.id)) {
+			problems.push({
+				path: ['intermediates', i, 'id'],
+				message: `Duplicate intermediate id "${node.id}".`
+			});
+		}
 		known.add(node.id);
 	});
 	const stepIds = new Set<string>();
 	doc.steps.forEach((step, i) => {
-		if (stepIds.has(step.id)) problems.push({ path: ['steps', i, 'id'], message: `Duplicate step id "${step.id}".` });
+		if (stepIds.has(step.id)) {
+			problems.push({ path: ['steps', i, 'id'], message: `Duplicate step id "${step.id}".` });
+		}
 		stepIds.add(step.id);
 		step.from.forEach((from, j) => {
-			if (!known.has(from)) problems.push({ path: ['steps', i, 'from', j], message: `Step "${step.id}" starts from unknown intermediate "${from}".` });
+			if (!known.has(from)) {
+				problems.push({
+					path: ['steps', i, 'from', j],
+					message: `Step "${step.id}" starts from unknown intermediate "${from}".`
+				});
+			}
 		});
-		if (!known.has(step.to)) problems.push({ path: ['steps', i, 'to'], message: `Step "${step.id}" leads to unknown intermediate "${step.to}".` });
-		if (step.from.includes(step.to)) problems.push({ path: ['steps', i, 'to'], message: `Step "${step.id}" leads back to its own starting intermediate "${step.to}".` });
-		if (new Set(step.from).size !== step.from.length) problems.push({ path: ['steps', i, 'from'], message: `Step "${step.id}" lists the same starting intermediate twice.` });
+		if (!known.has(step.to)) {
+			problems.push({
+				path: ['steps', i, 'to'],
+				message: `Step "${step.id}" leads to unknown intermediate "${step.to}".`
+			});
+		}
+		if (step.from.includes(step.to)) {
+			problems.push({
+				path: ['steps', i, 'to'],
+				message: `Step "${step.id}" leads back to its own starting intermediate "${step.to}".`
+			});
+		}
+		if (new Set(step.from).size !== step.from.length) {
+			problems.push({
+				path: ['steps', i, 'from'],
+				message: `Step "${step.id}" lists the same starting intermediate twice.`
+			});
+		}
 	});
 	if (problems.length === 0) {
 		const cycle = findCycle(doc);
-		if (cycle) problems.push({ path: ['steps'], message: `The steps form a cycle: ${cycle.join(' → ')}.` });
+		if (cycle) {
+			problems.push({ path: ['steps'], message: `The steps form a cycle: ${cycle.join(' → ')}.` });
+		}
 	}
 	return problems;
 }
@@ -74,17 +103,25 @@ export function graphProblems(doc: RouteDocument): RouteProblem[] {
 /** A cycle through the intermediates, as ids in order, or null (depth-first search). */
 function findCycle(doc: RouteDocument): string[] | null {
 	const next = new Map<string, string[]>();
-	for (const step of doc.steps) for (const from of step.from) next.set(from, [...(next.get(from) ?? []), step.to]);
+	for (const step of doc.steps) {
+		for (const from of step.from) {
+			next.set(from, [...(next.get(from) ?? []), step.to]);
+		}
+	}
 	const state = new Map<string, 'open' | 'done'>();
 	const trail: string[] = [];
 	const visit = (id: string): string[] | null => {
 		state.set(id, 'open');
 		trail.push(id);
 		for (const to of next.get(id) ?? []) {
-			if (state.get(to) === 'open') return [...trail.slice(trail.indexOf(to)), to];
+			if (state.get(to) === 'open') {
+				return [...trail.slice(trail.indexOf(to)), to];
+			}
 			if (!state.has(to)) {
 				const found = visit(to);
-				if (found) return found;
+				if (found) {
+					return found;
+				}
 			}
 		}
 		trail.pop();
@@ -94,13 +131,16 @@ function findCycle(doc: RouteDocument): string[] | null {
 	for (const node of doc.intermediates) {
 		if (!state.has(node.id)) {
 			const found = visit(node.id);
-			if (found) return found;
+			if (found) {
+				return found;
+			}
 		}
 	}
 	return null;
 }
 
-export type RouteValidation = { ok: true; document: RouteDocument } | { ok: false; problems: RouteProblem[] };
+export type RouteValidation =
+	{ ok: true; document: RouteDocument } | { ok: false; problems: RouteProblem[] };
 
 /** Validates shape and graph, e.g. a step whose `to` names no intermediate is a problem. */
 export function validateRouteDocument(input: unknown): RouteValidation {
@@ -108,7 +148,10 @@ export function validateRouteDocument(input: unknown): RouteValidation {
 	if (!parsed.success) {
 		return {
 			ok: false,
-			problems: parsed.error.issues.map((issue) => ({ path: issue.path as (string | number)[], message: issue.message }))
+			problems: parsed.error.issues.map((issue) => ({
+				path: issue.path as (string | number)[],
+				message: issue.message
+			}))
 		};
 	}
 	const problems = graphProblems(parsed.data);

@@ -12,10 +12,14 @@ export function stepOrder(doc: RouteDocument): RouteStep[] {
 	const depth = new Map<string, number>();
 	const depthOf = (id: string, trail: Set<string>): number => {
 		const known = depth.get(id);
-		if (known !== undefined) return known;
+		if (known !== undefined) {
+			return known;
+		}
 		const step = madeBy.get(id);
 		// A start of the route, or (in a document that is not valid yet) a cycle: stop there.
-		if (!step || trail.has(id)) return 0;
+		if (!step || trail.has(id)) {
+			return 0;
+		}
 		trail.add(id);
 		const d = 1 + Math.max(...step.from.map((from) => depthOf(from, trail)));
 		depth.set(id, d);
@@ -52,7 +56,9 @@ export function stepLabeller(doc: RouteDocument): (id: string) => string {
 	const names = stepNames(doc);
 	const reagents = new Map(doc.steps.map((step) => [step.id, step.reagents?.trim() ?? '']));
 	return (id) => {
-		if (!READABLE_ID.test(id)) return names.get(id) ?? `step "${id}"`;
+		if (!READABLE_ID.test(id)) {
+			return names.get(id) ?? `step "${id}"`;
+		}
 		const text = reagents.get(id) ?? '';
 		const short =
 			text.length > MAX_REAGENT_CHARS ? `${text.slice(0, MAX_REAGENT_CHARS - 1).trimEnd()}…` : text;

@@ -97,11 +97,18 @@ function spellingPattern(folded: string): string {
 		const ch = folded[i] as string;
 		if (/[\s,;/·]/.test(ch)) {
 			let run = '';
-			while (i < folded.length && /[\s,;/·]/.test(folded[i] as string)) run += folded[i++];
-			if (/[,;/]/.test(run)) out += '\\s*[,;/]\\s*';
+			while (i < folded.length && /[\s,;/·]/.test(folded[i] as string)) {
+				run += folded[i++];
+			}
+			if (/[,;/]/.test(run)) {
+				out += '\\s*[,;/]\\s*';
+			}
 			// An adduct is written with a dot, dash or slash: "HF·py", "HF-py" and "HF/py" are one reagent.
-			else if (run.includes('·')) out += '(?:\\s*[·.*/-]\\s*|\\s+)';
-			else out += '\\s+';
+			else if (run.includes('·')) {
+				out += '(?:\\s*[·.*/-]\\s*|\\s+)';
+			} else {
+				out += '\\s+';
+			}
 			continue;
 		}
 		out += ch === '-' ? '[-\\s]' : escapeRegExp(ch);
@@ -140,10 +147,14 @@ function compileBuckets(spellings: Spelling[]): Map<string, Bucket> {
 /** The longest spelling in `buckets` that starts exactly at `at`, if any. */
 function matchAt(buckets: Map<string, Bucket>, text: string, at: number): Candidate | undefined {
 	const bucket = buckets.get(text[at] as string);
-	if (!bucket) return undefined;
+	if (!bucket) {
+		return undefined;
+	}
 	bucket.regex.lastIndex = at;
 	const m = bucket.regex.exec(text);
-	if (!m) return undefined;
+	if (!m) {
+		return undefined;
+	}
 	const group = m.findIndex((g, i) => i > 0 && g !== undefined);
 	const spelling = bucket.owners[group - 1];
 	return spelling && { start: at, end: at + m[0].length, spelling };
@@ -151,18 +162,28 @@ function matchAt(buckets: Map<string, Bucket>, text: string, at: number): Candid
 
 /** Whether a match may stand for what was typed: formula case and metal context (see spelling.ts). */
 function fits(candidate: Candidate | undefined, cased: string): Candidate | undefined {
-	if (!candidate) return undefined;
+	if (!candidate) {
+		return undefined;
+	}
 	const { start, end, spelling } = candidate;
-	if (spelling.formula && !formulaFits(spelling.written, cased.slice(start, end))) return undefined;
-	if (spelling.metal && !standsAlone(cased, start, end)) return undefined;
+	if (spelling.formula && !formulaFits(spelling.written, cased.slice(start, end))) {
+		return undefined;
+	}
+	if (spelling.metal && !standsAlone(cased, start, end)) {
+		return undefined;
+	}
 	return candidate;
 }
 
 /** A word starts here, and not inside a formula's brackets: "CO" in "Co2(CO)8" starts nothing. */
 function startsWord(text: string, at: number): boolean {
-	if (at === 0) return true;
+	if (at === 0) {
+		return true;
+	}
 	const previous = text[at - 1] as string;
-	if (WORD_CHAR.test(previous)) return false;
+	if (WORD_CHAR.test(previous)) {
+		return false;
+	}
 	return !(/[([]/.test(previous) && at >= 2 && /[\p{L}\p{N})\]]/u.test(text[at - 2] as string));
 }
 
@@ -210,14 +231,20 @@ function dropUnpairedBrackets(text: string): string {
 	const chars = [...text];
 	const open: number[] = [];
 	for (const [i, ch] of chars.entries()) {
-		if ('([{'.includes(ch)) open.push(i);
-		else if (ch in PARTNER) {
+		if ('([{'.includes(ch)) {
+			open.push(i);
+		} else if (ch in PARTNER) {
 			const last = open.at(-1);
-			if (last !== undefined && chars[last] === PARTNER[ch]) open.pop();
-			else chars[i] = '';
+			if (last !== undefined && chars[last] === PARTNER[ch]) {
+				open.pop();
+			} else {
+				chars[i] = '';
+			}
 		}
 	}
-	for (const i of open) chars[i] = '';
+	for (const i of open) {
+		chars[i] = '';
+	}
 	return chars.join('');
 }
 
@@ -244,7 +271,9 @@ export function compileClassifier(reagents: readonly Reagent[]) {
 	}
 	// "cocl2" could be COCl2 or CoCl2: a folded spelling two reagents share matches only as written.
 	const owners = new Map<string, Set<Reagent>>();
-	for (const s of loose) owners.set(s.folded, (owners.get(s.folded) ?? new Set()).add(s.reagent));
+	for (const s of loose) {
+		owners.set(s.folded, (owners.get(s.folded) ?? new Set()).add(s.reagent));
+	}
 	const looseBuckets = compileBuckets(loose.filter((s) => owners.get(s.folded)?.size === 1));
 	const exactBuckets = compileBuckets(exact);
 
@@ -263,16 +292,24 @@ export function compileClassifier(reagents: readonly Reagent[]) {
 			...inContext(reagent, present)
 		}));
 		const consumed = text.split('');
-		for (const c of taken) for (let i = c.start; i < c.end; i++) consumed[i] = ' ';
+		for (const c of taken) {
+			for (let i = c.start; i < c.end; i++) {
+				consumed[i] = ' ';
+			}
+		}
 
 		for (const m of folded.matchAll(TEMPERATURE)) {
 			const start = m.index;
 			const end = start + m[0].length;
-			if (consumed.slice(start, end).join('').trim() === '') continue;
+			if (consumed.slice(start, end).join('').trim() === '') {
+				continue;
+			}
 			if (Number(m[1]) >= HEAT_THRESHOLD_CELSIUS) {
 				matched.push({ reagent: 'heat', text: text.slice(start, end), conditions: ['heat'] });
 			}
-			for (let i = start; i < end; i++) consumed[i] = ' ';
+			for (let i = start; i < end; i++) {
+				consumed[i] = ' ';
+			}
 		}
 
 		const rest = consumed.join('');
@@ -286,7 +323,9 @@ export function compileClassifier(reagents: readonly Reagent[]) {
 		const found = new Set(matched.flatMap((m) => m.conditions));
 		const hazards = new Map<string, string>();
 		for (const { spelling } of taken) {
-			if (spelling.reagent.hazard) hazards.set(spelling.reagent.name, spelling.reagent.hazard);
+			if (spelling.reagent.hazard) {
+				hazards.set(spelling.reagent.name, spelling.reagent.hazard);
+			}
 		}
 
 		return {

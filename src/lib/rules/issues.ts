@@ -6,11 +6,16 @@ import type { z } from 'zod';
 
 /** A path inside a JSON file as people read it, e.g. `[12, 'conditions', 0]` → `[12].conditions[0]`. */
 export function formatPath(path: readonly PropertyKey[]): string {
-	if (path.length === 0) return '(top level)';
+	if (path.length === 0) {
+		return '(top level)';
+	}
 	let out = '';
 	for (const key of path) {
-		if (typeof key === 'number') out += `[${key}]`;
-		else out += out === '' ? String(key) : `.${String(key)}`;
+		if (typeof key === 'number') {
+			out += `[${key}]`;
+		} else {
+			out += out === '' ? String(key) : `.${String(key)}`;
+		}
 	}
 	return out;
 }

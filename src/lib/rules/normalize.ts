@@ -8,14 +8,24 @@ const DOTS = new Set(['·', '•', '∙', '⋅', '・', '‧', '●']);
 const QUOTES = new Set(['’', '‘', 'ʼ', '′', '`']);
 
 function foldChar(ch: string, keepCase: boolean): string {
-	if (DASHES.has(ch)) return '-';
-	if (DOTS.has(ch)) return '·';
-	if (QUOTES.has(ch)) return "'";
-	if (/\s/.test(ch)) return ' ';
+	if (DASHES.has(ch)) {
+		return '-';
+	}
+	if (DOTS.has(ch)) {
+		return '·';
+	}
+	if (QUOTES.has(ch)) {
+		return "'";
+	}
+	if (/\s/.test(ch)) {
+		return ' ';
+	}
 	// NFKC turns subscripts (₂ → 2), superscripts and full-width forms into plain characters.
 	const compat = ch.normalize('NFKC');
 	const plain = compat.length === 1 ? compat : ch;
-	if (keepCase) return plain;
+	if (keepCase) {
+		return plain;
+	}
 	const lower = plain.toLowerCase();
 	return lower.length === 1 ? lower : plain;
 }
@@ -23,6 +33,8 @@ function foldChar(ch: string, keepCase: boolean): string {
 /** Folds text for matching, keeping its length, e.g. `foldText('Et₃N•3HF')` → `'et3n·3hf'`. */
 export function foldText(text: string, keepCase = false): string {
 	let out = '';
-	for (const ch of text.split('')) out += foldChar(ch, keepCase);
+	for (const ch of text.split('')) {
+		out += foldChar(ch, keepCase);
+	}
 	return out;
 }

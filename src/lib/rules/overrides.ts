@@ -84,19 +84,27 @@ function expandAliases(rows: ReactivityOverride[]): RuleOverrides['reactivity'] 
 export function parseOverrides(input: unknown): RuleOverrides {
 	const label = 'overrides';
 	const result = ruleOverridesSchema.safeParse(input);
-	if (!result.success) throw new RuleTableError(formatZodIssues(label, result.error));
+	if (!result.success) {
+		throw new RuleTableError(formatZodIssues(label, result.error));
+	}
 	const problems: string[] = [];
 	const seen = new Set<string>();
 	result.data.stability.forEach((row, index) => {
 		const key = `stability ${row.protectingGroup} × ${row.condition}`;
-		if (seen.has(key)) problems.push(formatIssue(label, ['stability', index], `duplicate ${key}`));
+		if (seen.has(key)) {
+			problems.push(formatIssue(label, ['stability', index], `duplicate ${key}`));
+		}
 		seen.add(key);
 	});
 	result.data.reactivity.forEach((row, index) => {
 		const key = `reactivity ${row.group} × ${row.condition}`;
-		if (seen.has(key)) problems.push(formatIssue(label, ['reactivity', index], `duplicate ${key}`));
+		if (seen.has(key)) {
+			problems.push(formatIssue(label, ['reactivity', index], `duplicate ${key}`));
+		}
 		seen.add(key);
 	});
-	if (problems.length > 0) throw new RuleTableError(problems);
+	if (problems.length > 0) {
+		throw new RuleTableError(problems);
+	}
 	return { ...result.data, reactivity: expandAliases(result.data.reactivity) };
 }

@@ -11,7 +11,9 @@ export function preferenceRank(
 	pg: string
 ): number {
 	const row = table.preferences.find((r) => (r.groups as readonly string[]).includes(group));
-	if (!row) return 0;
+	if (!row) {
+		return 0;
+	}
 	const at = (row.order as readonly string[]).indexOf(pg);
 	return at < 0 ? row.order.length : at;
 }

@@ -53,6 +53,8 @@ export function isNoiseFragment(fragment: string): boolean {
 export function standsAlone(text: string, start: number, end: number): boolean {
 	const before = text.slice(0, start).split(CONTEXT_SPLIT).pop() ?? '';
 	const after = text.slice(end).split(CONTEXT_SPLIT)[0] ?? '';
-	if (/^[([]/.test(after)) return false; // "Zn(BH4)2": a formula goes on
+	if (/^[([]/.test(after)) {
+		return false;
+	} // "Zn(BH4)2": a formula goes on
 	return isFillerFragment(before, METAL_FORMS) && isFillerFragment(after, METAL_FORMS);
 }

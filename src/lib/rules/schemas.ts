@@ -190,8 +190,9 @@ export const whereOnSchema = z
 		const seen = new Set<string>();
 		entries.forEach((entry, i) => {
 			const key = `${entry.site} ${entry.condition}`;
-			if (seen.has(key))
+			if (seen.has(key)) {
 				ctx.addIssue({ code: 'custom', path: [i], message: `a second entry for ${key}` });
+			}
 			seen.add(key);
 		});
 	});

@@ -48,7 +48,9 @@ export function formulaKey(text: string): string {
 /** True when the text, as written, is a formula of element symbols, e.g. `'CoCl2'`, not `'LAH'`. */
 export function readsAsFormula(text: string): boolean {
 	const key = formulaKey(text);
-	if (!/[A-Z]/.test(key)) return false;
+	if (!/[A-Z]/.test(key)) {
+		return false;
+	}
 	const tokens = key.match(/[A-Z][a-z]?|\d+|[()[\]·]|[^]/g) ?? [];
 	return tokens.every((token) => /^(?:\d+|[()[\]·])$/.test(token) || ELEMENT_SYMBOLS.has(token));
 }
@@ -71,6 +73,8 @@ export function formulaFits(listed: string, typed: string): boolean {
 /** The key under which the loader checks that no two reagents claim one spelling. */
 export function spellingKey(spelling: string, exactCase: boolean): string {
 	const trimmed = spelling.trim();
-	if (exactCase || readsAsFormula(trimmed)) return `as written: ${formulaKey(trimmed)}`;
+	if (exactCase || readsAsFormula(trimmed)) {
+		return `as written: ${formulaKey(trimmed)}`;
+	}
 	return foldText(trimmed).replace(/\s+/g, ' ');
 }

@@ -88,7 +88,9 @@ export interface RuleTable {
 function deepFreeze<T>(value: T): T {
 	if (value && typeof value === 'object' && !Object.isFrozen(value)) {
 		Object.freeze(value);
-		for (const inner of Object.values(value)) deepFreeze(inner);
+		for (const inner of Object.values(value)) {
+			deepFreeze(inner);
+		}
 	}
 	return value;
 }
@@ -131,7 +133,9 @@ function worstForReagents<A extends { rating: string }>(
 	own: (reagent: string) => A | undefined,
 	severity: Readonly<Record<string, number>>
 ): A {
-	if (reagents.length === 0) return rowAnswer;
+	if (reagents.length === 0) {
+		return rowAnswer;
+	}
 	return reagents
 		.map((name) => own(name) ?? rowAnswer)
 		.reduce((worst, next) => (severity[next.rating]! > severity[worst.rating]! ? next : worst));
@@ -207,12 +211,16 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 		overrides,
 		condition(id) {
 			const found = base.conditions.get(id);
-			if (!found) throw new Error(`unknown condition id "${id}"`);
+			if (!found) {
+				throw new Error(`unknown condition id "${id}"`);
+			}
 			return found;
 		},
 		protectingGroup(id) {
 			const found = base.pgs.get(id);
-			if (!found) throw new Error(`unknown protecting group id "${id}"`);
+			if (!found) {
+				throw new Error(`unknown protecting group id "${id}"`);
+			}
 			return found;
 		},
 		stabilityOf(pg, condition, reagents = [], site) {
@@ -230,9 +238,13 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 				}
 				// What the PG sits on (an indole N, a phenol O) counts at the same level, before the row's rating.
 				const onSite = site && row.whereOn.find((w) => w.site === site && w.condition === id);
-				if (onSite) return withReagentRatings(row, id, onSite.rating, reagents, onSite);
+				if (onSite) {
+					return withReagentRatings(row, id, onSite.rating, reagents, onSite);
+				}
 				const rating = row.stability[id];
-				if (rating !== undefined) return withReagentRatings(row, id, rating, reagents);
+				if (rating !== undefined) {
+					return withReagentRatings(row, id, rating, reagents);
+				}
 			}
 			throw new Error(`${pg} has no rating under ${condition} or its broader class`);
 		},
@@ -247,7 +259,9 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 			for (const id of withBroader(condition)) {
 				const override = reactivityOverride.get(pairKey(group, id));
 				if (override) {
-					if (override.rating === 'none') return undefined;
+					if (override.rating === 'none') {
+						return undefined;
+					}
 					return {
 						rating: override.rating,
 						reason: override.reason,
@@ -256,11 +270,17 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 					};
 				}
 				const entry = base.reactivity.get(pairKey(group, id));
-				if (!entry) continue;
+				if (!entry) {
+					continue;
+				}
 				const { rating, reason } = reactivityForReagents(entry, reagents);
-				if (rating === 'none') return undefined;
+				if (rating === 'none') {
+					return undefined;
+				}
 				const answer: ReactivityAnswer = { rating, reason, source: entry.source, layer: 'default' };
-				if (rating === 'caution' && entry.usuallyMasked) answer.usuallyMasked = true;
+				if (rating === 'caution' && entry.usuallyMasked) {
+					answer.usuallyMasked = true;
+				}
 				return answer;
 			}
 			return undefined;

@@ -24,7 +24,7 @@ export function checkInstallMethods(pgs: ProtectingGroupConditions[], problems: 
 		pg.install.methods.forEach((method, m) => {
 			const where = [index, 'install', 'methods', m];
 			(method.takes ?? []).forEach((group, i) => {
-				if (!drawn.has(group))
+				if (!drawn.has(group)) {
 					problems.push(
 						formatIssue(
 							RULE_FILES.protectingGroups,
@@ -32,10 +32,11 @@ export function checkInstallMethods(pgs: ProtectingGroupConditions[], problems: 
 							`"${group}" is not drawn by any of ${pg.id}'s install transforms`
 						)
 					);
+				}
 			});
 			const takes = new Set<string>(method.takes ?? drawn);
 			method.prefers.forEach((entry, i) => {
-				if ((entry.over as readonly string[]).includes(entry.group))
+				if ((entry.over as readonly string[]).includes(entry.group)) {
 					problems.push(
 						formatIssue(
 							RULE_FILES.protectingGroups,
@@ -43,8 +44,9 @@ export function checkInstallMethods(pgs: ProtectingGroupConditions[], problems: 
 							`"${entry.group}" cannot be preferred over itself`
 						)
 					);
+				}
 				for (const group of [entry.group, ...entry.over]) {
-					if (!takes.has(group))
+					if (!takes.has(group)) {
 						problems.push(
 							formatIssue(
 								RULE_FILES.protectingGroups,
@@ -52,6 +54,7 @@ export function checkInstallMethods(pgs: ProtectingGroupConditions[], problems: 
 								`"${group}" is not a group this recipe takes`
 							)
 						);
+					}
 				}
 			});
 		});
@@ -72,7 +75,7 @@ export function checkPreferences(
 	rows.forEach((row, index) => {
 		row.groups.forEach((group, i) => {
 			const first = seen.get(group);
-			if (first !== undefined)
+			if (first !== undefined) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.preferences,
@@ -80,18 +83,21 @@ export function checkPreferences(
 						`"${group}" already has a preference row ([${first}])`
 					)
 				);
-			else seen.set(group, index);
+			} else {
+				seen.set(group, index);
+			}
 		});
 		const listed = new Set<string>();
 		row.order.forEach((id, i) => {
-			if (listed.has(id))
+			if (listed.has(id)) {
 				problems.push(
 					formatIssue(RULE_FILES.preferences, [index, 'order', i], `${id} listed twice`)
 				);
+			}
 			listed.add(id);
 			const pg = byId.get(id);
 			const missing = pg ? row.groups.filter((g) => !protectsOf(pg).includes(g)) : [];
-			if (missing.length)
+			if (missing.length) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.preferences,
@@ -99,9 +105,10 @@ export function checkPreferences(
 						`${id} does not protect ${missing.map((g) => `"${g}"`).join(', ')}`
 					)
 				);
+			}
 			// A PG no recipe can put on the group would never be offered for it: a stale row.
 			const uninstallable = pg && !missing.length ? row.groups.filter((g) => !takenBy(pg, g)) : [];
-			if (uninstallable.length)
+			if (uninstallable.length) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.preferences,
@@ -109,6 +116,7 @@ export function checkPreferences(
 						`no install recipe of ${id} takes ${uninstallable.map((g) => `"${g}"`).join(', ')}`
 					)
 				);
+			}
 		});
 	});
 }

@@ -19,12 +19,13 @@ function reagentProblem(
 	accepts: (classes: string[]) => boolean,
 	condition: string
 ): string | undefined {
-	if (!reagent)
+	if (!reagent) {
 		return formatIssue(
 			file,
 			where,
 			`unknown reagent "${name}" (not a name in ${RULE_FILES.reagents})`
 		);
+	}
 	if (!accepts(classesOf(reagent))) {
 		return formatIssue(
 			file,
@@ -53,7 +54,9 @@ export function checkReagentRatings(
 				(classes) => classes.includes(entry.condition),
 				entry.condition
 			);
-			if (problem) problems.push(problem);
+			if (problem) {
+				problems.push(problem);
+			}
 		});
 	});
 }
@@ -84,7 +87,9 @@ export function checkReactivityReagentRatings(
 				(classes) => classes.some((c) => covered.includes(c)),
 				row.condition
 			);
-			if (problem) problems.push(problem);
+			if (problem) {
+				problems.push(problem);
+			}
 		});
 	});
 }

@@ -36,7 +36,9 @@ export interface RuleData {
 
 function parseFile<S extends z.ZodType>(schema: S, file: string, raw: unknown, problems: string[]) {
 	const result = schema.safeParse(raw);
-	if (result.success) return result.data as z.output<S>;
+	if (result.success) {
+		return result.data as z.output<S>;
+	}
 	problems.push(...formatZodIssues(file, result.error));
 	return undefined;
 }
@@ -59,7 +61,9 @@ function checkEachOnce(
 					`duplicate ${what} "${id}" (first at [${firstIndex.get(id)}])`
 				)
 			);
-		} else firstIndex.set(id, index);
+		} else {
+			firstIndex.set(id, index);
+		}
 	});
 	const missing = expected.filter((id) => !firstIndex.has(id));
 	if (missing.length > 0) {
@@ -89,7 +93,9 @@ function checkReagentSpellings(reagents: readonly Reagent[], problems: string[])
 						`"${spelling}" is already a spelling of "${previous}"`
 					)
 				);
-			} else owner.set(key, reagent.name);
+			} else {
+				owner.set(key, reagent.name);
+			}
 		}
 	});
 }
@@ -103,7 +109,9 @@ function checkReactivityPairs(entries: readonly ReactivityEntry[], problems: str
 			problems.push(
 				formatIssue(RULE_FILES.reactivity, [index], `duplicate pair ${key} (first at [${first}])`)
 			);
-		} else seen.set(key, index);
+		} else {
+			seen.set(key, index);
+		}
 	});
 }
 
@@ -157,18 +165,39 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 			problems
 		);
 	}
-	if (conditions) checkRefinements(conditions, problems);
-	if (conditions && protectingGroups) checkBroadRatings(conditions, protectingGroups, problems);
-	if (conditions && reactivity) checkNoneRows(conditions, reactivity, problems);
-	if (reagents) checkReagentSpellings(reagents, problems);
-	if (reagents) checkContextTags(reagents, problems);
-	if (reagents && protectingGroups) checkReagentRatings(protectingGroups, reagents, problems);
-	if (reagents && reactivity && conditions)
+	if (conditions) {
+		checkRefinements(conditions, problems);
+	}
+	if (conditions && protectingGroups) {
+		checkBroadRatings(conditions, protectingGroups, problems);
+	}
+	if (conditions && reactivity) {
+		checkNoneRows(conditions, reactivity, problems);
+	}
+	if (reagents) {
+		checkReagentSpellings(reagents, problems);
+	}
+	if (reagents) {
+		checkContextTags(reagents, problems);
+	}
+	if (reagents && protectingGroups) {
+		checkReagentRatings(protectingGroups, reagents, problems);
+	}
+	if (reagents && reactivity && conditions) {
 		checkReactivityReagentRatings(reactivity, reagents, conditions, problems);
-	if (protectingGroups) checkTransformCoverage(protectingGroups, problems);
-	if (reactivity) checkReactivityPairs(reactivity, problems);
-	if (protectingGroups) checkInstallMethods(protectingGroups, problems);
-	if (protectingGroups && preferences) checkPreferences(protectingGroups, preferences, problems);
+	}
+	if (protectingGroups) {
+		checkTransformCoverage(protectingGroups, problems);
+	}
+	if (reactivity) {
+		checkReactivityPairs(reactivity, problems);
+	}
+	if (protectingGroups) {
+		checkInstallMethods(protectingGroups, problems);
+	}
+	if (protectingGroups && preferences) {
+		checkPreferences(protectingGroups, preferences, problems);
+	}
 
 	if (
 		problems.length > 0 ||
@@ -188,7 +217,7 @@ function checkContextTags(reagents: readonly Reagent[], problems: string[]) {
 	const carried = new Set(reagents.flatMap((r) => r.tags ?? []));
 	reagents.forEach((reagent, index) => {
 		(reagent.when ?? []).forEach((entry, i) => {
-			if (!carried.has(entry.tag))
+			if (!carried.has(entry.tag)) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.reagents,
@@ -196,6 +225,7 @@ function checkContextTags(reagents: readonly Reagent[], problems: string[]) {
 						`no reagent carries the tag "${entry.tag}", so this context never applies`
 					)
 				);
+			}
 		});
 	});
 }
@@ -205,12 +235,14 @@ function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: stri
 	pgs.forEach((pg, index) => {
 		// `protects` belongs to the row's perception half (loose here; chem/patterns.ts validates it).
 		const protects = (pg as { protects?: unknown }).protects;
-		if (!Array.isArray(protects)) return;
+		if (!Array.isArray(protects)) {
+			return;
+		}
 		const drawn = pg.install.transforms.flatMap((t) => t.groups);
 		const where = [index, 'install', 'transforms'];
 		for (const group of protects) {
 			const count = drawn.filter((g) => g === group).length;
-			if (count !== 1)
+			if (count !== 1) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.protectingGroups,
@@ -218,9 +250,10 @@ function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: stri
 						`${count === 0 ? 'no' : count} transforms for "${group}" (each protected group needs exactly one)`
 					)
 				);
+			}
 		}
 		for (const group of new Set(drawn)) {
-			if (!protects.includes(group))
+			if (!protects.includes(group)) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.protectingGroups,
@@ -228,6 +261,7 @@ function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: stri
 						`a transform for "${group}", which the row does not protect`
 					)
 				);
+			}
 		}
 	});
 }
@@ -236,7 +270,9 @@ function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: stri
 function checkRefinements(conditions: Condition[], problems: string[]) {
 	const refines = new Map(conditions.map((c) => [c.id, c.refines]));
 	conditions.forEach((condition, index) => {
-		if (!condition.refines) return;
+		if (!condition.refines) {
+			return;
+		}
 		const where = [index, 'refines'];
 		if (condition.refines === condition.id) {
 			problems.push(formatIssue(RULE_FILES.conditions, where, 'a class cannot refine itself'));
@@ -261,7 +297,7 @@ function checkBroadRatings(
 	const broad = conditions.filter((c) => !c.refines).map((c) => c.id);
 	pgs.forEach((pg, index) => {
 		for (const id of broad) {
-			if (pg.stability[id] === undefined)
+			if (pg.stability[id] === undefined) {
 				problems.push(
 					formatIssue(
 						RULE_FILES.protectingGroups,
@@ -269,6 +305,7 @@ function checkBroadRatings(
 						'missing rating (every broader condition class needs one: stable, caution or labile)'
 					)
 				);
+			}
 		}
 	});
 }

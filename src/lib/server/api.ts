@@ -24,8 +24,15 @@ export function codeForStatus(status: number): string {
 	return CODES_BY_STATUS[status] ?? (status >= 500 ? 'internal' : 'bad_request');
 }
 
-export function apiError(status: number, code: string, message: string, details?: unknown): Response {
-	const body: ApiErrorBody = { error: { code, message, ...(details === undefined ? {} : { details }) } };
+export function apiError(
+	status: number,
+	code: string,
+	message: string,
+	details?: unknown
+): Response {
+	const body: ApiErrorBody = {
+		error: { code, message, ...(details === undefined ? {} : { details }) }
+	};
 	return json(body, { status });
 }
 
@@ -63,13 +70,22 @@ export function apiHandler<E extends RequestEvent = RequestEvent>(
 			}
 			if (caught instanceof ApiFailure) {
 				const response = apiError(caught.status, caught.code, caught.message, caught.details);
-				for (const [name, value] of Object.entries(caught.headers)) response.headers.set(name, value);
+				for (const [name, value] of Object.entries(caught.headers)) {
+					response.headers.set(name, value);
+				}
 				return response;
 			}
 			if (caught instanceof ZodError) {
-				return apiError(400, 'invalid_body', 'The request body does not have the expected fields.', caught.issues);
+				return apiError(
+					400,
+					'invalid_body',
+					'The request body does not have the expected fields.',
+					caught.issues
+				);
 			}
-			if (isDatabaseBusy(caught)) return databaseBusy();
+			if (isDatabaseBusy(caught)) {
+				return databaseBusy();
+			}
 			console.error('[api]', event.request.method, event.url.pathname, caught);
 			return apiError(500, 'internal', 'Something went wrong on the server; nothing was changed.');
 		}
@@ -88,26 +104,43 @@ function databaseBusy(): Response {
 export const MAX_JSON_BODY_BYTES = 2 * 1024 * 1024;
 
 function tooLarge(): never {
-	error(413, { code: 'too_large', message: `The request body is over ${MAX_JSON_BODY_BYTES / 1024 / 1024} MB.` });
+	error(413, {
+		code: 'too_large',
+		message: `The request body is over ${MAX_JSON_BODY_BYTES / 1024 / 1024} MB.`
+	});
 }
 
 /**
  * Reads a JSON body and validates it: over 2 MB → 413, not JSON or the wrong shape → 400
  * (a ZodError that `apiHandler` turns into `invalid_body`).
  */
-export async function readJson<S extends z.ZodType>(event: RequestEvent, schema: S): Promise<z.output<S>> {
+export async function readJson<S extends z.ZodType>(
+	event: RequestEvent,
+	schema: S
+): Promise<z.output<S>> {
 	const declared = Number(event.request.headers.get('content-length') ?? 0);
-	if (declared > MAX_JSON_BODY_BYTES) tooLarge();
+	if (declared > MAX_JSON_BODY_BYTES) {
+		tooLarge();
+	}
 	let body: unknown;
 	try {
 		const text = await event.request.text();
-		if (Buffer.byteLength(text) > MAX_JSON_BODY_BYTES) tooLarge();
+		if (Buffer.byteLength(text) > MAX_JSON_BODY_BYTES) {
+			tooLarge();
+		}
 		body = JSON.parse(text);
 	} catch (caught) {
 		// The server's own body limit (BODY_SIZE_LIMIT) reports itself with status 413.
-		if (isHttpError(caught) || (caught as { status?: number })?.status === 413) tooLarge();
+		if (isHttpError(caught) || (caught as { status?: number })?.status === 413) {
+			tooLarge();
+		}
 		throw new ZodError([
-			{ code: 'custom', path: [], message: 'The body must be JSON (Content-Type: application/json).', input: undefined }
+			{
+				code: 'custom',
+				path: [],
+				message: 'The body must be JSON (Content-Type: application/json).',
+				input: undefined
+			}
 		]);
 	}
 	return schema.parse(body);

@@ -4,7 +4,9 @@ import { validateRouteDocument, type RouteDocument } from '../route/document';
 /** A route document from a request body, or a 422 that names every problem found. */
 export function routeDocumentOr422(input: unknown): RouteDocument {
 	const result = validateRouteDocument(input);
-	if (result.ok) return result.document;
+	if (result.ok) {
+		return result.document;
+	}
 	const [first] = result.problems;
 	const where = first!.path.length ? ` (at ${first!.path.join('.')})` : '';
 	error(422, {

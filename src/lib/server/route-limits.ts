@@ -16,7 +16,9 @@ import { ApiFailure } from './api';
 export function assertRouteWithinLimits(document: RouteDocument): void {
 	let heavyAtoms = 0;
 	for (const node of document.intermediates) {
-		if (node.structure.trim() === '') continue;
+		if (node.structure.trim() === '') {
+			continue;
+		}
 		// No structure format has a NUL, and databases refuse it in text (SQLite cuts the SQL).
 		if (node.structure.includes('\u0000')) {
 			throw new ApiFailure(
@@ -29,7 +31,9 @@ export function assertRouteWithinLimits(document: RouteDocument): void {
 		try {
 			heavyAtoms += structureSize(node.structure).heavyAtoms;
 		} catch (caught) {
-			if (!isStructureError(caught) || caught.code !== 'too_large') continue;
+			if (!isStructureError(caught) || caught.code !== 'too_large') {
+				continue;
+			}
 			throw new ApiFailure(
 				422,
 				'structure_too_large',

@@ -28,21 +28,28 @@ export class RouteFileError extends Error {
 /** Intermediates ordered so every step's inputs come before its product (document order otherwise). */
 export function routeOrder(doc: RouteDocument): RouteIntermediate[] {
 	const incoming = new Map<string, string[]>();
-	for (const step of doc.steps)
+	for (const step of doc.steps) {
 		incoming.set(step.to, [...(incoming.get(step.to) ?? []), ...step.from]);
+	}
 	const placed = new Set<string>();
 	const ordered: RouteIntermediate[] = [];
 	const visit = (node: RouteIntermediate, trail: Set<string>) => {
-		if (placed.has(node.id) || trail.has(node.id)) return;
+		if (placed.has(node.id) || trail.has(node.id)) {
+			return;
+		}
 		trail.add(node.id);
 		for (const from of incoming.get(node.id) ?? []) {
 			const input = doc.intermediates.find((n) => n.id === from);
-			if (input) visit(input, trail);
+			if (input) {
+				visit(input, trail);
+			}
 		}
 		placed.add(node.id);
 		ordered.push(node);
 	};
-	for (const node of doc.intermediates) visit(node, new Set());
+	for (const node of doc.intermediates) {
+		visit(node, new Set());
+	}
 	return ordered;
 }
 
@@ -50,10 +57,13 @@ export function routeOrder(doc: RouteDocument): RouteIntermediate[] {
 function molfileOf(node: RouteIntermediate): string {
 	const format = detectFormat(node.structure);
 	let block: string;
-	if (format === 'sdf') block = splitSdf(node.structure)[0]!.molfile;
-	else if (format === 'smiles')
+	if (format === 'sdf') {
+		block = splitSdf(node.structure)[0]!.molfile;
+	} else if (format === 'smiles') {
 		block = readStructure(node.structure, { coordinates: true }).molecule.toMolfile();
-	else block = node.structure.replace(/\r\n?/g, '\n');
+	} else {
+		block = node.structure.replace(/\r\n?/g, '\n');
+	}
 	const lines = block.split('\n');
 	// The first line of a molfile is its title: the label, so other programs show a name.
 	lines[0] = (node.label ?? node.id).replace(/[\r\n]/g, ' ').slice(0, 80);
@@ -64,7 +74,9 @@ function molfileOf(node: RouteIntermediate): string {
 const NO_STEP = 'none';
 
 function field(name: string, value: string | undefined): string {
-	if (value === undefined || value.trim() === '') return '';
+	if (value === undefined || value.trim() === '') {
+		return '';
+	}
 	// A blank line ends a data field's value, so blank lines inside notes are closed up.
 	return `>  <${name}>\n${value
 		.replace(/\r\n?/g, '\n')
@@ -75,7 +87,11 @@ function field(name: string, value: string | undefined): string {
 /** The route as SDF text, e.g. `routeToSdf(doc).split('$$$$').length - 1 === doc.intermediates.length`. */
 export function routeToSdf(doc: RouteDocument): string {
 	const firstStepInto = new Map<string, RouteStep>();
-	for (const step of doc.steps) if (!firstStepInto.has(step.to)) firstStepInto.set(step.to, step);
+	for (const step of doc.steps) {
+		if (!firstStepInto.has(step.to)) {
+			firstStepInto.set(step.to, step);
+		}
+	}
 	return routeOrder(doc)
 		.map((node, index) => {
 			let molfile: string;
@@ -121,7 +137,9 @@ export function routeFromSdf(text: string, name: string): RouteDocument {
 	try {
 		records = splitSdf(text);
 	} catch (caught) {
-		if (!isStructureError(caught)) throw caught;
+		if (!isStructureError(caught)) {
+			throw caught;
+		}
 		throw new RouteFileError(caught.message, caught.record, undefined, caught.code);
 	}
 	const intermediates: RouteIntermediate[] = [];
@@ -136,7 +154,9 @@ export function routeFromSdf(text: string, name: string): RouteDocument {
 		try {
 			readStructure(record.molfile);
 		} catch (caught) {
-			if (!isStructureError(caught)) throw caught;
+			if (!isStructureError(caught)) {
+				throw caught;
+			}
 			throw new RouteFileError(
 				`Record ${n} (“${id}”) cannot be read: ${caught.message}`,
 				n,
@@ -144,23 +164,27 @@ export function routeFromSdf(text: string, name: string): RouteDocument {
 				caught.code
 			);
 		}
-		if (seen.has(id))
+		if (seen.has(id)) {
 			throw new RouteFileError(
 				`Record ${n} uses the id “${id}”, which record ${seen.get(id)} already has.`,
 				n
 			);
+		}
 		seen.set(id, n);
 		const title = record.molfile.split('\n')[0]?.trim();
 		const label = (fields.label ?? (title && title !== id ? title : undefined))?.slice(0, 120);
 		intermediates.push({ id, ...(label ? { label } : {}), structure: record.molfile });
-		if (index === 0 || fields.from?.trim().toLowerCase() === NO_STEP) return;
+		if (index === 0 || fields.from?.trim().toLowerCase() === NO_STEP) {
+			return;
+		}
 		const from = fields.from ? list(fields.from) : [intermediates[index - 1]!.id];
 		const unknown = from.find((source) => !seen.has(source) || source === id);
-		if (unknown)
+		if (unknown) {
 			throw new RouteFileError(
 				`Record ${n} (“${id}”) starts from “${unknown}”, which no earlier record has as its id.`,
 				n
 			);
+		}
 		const intent = STEP_INTENTS.find((candidate) => candidate === fields.intent?.trim());
 		const conditions = list(fields.conditions);
 		steps.push({
@@ -195,7 +219,9 @@ export function routeFromJson(text: string, fallbackName: string): RouteDocument
 		try {
 			readStructure(node.structure);
 		} catch (caught) {
-			if (!isStructureError(caught)) throw caught;
+			if (!isStructureError(caught)) {
+				throw caught;
+			}
 			throw new RouteFileError(
 				`Intermediate ${index + 1} (“${node.id}”) cannot be read: ${caught.message}`,
 				index + 1,
@@ -209,7 +235,9 @@ export function routeFromJson(text: string, fallbackName: string): RouteDocument
 
 function checkedDocument(input: unknown): RouteDocument {
 	const result = validateRouteDocument(input);
-	if (result.ok) return result.document;
+	if (result.ok) {
+		return result.document;
+	}
 	const [first] = result.problems;
 	const where = first!.path.length ? ` (at ${first!.path.join('.')})` : '';
 	throw new RouteFileError(`${first!.message}${where}`, undefined, result.problems);

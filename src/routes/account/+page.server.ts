@@ -40,7 +40,9 @@ export const actions: Actions = {
 	createToken: async (event) => {
 		const user = requirePasswordSession(event);
 		const form = await superValidate(event.request, zod4(createTokenSchema));
-		if (!form.valid) return fail(400, { tokenForm: form });
+		if (!form.valid) {
+			return fail(400, { tokenForm: form });
+		}
 		const { token } = await createApiToken(user.id, form.data.label);
 		form.data.label = '';
 		return message(form, { token });
@@ -48,14 +50,17 @@ export const actions: Actions = {
 	revokeToken: async (event) => {
 		const user = requirePasswordSession(event);
 		const id = String((await event.request.formData()).get('tokenId') ?? '');
-		if (!(await revokeApiToken(user.id, id)))
+		if (!(await revokeApiToken(user.id, id))) {
 			return fail(404, { problem: 'That token is already revoked.' });
+		}
 		return { revoked: true };
 	},
 	changePassword: async (event) => {
 		const user = requirePasswordSession(event);
 		const form = await superValidate(event.request, zod4(changePasswordSchema));
-		if (!form.valid) return fail(400, { passwordForm: form });
+		if (!form.valid) {
+			return fail(400, { passwordForm: form });
+		}
 		if (!(await changeOwnPassword(user.id, form.data.current, form.data.next))) {
 			return setError(form, 'current', 'That is not your current password.');
 		}

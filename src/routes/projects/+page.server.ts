@@ -26,7 +26,9 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	create: async (event) => {
 		const form = await superValidate(event.request, zod4(createProjectSchema));
-		if (!form.valid) return fail(400, { form });
+		if (!form.valid) {
+			return fail(400, { form });
+		}
 		const { user } = await requireTeamAction(event, form.data.teamId, 'project.create');
 		const project = await createProject(user, form.data);
 		redirect(303, paths.project(project.id));

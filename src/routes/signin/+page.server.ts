@@ -10,7 +10,9 @@ import { signInSchema } from './schema';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
 	const redirectTo = safeRedirectTarget(url.searchParams.get('redirectTo'));
-	if (locals.user) redirect(303, redirectTo);
+	if (locals.user) {
+		redirect(303, redirectTo);
+	}
 	const form = await superValidate({ redirectTo }, zod4(signInSchema), { errors: false });
 	const demo =
 		process.env.ORTHOGON_DEMO === '0'
@@ -25,7 +27,9 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const form = await superValidate(event.request, zod4(signInSchema));
-		if (!form.valid) return fail(400, { form });
+		if (!form.valid) {
+			return fail(400, { form });
+		}
 		const { email, password } = form.data;
 
 		// Auth.js reads the credentials from the request body, which superforms has consumed.
@@ -41,7 +45,9 @@ export const actions: Actions = {
 		try {
 			await signIn({ ...event, request });
 		} catch (caught) {
-			if (isRedirect(caught)) throw caught;
+			if (isRedirect(caught)) {
+				throw caught;
+			}
 			if (caught instanceof Error && caught.name === 'CredentialsSignin') {
 				form.data.password = '';
 				// The limits are applied inside Auth.js (auth/sign-in.ts), which notes a refusal here.

@@ -90,7 +90,9 @@ export function loadPlanCases(): LoadedCase[] {
 		.flatMap((name) => {
 			const raw: unknown = JSON.parse(readFileSync(new URL(name, folder), 'utf8'));
 			const parsed = z.array(planCaseSchema).safeParse(raw);
-			if (!parsed.success) throw new Error(`tests/corpus/plans/${name}: ${parsed.error.message}`);
+			if (!parsed.success) {
+				throw new Error(`tests/corpus/plans/${name}: ${parsed.error.message}`);
+			}
 			return parsed.data.map((c) => ({ ...c, file: name }));
 		});
 }

@@ -13,7 +13,9 @@ export function newId(): string {
 /** Where a new intermediate goes: right of the rightmost one, so it never lands on top of another. */
 export function nextPosition(doc: RouteDocument): { x: number; y: number } {
 	const placed = doc.intermediates.flatMap((node) => (node.position ? [node.position] : []));
-	if (placed.length === 0) return { x: 0, y: 0 };
+	if (placed.length === 0) {
+		return { x: 0, y: 0 };
+	}
 	const right = placed.reduce((a, b) => (b.x > a.x ? b : a));
 	return { x: right.x + NODE_WIDTH + 80, y: right.y };
 }
@@ -56,8 +58,9 @@ export function updateStep(
 function withoutEmpty<T extends Record<string, unknown>>(value: T): T {
 	const copy: Record<string, unknown> = { ...value };
 	for (const [key, field] of Object.entries(copy)) {
-		if (field === undefined || field === '' || (Array.isArray(field) && field.length === 0))
+		if (field === undefined || field === '' || (Array.isArray(field) && field.length === 0)) {
 			delete copy[key];
+		}
 	}
 	return copy as T;
 }
@@ -71,8 +74,9 @@ export function movePositions(
 			const node = doc.intermediates.find((n) => n.id === id);
 			return node && (node.position?.x !== p.x || node.position?.y !== p.y);
 		})
-	)
+	) {
 		return doc;
+	}
 	return {
 		...doc,
 		intermediates: doc.intermediates.map((node) => {
@@ -86,15 +90,25 @@ export function movePositions(
 
 /** Whether `to` can already reach `from`, so a step from → to would close a cycle. */
 export function wouldCycle(doc: RouteDocument, from: string, to: string): boolean {
-	if (from === to) return true;
+	if (from === to) {
+		return true;
+	}
 	const seen = new Set<string>();
 	const stack = [to];
 	while (stack.length) {
 		const at = stack.pop()!;
-		if (at === from) return true;
-		if (seen.has(at)) continue;
+		if (at === from) {
+			return true;
+		}
+		if (seen.has(at)) {
+			continue;
+		}
 		seen.add(at);
-		for (const step of doc.steps) if (step.from.includes(at)) stack.push(step.to);
+		for (const step of doc.steps) {
+			if (step.from.includes(at)) {
+				stack.push(step.to);
+			}
+		}
 	}
 	return false;
 }
@@ -107,14 +121,17 @@ export type ConnectResult =
  * convergent step) instead of a second step, so one product always comes from one step.
  */
 export function connect(doc: RouteDocument, from: string, to: string): ConnectResult {
-	if (wouldCycle(doc, from, to))
+	if (wouldCycle(doc, from, to)) {
 		return { ok: false, reason: 'That step would lead back to where the route started.' };
+	}
 	const existing = doc.steps.find((step) => step.to === to);
 	if (existing) {
-		if (existing.from.includes(from))
+		if (existing.from.includes(from)) {
 			return { ok: false, reason: 'Those intermediates are already joined by a step.' };
-		if (existing.from.length >= 8)
+		}
+		if (existing.from.length >= 8) {
 			return { ok: false, reason: 'A step takes at most 8 starting intermediates.' };
+		}
 		return {
 			ok: true,
 			stepId: existing.id,
@@ -137,7 +154,9 @@ export function removeElements(
 ): RouteDocument {
 	const gone = new Set(nodeIds);
 	const steps = doc.steps.flatMap((step) => {
-		if (stepIds.includes(step.id) || gone.has(step.to)) return [];
+		if (stepIds.includes(step.id) || gone.has(step.to)) {
+			return [];
+		}
 		const from = step.from.filter(
 			(id) => !gone.has(id) && !inputs.some((i) => i.stepId === step.id && i.from === id)
 		);
@@ -155,9 +174,14 @@ export async function layoutPositions(
 	const graph = new Graph();
 	graph.setGraph({ rankdir: 'LR', nodesep: 60, ranksep: 220 });
 	graph.setDefaultEdgeLabel(() => ({}));
-	for (const node of doc.intermediates)
+	for (const node of doc.intermediates) {
 		graph.setNode(node.id, { width: NODE_WIDTH, height: NODE_HEIGHT });
-	for (const step of doc.steps) for (const from of step.from) graph.setEdge(from, step.to);
+	}
+	for (const step of doc.steps) {
+		for (const from of step.from) {
+			graph.setEdge(from, step.to);
+		}
+	}
 	layout(graph);
 	const positions = new Map<string, { x: number; y: number }>();
 	for (const node of doc.intermediates) {

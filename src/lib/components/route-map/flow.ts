@@ -13,7 +13,9 @@ export const edgeId = (stepId: string, from: string) => `${stepId}::${from}`;
 
 /** The spoken name of a step that puts a protecting group on or takes one off; null for others. */
 export function intentLabel(step: RouteStep): string | null {
-	if (step.intent !== 'protect' && step.intent !== 'deprotect') return null;
+	if (step.intent !== 'protect' && step.intent !== 'deprotect') {
+		return null;
+	}
 	const kind = step.intent === 'protect' ? 'Protection step' : 'Deprotection step';
 	return step.reagents ? `${kind}: ${step.reagents}` : kind;
 }
@@ -38,8 +40,9 @@ export function toNodes(
 			old.position.y === position.y &&
 			old.draggable === draggable &&
 			Boolean(old.selected) === selected
-		)
+		) {
 			return old;
+		}
 		return {
 			...(old ?? {}),
 			id: node.id,
@@ -71,8 +74,9 @@ export function toEdges(
 				old.target === step.to &&
 				old.data?.primary === (index === 0) &&
 				old.ariaLabel === ariaLabel
-			)
+			) {
 				return old;
+			}
 			return {
 				id,
 				type: 'step' as const,

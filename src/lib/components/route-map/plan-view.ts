@@ -21,7 +21,9 @@ export function removalPlace(protection: Protection, names: Map<string, string>)
 
 /** A free group's label from the rule table, or its id until the labels arrive. */
 export function groupName(id: string, labels: RuleLabels | null): string {
-	if (id === 'route') return 'the route';
+	if (id === 'route') {
+		return 'the route';
+	}
 	return labels?.groups.get(id) ?? id;
 }
 

@@ -42,14 +42,20 @@ export class ProtectionPlans {
 	async open() {
 		const request = ++this.#request;
 		this.#view = { status: 'loading' };
-		if (!this.#labels) void this.client.ruleLabels().then((labels) => (this.#labels = labels));
+		if (!this.#labels) {
+			void this.client.ruleLabels().then((labels) => (this.#labels = labels));
+		}
 		if (!(await this.editor.flush())) {
-			if (request === this.#request) this.#view = { status: 'failed', message: this.#unsaved() };
+			if (request === this.#request) {
+				this.#view = { status: 'failed', message: this.#unsaved() };
+			}
 			return;
 		}
 		const version = this.editor.version;
 		const result = await this.client.plan(this.editor.routeId);
-		if (request !== this.#request) return;
+		if (request !== this.#request) {
+			return;
+		}
 		this.#view = result.ok
 			? { status: 'ready', answer: result.data, version }
 			: { status: 'failed', message: result.message };
@@ -63,7 +69,9 @@ export class ProtectionPlans {
 	/** Saves plan `rank` as a new route and returns its id (to open it), or null. */
 	async use(rank: number): Promise<string | null> {
 		const view = this.#view;
-		if (view.status !== 'ready' || this.#saving !== null) return null;
+		if (view.status !== 'ready' || this.#saving !== null) {
+			return null;
+		}
 		this.#saving = rank;
 		const result = await this.client.savePlan(this.editor.routeId, rank, view.version);
 		this.#saving = null;

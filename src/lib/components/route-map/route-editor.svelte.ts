@@ -60,8 +60,9 @@ export class RouteEditor {
 		this.#doc = init.document;
 		this.#savedDoc = init.document;
 		this.#version = init.version;
-		for (const [structure, analysis] of Object.entries(init.analyses))
+		for (const [structure, analysis] of Object.entries(init.analyses)) {
 			this.#analyses.set(key(structure, ''), { status: 'ready', analysis });
+		}
 	}
 
 	get doc() {
@@ -99,7 +100,9 @@ export class RouteEditor {
 		if (this.#doc.intermediates.some((node) => !node.position)) {
 			// A view-only change: it is saved with the next real edit, and viewers can lay out too.
 			const laid = ops.movePositions(this.#doc, await ops.layoutPositions(this.#doc));
-			if (this.#doc === this.#savedDoc) this.#savedDoc = laid;
+			if (this.#doc === this.#savedDoc) {
+				this.#savedDoc = laid;
+			}
 			this.#doc = laid;
 		}
 	}
@@ -126,12 +129,16 @@ export class RouteEditor {
 	}
 
 	rename(name: string) {
-		if (name.trim()) this.#change({ ...this.#doc, name }, 'route:name');
+		if (name.trim()) {
+			this.#change({ ...this.#doc, name }, 'route:name');
+		}
 	}
 
 	connect(from: string, to: string) {
 		const result = ops.connect(this.#doc, from, to);
-		if (!result.ok) return this.toasts.show(result.reason, 'problem');
+		if (!result.ok) {
+			return this.toasts.show(result.reason, 'problem');
+		}
 		this.#change(result.doc);
 		this.#selection = { kind: 'step', id: result.stepId };
 	}
@@ -143,8 +150,9 @@ export class RouteEditor {
 	) {
 		this.#change(ops.removeElements(this.#doc, nodeIds, inputs, stepIds));
 		const selected = this.#selection;
-		if (selected && (nodeIds.includes(selected.id) || !this.#exists(selected)))
+		if (selected && (nodeIds.includes(selected.id) || !this.#exists(selected))) {
 			this.#selection = null;
+		}
 	}
 
 	move(moves: Map<string, { x: number; y: number }>) {
@@ -157,11 +165,15 @@ export class RouteEditor {
 
 	undo() {
 		const previous = this.#undo.at(-1);
-		if (!previous || !this.canEdit) return;
+		if (!previous || !this.canEdit) {
+			return;
+		}
 		this.#undo = this.#undo.slice(0, -1);
 		this.#coalesce = null;
 		this.#doc = previous;
-		if (this.#selection && !this.#exists(this.#selection)) this.#selection = null;
+		if (this.#selection && !this.#exists(this.#selection)) {
+			this.#selection = null;
+		}
 		this.#schedule();
 	}
 
@@ -171,11 +183,15 @@ export class RouteEditor {
 	}
 
 	#change(next: RouteDocument, coalesceKey?: string | false) {
-		if (!this.canEdit || next === this.#doc) return;
+		if (!this.canEdit || next === this.#doc) {
+			return;
+		}
 		const now = Date.now();
 		const joins =
 			coalesceKey && this.#coalesce?.key === coalesceKey && now - this.#coalesce.at < COALESCE_MS;
-		if (!joins) this.#undo = [...this.#undo.slice(-(UNDO_LIMIT - 1)), this.#doc];
+		if (!joins) {
+			this.#undo = [...this.#undo.slice(-(UNDO_LIMIT - 1)), this.#doc];
+		}
 		this.#coalesce = coalesceKey ? { key: coalesceKey, at: now } : null;
 		this.#doc = next;
 		this.#schedule();
@@ -185,20 +201,27 @@ export class RouteEditor {
 
 	#schedule() {
 		// During a conflict nothing is sent: the chemist decides first, and keeps typing meanwhile.
-		if (this.#saveState === 'conflict') return;
+		if (this.#saveState === 'conflict') {
+			return;
+		}
 		this.#saveState = this.#doc === this.#savedDoc ? 'saved' : 'pending';
 		clearTimeout(this.#timer);
-		if (this.#saveState === 'pending')
+		if (this.#saveState === 'pending') {
 			this.#timer = setTimeout(() => void this.saveNow(), SAVE_DELAY_MS);
+		}
 	}
 
 	/** Sends the document now (also used by "Retry" and before leaving the page). */
 	async saveNow() {
 		clearTimeout(this.#timer);
 		// A save already on its way picks up newer edits when it returns.
-		if (this.#inFlight || this.#saveState === 'conflict' || !this.canEdit) return;
+		if (this.#inFlight || this.#saveState === 'conflict' || !this.canEdit) {
+			return;
+		}
 		const sent = this.#doc;
-		if (sent === this.#savedDoc) return void (this.#saveState = 'saved');
+		if (sent === this.#savedDoc) {
+			return void (this.#saveState = 'saved');
+		}
 		this.#saveState = 'saving';
 		const request = this.client.save(this.routeId, this.#version, sent);
 		this.#inFlight = request;
@@ -224,11 +247,16 @@ export class RouteEditor {
 	 */
 	async flush(): Promise<boolean> {
 		while (this.canEdit && this.#saveState !== 'saved') {
-			if (this.#saveState === 'conflict') return false;
-			if (this.#inFlight) await this.#inFlight;
-			else {
+			if (this.#saveState === 'conflict') {
+				return false;
+			}
+			if (this.#inFlight) {
+				await this.#inFlight;
+			} else {
 				await this.saveNow();
-				if (this.#saveState === 'failed') return false;
+				if (this.#saveState === 'failed') {
+					return false;
+				}
 			}
 		}
 		return true;
@@ -237,7 +265,9 @@ export class RouteEditor {
 	/** After a conflict: drop local edits and show the stored route. */
 	async loadTheirs() {
 		const result = await this.client.load(this.routeId);
-		if (!result.ok) return;
+		if (!result.ok) {
+			return;
+		}
 		this.#doc = result.data.document;
 		this.#savedDoc = result.data.document;
 		this.#version = result.data.version;
@@ -261,7 +291,9 @@ export class RouteEditor {
 
 	async refreshCheck() {
 		const check = await this.client.check(this.routeId);
-		if (check !== null) this.#check = check;
+		if (check !== null) {
+			this.#check = check;
+		}
 	}
 
 	// ── Structures ───────────────────────────────────────────────────────────────────────────
@@ -273,7 +305,9 @@ export class RouteEditor {
 	/** Starts fetching a depiction unless one is cached or on its way; call from an effect. */
 	ensureAnalysis(structure: string, highlight = '') {
 		const k = key(structure, highlight);
-		if (this.#analyses.has(k)) return;
+		if (this.#analyses.has(k)) {
+			return;
+		}
 		this.#analyses.set(k, { status: 'loading' });
 		void this.client.analyze(structure, highlight).then((result) => {
 			this.#analyses.set(
@@ -288,7 +322,9 @@ export class RouteEditor {
 	/** Reads a structure before it enters the route; the answer is cached for its node. */
 	async validate(structure: string): Promise<{ ok: true } | { ok: false; message: string }> {
 		const result = await this.client.analyze(structure);
-		if (!result.ok) return { ok: false, message: result.message };
+		if (!result.ok) {
+			return { ok: false, message: result.message };
+		}
 		this.#analyses.set(key(structure, ''), { status: 'ready', analysis: result.data });
 		return { ok: true };
 	}
@@ -297,9 +333,13 @@ export class RouteEditor {
 	highlightFor(intermediateId: string): string {
 		const selected = this.#selection;
 		const check = this.#check;
-		if (selected?.kind !== 'step' || !(check instanceof Map)) return '';
+		if (selected?.kind !== 'step' || !(check instanceof Map)) {
+			return '';
+		}
 		const step = this.#doc.steps.find((s) => s.id === selected.id);
-		if (!step) return '';
+		if (!step) {
+			return '';
+		}
 		return substrateHighlight(step, check.get(step.id)?.clashes ?? [], intermediateId, (id) => {
 			const node = this.#doc.intermediates.find((n) => n.id === id);
 			const state = node && this.analysis(node.structure);

@@ -11,7 +11,9 @@ export type Verdict = { tone: 'clash' | 'caution' | 'unchecked' | 'fine'; label:
  * never `fine`: an empty clash list from a step that was not checked means nothing.
  */
 export function verdictOf(check: StepCheck | undefined): Verdict {
-	if (check?.error) return { tone: 'unchecked', label: notCheckedText(check.error) };
+	if (check?.error) {
+		return { tone: 'unchecked', label: notCheckedText(check.error) };
+	}
 	const clashes = check?.clashes.filter((c) => c.severity === 'clash').length ?? 0;
 	const cautions = (check?.clashes.length ?? 0) - clashes;
 	const parts = [
@@ -31,7 +33,9 @@ export function notCheckedText(error: NonNullable<StepCheck['error']>): string {
  * `['Grubbs II']` → 'Not recognised: Grubbs II — its effect is not checked.'
  */
 export function unrecognizedText(unrecognized: readonly string[] | undefined): string | null {
-	if (!unrecognized?.length) return null;
+	if (!unrecognized?.length) {
+		return null;
+	}
 	const effect = unrecognized.length === 1 ? 'its effect is' : 'their effects are';
 	return `Not recognised: ${unrecognized.join(', ')} — ${effect} not checked.`;
 }
@@ -54,11 +58,15 @@ export function substrateHighlight(
 	atomCountOf: (intermediateId: string) => number | null
 ): string {
 	const atoms = [...new Set(clashes.flatMap((c) => c.atoms))].sort((a, b) => a - b);
-	if (!step.from.includes(intermediateId) || atoms.length === 0) return '';
+	if (!step.from.includes(intermediateId) || atoms.length === 0) {
+		return '';
+	}
 	let offset = 0;
 	for (const from of step.from) {
 		const count = step.from.length === 1 ? Infinity : atomCountOf(from);
-		if (count === null) return '';
+		if (count === null) {
+			return '';
+		}
 		if (from === intermediateId) {
 			return atoms
 				.filter((a) => a >= offset && a < offset + count)
@@ -74,7 +82,9 @@ export function substrateHighlight(
 export function heavyAtomCount(formula: string): number {
 	let count = 0;
 	for (const [, element, n] of formula.matchAll(/([A-Z][a-z]?)(\d*)/g)) {
-		if (element !== 'H') count += n ? Number(n) : 1;
+		if (element !== 'H') {
+			count += n ? Number(n) : 1;
+		}
 	}
 	return count;
 }

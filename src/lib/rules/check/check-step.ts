@@ -23,7 +23,9 @@ import {
 export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	const explicit = step.conditions ?? [];
 	const unknown = explicit.filter((id) => !rules.conditionIds.includes(id));
-	if (unknown.length) throw new UnknownConditionError(step.id, unknown, rules.conditionIds);
+	if (unknown.length) {
+		throw new UnknownConditionError(step.id, unknown, rules.conditionIds);
+	}
 	const classified = step.reagents?.trim()
 		? rules.classify(step.reagents)
 		: { conditions: [], matched: [], hazards: [], unknown: [] };
@@ -34,11 +36,12 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 	for (const id of conditions) {
 		const bringers = new Map<string, Bringer>();
 		for (const m of classified.matched.filter((m) => m.conditions.includes(id))) {
-			if (!bringers.has(m.reagent))
+			if (!bringers.has(m.reagent)) {
 				bringers.set(m.reagent, {
 					reagent: m.reagent,
 					context: m.context && { reagent: m.context.reagent, why: m.context.why }
 				});
+			}
 		}
 		// An explicit class that a named reagent also brings is judged by that reagent (TBSCl,
 		// imidazole tagged `base-amine` is imidazole's base-amine): only a class no reagent brings
@@ -58,7 +61,9 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		const named = origin.reagents.map((b) => b.reagent);
 		for (const pg of change.protectingGroups.filter(standsBy)) {
 			const answer = rules.stability(pg.id, condition, named, pg.on);
-			if (answer.rating === 'stable') continue;
+			if (answer.rating === 'stable') {
+				continue;
+			}
 			clashes.push({
 				severity: answer.rating === 'labile' ? 'clash' : 'caution',
 				kind: 'removes-protecting-group',
@@ -76,7 +81,9 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		}
 		for (const group of change.freeGroups.filter(standsBy)) {
 			const rule = rules.reactivity(group.id, condition, named);
-			if (!rule) continue;
+			if (!rule) {
+				continue;
+			}
 			// A selective install (TBDPSCl on the primary alcohol beside a secondary one) leaves the
 			// slower group: still worth watching, no longer a clash.
 			const selective =
@@ -120,11 +127,14 @@ function takenFirst(
 	condition: string,
 	reagents: string[]
 ): string | null {
-	if (!rules.installPreference || reagents.length === 0) return null;
+	if (!rules.installPreference || reagents.length === 0) {
+		return null;
+	}
 	for (const converted of groups.filter((g) => !g.survives)) {
 		const reason = rules.installPreference(reagents, condition, converted.id, over);
-		if (reason)
+		if (reason) {
 			return `${reagents.join(', ')} takes the free ${rules.groupLabel(converted.id)} before the free ${rules.groupLabel(over)}, which this step leaves alone: ${reason.trim().replace(/\.$/, '')}; some of the ${rules.groupLabel(over)} may react as well.`;
+		}
 	}
 	return null;
 }
@@ -132,7 +142,9 @@ function takenFirst(
 /** What one matched reagent brought, and (when a `when` entry decided) which reagent decided it. */
 function readingOf(m: ReagentMatch): ReagentReading {
 	const reading: ReagentReading = { reagent: m.reagent, text: m.text, conditions: m.conditions };
-	if (m.context) reading.context = { reagent: m.context.reagent, why: m.context.why };
+	if (m.context) {
+		reading.context = { reagent: m.context.reagent, why: m.context.why };
+	}
 	return reading;
 }
 
@@ -141,13 +153,16 @@ function readTransformation(stepId: string, substrates: string[], product: strin
 		['substrate', substrates],
 		['product', [product]]
 	] as const) {
-		if (texts.length === 0 || texts.some((t) => !t.trim()))
+		if (texts.length === 0 || texts.some((t) => !t.trim())) {
 			throw new StepStructureError(stepId, role, 'it is empty.');
+		}
 	}
 	try {
 		return transformation(substrates, product);
 	} catch (caught) {
-		if (!isStructureError(caught)) throw caught;
+		if (!isStructureError(caught)) {
+			throw caught;
+		}
 		// Tell which side failed: the substrate texts are read first.
 		const role = substrates.some((text) => failsToRead(text)) ? 'substrate' : 'product';
 		throw new StepStructureError(stepId, role, caught.message, caught.code);

@@ -19,7 +19,9 @@ export type Origin = { reagents: Bringer[]; explicit: boolean };
  * and why.
  */
 function broughtBy(origin: Origin, conditionLabel: string): string {
-	if (!origin.reagents.length) return `The step's ${conditionLabel} conditions`;
+	if (!origin.reagents.length) {
+		return `The step's ${conditionLabel} conditions`;
+	}
 	const names = origin.reagents.map((b) =>
 		b.context ? `${b.reagent} with ${b.context.reagent}` : b.reagent
 	);

@@ -17,12 +17,15 @@ const CARBON = 6;
 export function siteOf(molecule: Molecule, atom: number): PgSite | undefined {
 	molecule.ensureHelperArrays(Molecule.cHelperRings);
 	const element = molecule.getAtomicNo(atom);
-	if (element === NITROGEN && molecule.isAromaticAtom(atom)) return 'aromatic-nitrogen';
+	if (element === NITROGEN && molecule.isAromaticAtom(atom)) {
+		return 'aromatic-nitrogen';
+	}
 	if (element === OXYGEN) {
 		for (let i = 0; i < molecule.getConnAtoms(atom); i++) {
 			const neighbour = molecule.getConnAtom(atom, i);
-			if (molecule.getAtomicNo(neighbour) === CARBON && molecule.isAromaticAtom(neighbour))
+			if (molecule.getAtomicNo(neighbour) === CARBON && molecule.isAromaticAtom(neighbour)) {
 				return 'aryl-oxygen';
+			}
 		}
 	}
 	return undefined;

@@ -33,7 +33,9 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 		reactivity: remembered((group, condition, reagents = []) => {
 			// Perception may know groups the reactivity table has no row for: no row, no problem known.
 			const answer = table.reactivityOf(group as FreeGroupId, condition as ConditionId, reagents);
-			if (!answer) return null;
+			if (!answer) {
+				return null;
+			}
 			const { rating, reason, source, usuallyMasked } = answer;
 			return usuallyMasked ? { rating, reason, source, usuallyMasked } : { rating, reason, source };
 		}),
@@ -75,7 +77,9 @@ type SelectiveInstall = {
 function selectiveInstalls(table: RuleTable): SelectiveInstall[] {
 	return table.protectingGroups.flatMap((row) =>
 		row.install.methods.flatMap((method) => {
-			if (method.prefers.length === 0) return [];
+			if (method.prefers.length === 0) {
+				return [];
+			}
 			const matched = method.reagents.flatMap((text) => table.conditionsForReagents(text).matched);
 			return method.prefers.flatMap((p) =>
 				method.conditions.map((condition) => ({
@@ -109,7 +113,9 @@ function remembered<R>(
 	let byArray = new WeakMap<readonly string[], Answers>();
 	const answersFor = (reagents: readonly string[]): Answers => {
 		let answers = byArray.get(reagents);
-		if (answers) return answers;
+		if (answers) {
+			return answers;
+		}
 		const text = reagents.join('\u0001');
 		answers = byText.get(text);
 		if (!answers) {
@@ -126,11 +132,17 @@ function remembered<R>(
 	return (id: string, condition: string, reagents: readonly string[] = [], site?: string): R => {
 		const answers = answersFor(reagents);
 		let byCondition = answers.get(id);
-		if (!byCondition) answers.set(id, (byCondition = new Map()));
+		if (!byCondition) {
+			answers.set(id, (byCondition = new Map()));
+		}
 		let bySite = byCondition.get(condition);
-		if (!bySite) byCondition.set(condition, (bySite = new Map()));
+		if (!bySite) {
+			byCondition.set(condition, (bySite = new Map()));
+		}
 		const at = site ?? '';
-		if (bySite.has(at)) return bySite.get(at)!;
+		if (bySite.has(at)) {
+			return bySite.get(at)!;
+		}
 		const result = answer(id, condition, reagents, site);
 		bySite.set(at, result);
 		return result;

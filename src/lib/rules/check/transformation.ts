@@ -21,7 +21,9 @@ const cache = new LruCache<Transformation>('transformations');
 export function combinedMolecule(texts: string[]): Molecule {
 	const [first, ...rest] = texts.map(sharedMolecule);
 	const combined = first!.getCompactCopy();
-	for (const other of rest) combined.addMolecule(other);
+	for (const other of rest) {
+		combined.addMolecule(other);
+	}
 	return combined;
 }
 
@@ -29,7 +31,9 @@ export function combinedMolecule(texts: string[]): Molecule {
 export function transformation(substrates: string[], product: string): Transformation {
 	const key = `${substrates.join('\u0000')}\u0001${product}`;
 	const stored = cache.get(key);
-	if (stored) return stored;
+	if (stored) {
+		return stored;
+	}
 	// The intermediates of a route recur as substrate and product, so perceive and read molecules
 	// through the text caches.
 	const combined = substrates.length === 1 ? null : combinedMolecule(substrates);
@@ -47,7 +51,9 @@ export function transformation(substrates: string[], product: string): Transform
 		const molecule = substrateMolecule();
 		before.protectingGroups.forEach((pg, i) => {
 			const on = siteOf(molecule, pg.maskedAtom);
-			if (on) result.protectingGroups[i]!.on = on;
+			if (on) {
+				result.protectingGroups[i]!.on = on;
+			}
 		});
 	}
 	cache.set(key, result);
@@ -57,7 +63,9 @@ export function transformation(substrates: string[], product: string): Transform
 function ambiguous(before: Perception, after: Perception): boolean {
 	const counts = (sites: { id: string }[]) => {
 		const tally = new Map<string, number>();
-		for (const site of sites) tally.set(site.id, (tally.get(site.id) ?? 0) + 1);
+		for (const site of sites) {
+			tally.set(site.id, (tally.get(site.id) ?? 0) + 1);
+		}
 		return tally;
 	};
 	const pairs: [Map<string, number>, Map<string, number>][] = [
@@ -81,9 +89,13 @@ function compare(before: Perception, after: Perception, map: AtomMap | null): Tr
 		productSites: { id: string; atoms: number[] }[],
 		countBefore: number
 	) => {
-		if (!map) return productSites.filter((s) => s.id === id).length >= countBefore;
+		if (!map) {
+			return productSites.filter((s) => s.id === id).length >= countBefore;
+		}
 		const mapped = atoms.map((a) => map.get(a));
-		if (mapped.some((a) => a === undefined)) return false;
+		if (mapped.some((a) => a === undefined)) {
+			return false;
+		}
 		const wanted = [...(mapped as number[])].sort((a, b) => a - b).join(',');
 		return productSites.some(
 			(s) => s.id === id && [...s.atoms].sort((a, b) => a - b).join(',') === wanted

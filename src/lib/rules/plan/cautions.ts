@@ -73,8 +73,9 @@ export function joinTiers(
 				rationale = rationale.filter((line) => !line.startsWith('Plan 1 comes first:'));
 				rationale.push(`Ranked below plan ${offset}: ${below(tiers[t]!.kind, 'it')}`);
 			}
-			if (offset + k === 0 && plans.length === 1 && next >= 0)
+			if (offset + k === 0 && plans.length === 1 && next >= 0) {
 				rationale.unshift(`Plan 1 comes first: ${below(tiers[t + 1 + next]!.kind, 'plan 2')}`);
+			}
 			out.push({ ...plan, rank: offset + k + 1, rationale });
 		});
 	});

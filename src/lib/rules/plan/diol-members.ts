@@ -36,7 +36,9 @@ export function diolMemberPairs(
 	const outCandidates = loneAfter
 		.filter((j) => isAlcohol(after[j]!))
 		.filter(() => loneBefore.some((i) => isDiol(before[i]!)));
-	if (intoCandidates.length === 0 && outCandidates.length === 0) return { into: [], outOf: [] };
+	if (intoCandidates.length === 0 && outCandidates.length === 0) {
+		return { into: [], outOf: [] };
+	}
 	const map = stepMap(
 		substrates,
 		product,
@@ -44,10 +46,14 @@ export function diolMemberPairs(
 			(i) => before[i]!.atoms
 		)
 	);
-	if (!map) return { into: [], outOf: [] };
+	if (!map) {
+		return { into: [], outOf: [] };
+	}
 	const into = intoCandidates.flatMap((i) => {
 		const atoms = before[i]!.atoms.map((a) => map.get(a));
-		if (atoms.some((a) => a === undefined)) return [];
+		if (atoms.some((a) => a === undefined)) {
+			return [];
+		}
 		const diol = loneAfter.find(
 			(j) => isDiol(after[j]!) && inside(atoms as number[], after[j]!.atoms)
 		);
@@ -56,7 +62,9 @@ export function diolMemberPairs(
 	const back = new Map([...map.entries()].map(([from, to]) => [to, from]));
 	const outOf = outCandidates.flatMap((j) => {
 		const atoms = after[j]!.atoms.map((a) => back.get(a));
-		if (atoms.some((a) => a === undefined)) return [];
+		if (atoms.some((a) => a === undefined)) {
+			return [];
+		}
 		const diol = loneBefore.find(
 			(i) => isDiol(before[i]!) && inside(atoms as number[], before[i]!.atoms)
 		);

@@ -20,10 +20,14 @@ export type Mask = { pg: string; transform: string; atoms: number[] };
 
 /** The structure with each mask drawn on, as SMILES, e.g. TBS on the alcohol of `OCCCC=O` → `O([Si](C)(C)C(C)(C)C)CCCC=O`. */
 export function protectedStructure(structure: string, masks: Mask[]): string {
-	if (masks.length === 0) return structure;
+	if (masks.length === 0) {
+		return structure;
+	}
 	const cacheKey = `${structure}\u0001${masks.map((m) => `${m.transform}@${m.atoms.join(',')}`).join(';')}`;
 	const stored = drawn.get(cacheKey);
-	if (stored) return stored;
+	if (stored) {
+		return stored;
+	}
 	const transforms = masks.map((m) => ({ smarts: m.transform, atoms: m.atoms }));
 	const smiles = drawnBySplice(structure, transforms) ?? drawnByReactor(structure, transforms);
 	drawn.set(cacheKey, smiles);
@@ -32,13 +36,17 @@ export function protectedStructure(structure: string, masks: Mask[]): string {
 
 /** The SMILES edited in place, or null for a molfile or a transform the splicer leaves to the Reactor. */
 function drawnBySplice(structure: string, transforms: SiteTransform[]): string | null {
-	if (detectFormat(structure) !== 'smiles') return null;
+	if (detectFormat(structure) !== 'smiles') {
+		return null;
+	}
 	// As readStructure reads it: a title after the SMILES is dropped.
 	const smiles = structure.trim().split(/\s+/)[0]!;
 	try {
 		return spliceTransforms(smiles, sharedMolecule(structure), transforms);
 	} catch (caught) {
-		if (caught instanceof SpliceUnsupported) return null;
+		if (caught instanceof SpliceUnsupported) {
+			return null;
+		}
 		throw caught;
 	}
 }

@@ -28,10 +28,14 @@ export function maskedAt(
 ): boolean {
 	const y = needs[other]!;
 	const here = y.path.indexOf(node);
-	if (here < 0) return false;
+	if (here < 0) {
+		return false;
+	}
 	const on = y.path.indexOf(y.installAt);
 	const off = y.path.indexOf(removeAt);
-	if (phase === 'removal') return on <= here && here <= off;
+	if (phase === 'removal') {
+		return on <= here && here <= off;
+	}
 	return (on < here || (on === here && installsBefore(needs, other, index))) && here <= off;
 }
 
@@ -97,56 +101,64 @@ export function harm(
 			other.installAt === node &&
 			other.members.some((g) => takes.includes(g));
 		const atoms = other.atomsAt.get(node);
-		if (atoms && j !== index && (coInstall || maskedAt(needs, j, node, index, phase)))
+		if (atoms && j !== index && (coInstall || maskedAt(needs, j, node, index, phase))) {
 			masked.add(setKey(atoms));
+		}
 	});
 	const ownAtoms = need.atomsAt.get(node) ?? [];
 	let cautions = 0;
 	for (const unit of freeUnits(structure)) {
-		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) continue;
+		if (setKey(unit.atoms) === own || masked.has(setKey(unit.atoms))) {
+			continue;
+		}
 		const members = otherMembers(unit, need.group, ownAtoms);
 		const taken = members.filter((g) => takes.includes(g));
 		if (taken.length) {
 			for (const group of taken) {
 				const first = prefersOver(recipe, group, need.group);
-				if (first)
+				if (first) {
 					return {
 						blocked: `would take the free ${rules.groupLabel(group)} before the ${rules.groupLabel(need.group)} (${first.reason.replace(/\.$/, '')})`,
 						cautions
 					};
-				if (!prefersOver(recipe, need.group, group))
+				}
+				if (!prefersOver(recipe, need.group, group)) {
 					return {
 						blocked: `would also put ${pg} on the free ${rules.groupLabel(group)}`,
 						cautions
 					};
+				}
 			}
 			cautions++; // taken selectively: the slower group is worth watching (the check says so too)
 			continue;
 		}
-		if (phase === 'install' && members.every((g) => drawn.includes(g))) continue;
+		if (phase === 'install' && members.every((g) => drawn.includes(g))) {
+			continue;
+		}
 		for (const c of conds) {
 			for (const member of members) {
 				const rule = rules.reactivity(member, c.id, c.reagents);
-				if (rule?.rating === 'reacts')
+				if (rule?.rating === 'reacts') {
 					return {
 						blocked: `would also attack the free ${rules.groupLabel(member)} (${rule.reason.replace(/\.$/, '')})`,
 						cautions
 					};
-				if (rule) cautions++;
+				}
+				if (rule) {
+					cautions++;
+				}
 			}
 		}
 	}
 	for (const found of perceiveText(structure).protectingGroups) {
 		for (const c of conds) {
-			const answer = rules.stability(
-				found.id,
-				c.id,
-				c.reagents,
-				siteOfGroup(found.masks)
-			);
-			if (answer.rating === 'labile')
+			const answer = rules.stability(found.id, c.id, c.reagents, siteOfGroup(found.masks));
+			if (answer.rating === 'labile') {
 				return { blocked: `would also strip the route's own ${found.id} group`, cautions };
-			if (answer.rating === 'caution') cautions++;
+			}
+			if (answer.rating === 'caution') {
+				cautions++;
+			}
 		}
 	}
 	return { blocked: '', cautions };
@@ -166,7 +178,9 @@ function otherMembers(
 	const members = [...unit.members];
 	const inside = ownAtoms.length > 0 && ownAtoms.every((a) => unit.atoms.includes(a));
 	const at = inside ? members.indexOf(group) : -1;
-	if (at < 0) return members;
+	if (at < 0) {
+		return members;
+	}
 	members.splice(at, 1);
 	return members.filter((g) => !g.startsWith('diol-'));
 }
@@ -179,13 +193,18 @@ export function recipeConditions(
 ) {
 	// The search asks per option pair: remember the answer on the recipe object itself first.
 	const known = byObject.get(recipe);
-	if (known && known.rules === rules) return known.conditions;
+	if (known && known.rules === rules) {
+		return known.conditions;
+	}
 	let read = readRecipes.get(rules);
-	if (!read) readRecipes.set(rules, (read = new Map()));
+	if (!read) {
+		readRecipes.set(rules, (read = new Map()));
+	}
 	const key = `${recipe.reagents}\u0001${recipe.conditions.join('+')}`;
 	let conditions = read.get(key);
-	if (!conditions)
+	if (!conditions) {
 		read.set(key, (conditions = stepConditions(rules, recipe.reagents, recipe.conditions)));
+	}
 	byObject.set(recipe, { rules, conditions });
 	return conditions;
 }

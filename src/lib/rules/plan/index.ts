@@ -31,7 +31,13 @@ const MAX_PLANS = 5;
 // More joint choices than plans are drawn, because the re-check may still drop some.
 const SEARCH_WIDTH = 20;
 
-type Context = { doc: RouteDocument; table: RuleTable; rules: CheckRules; tree: RouteTree; verify: Verify };
+type Context = {
+	doc: RouteDocument;
+	table: RuleTable;
+	rules: CheckRules;
+	tree: RouteTree;
+	verify: Verify;
+};
 type Solved = { plans: Plan[]; unsolved?: Unsolved[] };
 
 /** Ranked plans for a route, e.g. a ketone standing by a Grignard step → dioxolane on before it, off at the end. */
@@ -39,17 +45,25 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 	const table = options.table ?? loadRuleTable();
 	const rules = options.rules ?? checkRulesFrom(table);
 	const tree = routeTree(doc, rules);
-	if (typeof tree === 'string') return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: tree }] };
+	if (typeof tree === 'string') {
+		return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: tree }] };
+	}
 	const ctx: Context = { doc, table, rules, tree, verify: options.verify };
 	const limit = options.plans ?? MAX_PLANS;
 	const needs = findNeeds(tree, rules);
 	const required = needs.filter((n) => n.level === 'reacts');
 	const cautions = needs.filter((n) => n.level === 'caution');
-	if (cautions.length === 0) return solve(ctx, required, limit);
+	if (cautions.length === 0) {
+		return solve(ctx, required, limit);
+	}
 	// Caution-level needs that some PG can mask (judged beside the others) are offered a mask;
 	// the rest stay free and every plan says so.
-	const maskable = cautions.filter((_, k) => judgeCandidates(table, rules, tree, needs, required.length + k).some((j) => j.options.length));
-	const cannot = cautions.filter((n) => !maskable.includes(n)).map((n) => cannotMask(rules, tree, n, 'no protecting group in the rule table fits it here'));
+	const maskable = cautions.filter((_, k) =>
+		judgeCandidates(table, rules, tree, needs, required.length + k).some((j) => j.options.length)
+	);
+	const cannot = cautions
+		.filter((n) => !maskable.includes(n))
+		.map((n) => cannotMask(rules, tree, n, 'no protecting group in the rule table fits it here'));
 	const usual = maskable.filter((n) => n.usuallyMasked);
 	const other = maskable.filter((n) => !n.usuallyMasked);
 	// Tiers, best first: mask what chemists usually mask; leave every caution free; mask them all.
@@ -58,18 +72,27 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 		{ kind: 'usual', needs: [...required, ...usual] },
 		{ kind: 'free', needs: required },
 		{ kind: 'all', needs: [...required, ...usual, ...other] }
-	].filter((tier, i, all) => all.findIndex((t) => t.needs.length === tier.needs.length) === i) as Tier[];
+	].filter(
+		(tier, i, all) => all.findIndex((t) => t.needs.length === tier.needs.length) === i
+	) as Tier[];
 	const solvedTiers: Plan[][] = [];
 	let firstUnsolved: Solved | undefined;
 	tiers.forEach((tier, i) => {
 		const room = limit - solvedTiers.flat().length - (tiers.length - 1 - i);
-		const notes = [...maskable.filter((n) => !tier.needs.includes(n)).map((n) => leftFree(rules, tree, n)), ...cannot];
+		const notes = [
+			...maskable.filter((n) => !tier.needs.includes(n)).map((n) => leftFree(rules, tree, n)),
+			...cannot
+		];
 		const solved = room > 0 ? solve(ctx, tier.needs, room, notes) : { plans: [] };
-		if (!solved.plans.length) firstUnsolved ??= solved;
+		if (!solved.plans.length) {
+			firstUnsolved ??= solved;
+		}
 		solvedTiers.push(solved.plans);
 	});
 	const plans = joinTiers(rules, tree, tiers, solvedTiers, { usual, other });
-	if (plans.length) return { plans };
+	if (plans.length) {
+		return { plans };
+	}
 	return firstUnsolved ?? { plans: [] };
 }
 
@@ -78,20 +101,45 @@ function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = [])
 	const { doc, table, rules, tree } = ctx;
 	if (needs.length === 0) {
 		const problem = ctx.verify(doc);
-		if (problem) return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: `No free group needs masking, but the route still clashes: ${problem}` }] };
+		if (problem) {
+			return {
+				plans: [],
+				unsolved: [
+					{
+						group: 'route',
+						atoms: [],
+						reason: `No free group needs masking, but the route still clashes: ${problem}`
+					}
+				]
+			};
+		}
 		// Never "nothing needs masking" while cautions stand: the notes name them.
-		const rationale = notes.length ? notes : ['No step attacks a free group that stands by: nothing needs masking.'];
-		return { plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale }] };
+		const rationale = notes.length
+			? notes
+			: ['No step attacks a free group that stands by: nothing needs masking.'];
+		return {
+			plans: [{ rank: 1, score: 0, protections: [], route: doc, addedSteps: 0, rationale }]
+		};
 	}
 	const judged = needs.map((_, i) => judgeCandidates(table, rules, tree, needs, i));
-	const unsolved = needs.flatMap((need, i) => (judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, tree, need, judged[i]!)]));
-	if (unsolved.length) return { plans: [], unsolved };
-	const optionLists = judged.map((list) => list.flatMap((j) => j.options).sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness));
+	const unsolved = needs.flatMap((need, i) =>
+		judged[i]!.some((j) => j.options.length) ? [] : [whyUnsolved(rules, tree, need, judged[i]!)]
+	);
+	if (unsolved.length) {
+		return { plans: [], unsolved };
+	}
+	const optionLists = judged.map((list) =>
+		list
+			.flatMap((j) => j.options)
+			.sort((a, b) => a.cautions - b.cautions || a.harshness - b.harshness)
+	);
 	const plans: Plan[] = [];
 	const ranked: Choice[] = [];
 	let firstProblem: string | null = null;
 	for (const choice of searchChoices(rules, needs, optionLists, SEARCH_WIDTH)) {
-		if (plans.length >= limit) break;
+		if (plans.length >= limit) {
+			break;
+		}
 		const drawn = drawRoute(doc, tree, needs, choice.options);
 		const problem = ctx.verify(drawn.route);
 		if (problem) {
@@ -100,18 +148,42 @@ function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = [])
 		}
 		const rationale = [
 			...needs.map((need, i) => because(rules, tree, need, choice.options[i]!)),
-			...drawn.shared.map(({ pg, count }) => `One protection step puts ${pg} on ${count} groups of the same kind at once.`),
-			...drawn.merged.map((pgs) => `One deprotection step takes off ${together(pgs)}: they come off under the same conditions.`),
-			...needs.flatMap((need, i) => judged[i]!.filter((j) => j.rejected).slice(0, 4).map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`)),
+			...drawn.shared.map(
+				({ pg, count }) =>
+					`One protection step puts ${pg} on ${count} groups of the same kind at once.`
+			),
+			...drawn.merged.map(
+				(pgs) =>
+					`One deprotection step takes off ${together(pgs)}: they come off under the same conditions.`
+			),
+			...needs.flatMap((need, i) =>
+				judged[i]!.filter((j) => j.rejected)
+					.slice(0, 4)
+					.map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`)
+			),
 			...notTogether(rules, needs, judged, choice.options),
 			...notes
 		];
 		ranked.push(choice);
-		plans.push({ rank: plans.length + 1, score: choice.score, protections: drawn.protections, route: drawn.route, addedSteps: choice.addedSteps, rationale });
+		plans.push({
+			rank: plans.length + 1,
+			score: choice.score,
+			protections: drawn.protections,
+			route: drawn.route,
+			addedSteps: choice.addedSteps,
+			rationale
+		});
 	}
-	if (plans.length) return { plans: withRanking(table, rules, needs, plans, ranked) };
-	const reason = firstProblem ? `Every combination of admissible protecting groups still clashes when re-checked: ${firstProblem}` : 'No combination of protecting groups is orthogonal: each choice for one group would strip another.';
-	return { plans: [], unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason })) };
+	if (plans.length) {
+		return { plans: withRanking(table, rules, needs, plans, ranked) };
+	}
+	const reason = firstProblem
+		? `Every combination of admissible protecting groups still clashes when re-checked: ${firstProblem}`
+		: 'No combination of protecting groups is orthogonal: each choice for one group would strip another.';
+	return {
+		plans: [],
+		unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason }))
+	};
 }
 
 function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option): string {
@@ -122,7 +194,9 @@ function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option)
 			: need.freeAt === tree.target
 				? 'at the end'
 				: `before ${tree.stepName(tree.next.get(need.freeAt)!.id)}, where it reacts`;
-	const cautions = option.cautions ? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)` : '';
+	const cautions = option.cautions
+		? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)`
+		: '';
 	const level = need.level === 'caution' ? ` ${maskedBecause(rules, tree, need)}` : '';
 	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${cautions}.${option.why ? ` ${option.why}` : ''}${level}`;
 }
@@ -130,12 +204,28 @@ function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option)
 function whyUnsolved(rules: CheckRules, tree: RouteTree, need: Need, judged: Judged[]): Unsolved {
 	const label = rules.groupLabel(need.group);
 	const first = tree.stepName(need.attackedAt[0]!);
-	if (judged.length === 0) return { group: need.group, atoms: need.atoms, reason: `${capital(first)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.` };
-	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt) ? judged[0]!.killedAt : undefined;
-	if (killer !== undefined) {
-		return { group: need.group, atoms: need.atoms, reason: `${capital(tree.stepName(killer))} makes it impossible: the free ${label} must be masked from ${first} on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).` };
+	if (judged.length === 0) {
+		return {
+			group: need.group,
+			atoms: need.atoms,
+			reason: `${capital(first)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.`
+		};
 	}
-	return { group: need.group, atoms: need.atoms, reason: `${capital(first)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.` };
+	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt)
+		? judged[0]!.killedAt
+		: undefined;
+	if (killer !== undefined) {
+		return {
+			group: need.group,
+			atoms: need.atoms,
+			reason: `${capital(tree.stepName(killer))} makes it impossible: the free ${label} must be masked from ${first} on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).`
+		};
+	}
+	return {
+		group: need.group,
+		atoms: need.atoms,
+		reason: `${capital(first)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.`
+	};
 }
 
 const capital = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
@@ -143,8 +233,12 @@ const capital = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 /** E.g. `['TBS', 'dioxolane']` → "TBS and dioxolane together"; `['THP', 'THP']` → "both THP groups at once". */
 function together(pgs: string[]): string {
 	const unique = [...new Set(pgs)];
-	if (unique.length > 1) return `${unique.join(' and ')} together`;
-	return pgs.length === 2 ? `both ${unique[0]} groups at once` : `all ${pgs.length} ${unique[0]} groups at once`;
+	if (unique.length > 1) {
+		return `${unique.join(' and ')} together`;
+	}
+	return pgs.length === 2
+		? `both ${unique[0]} groups at once`
+		: `all ${pgs.length} ${unique[0]} groups at once`;
 }
 
 /**
@@ -152,18 +246,33 @@ function together(pgs: string[]): string {
  * why, e.g. "dioxolane not used for the ketone: putting the acetonide on (…) would strip the
  * dioxolane on the ketone." At most three per group; a PG merely ranked lower is not mentioned.
  */
-function notTogether(rules: CheckRules, needs: Need[], judged: Judged[][], chosen: Option[]): string[] {
+function notTogether(
+	rules: CheckRules,
+	needs: Need[],
+	judged: Judged[][],
+	chosen: Option[]
+): string[] {
 	return needs.flatMap((need, i) =>
-		judged[i]!
-			.filter((j) => j.options.length && j.pg !== chosen[i]!.pg)
+		judged[i]!.filter((j) => j.options.length && j.pg !== chosen[i]!.pg)
 			.flatMap((j) => {
 				let reason: string | null = null;
 				for (const option of j.options) {
-					const clash = chosen.map((other, k) => (k === i ? null : (conflict(rules, needs, i, option, k, other) ?? conflict(rules, needs, k, other, i, option)))).find((r) => r !== null);
-					if (!clash) return [];
+					const clash = chosen
+						.map((other, k) =>
+							k === i
+								? null
+								: (conflict(rules, needs, i, option, k, other) ??
+									conflict(rules, needs, k, other, i, option))
+						)
+						.find((r) => r !== null);
+					if (!clash) {
+						return [];
+					}
 					reason ??= clash;
 				}
-				return reason ? [`${j.pg} not used for the ${rules.groupLabel(need.group)}: ${reason}.`] : [];
+				return reason
+					? [`${j.pg} not used for the ${rules.groupLabel(need.group)}: ${reason}.`]
+					: [];
 			})
 			.slice(0, 3)
 	);

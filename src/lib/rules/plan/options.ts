@@ -57,19 +57,21 @@ function removalPoints(
 	const points: { node: string; cautions: number }[] = [];
 	let cautions = 0;
 	for (let at = on; at <= latest; at++) {
-		if (at >= earliest) points.unshift({ node: need.path[at]!, cautions });
-		if (at === latest) break;
+		if (at >= earliest) {
+			points.unshift({ node: need.path[at]!, cautions });
+		}
+		if (at === latest) {
+			break;
+		}
 		const step = tree.next.get(need.path[at]!)!;
 		for (const c of tree.conditions.get(step.id)!) {
-			const rating = rules.stability(
-				pg,
-				c.id,
-				c.reagents,
-				siteOfGroup(need.group)
-			).rating;
-			if (rating === 'labile')
+			const rating = rules.stability(pg, c.id, c.reagents, siteOfGroup(need.group)).rating;
+			if (rating === 'labile') {
 				return points.length ? { points } : { points, killer: { step: step.id, condition: c.id } };
-			if (rating === 'caution') cautions++;
+			}
+			if (rating === 'caution') {
+				cautions++;
+			}
 		}
 	}
 	return { points };
@@ -100,24 +102,26 @@ export function judgeCandidates(
 		const transform = row.install.transforms.find((t) =>
 			(t.groups as readonly string[]).includes(need.group)
 		)?.smarts;
-		if (!transform)
+		if (!transform) {
 			return {
 				pg: row.id,
 				options: [],
 				rejected: `${row.id} rejected: the rule table has no install transform to draw it on a ${rules.groupLabel(need.group)}`
 			};
+		}
 		const { points, killer } = removalPoints(rules, tree, need, row.id);
 		if (killer) {
 			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of ${tree.stepName(killer.step)} would remove it`;
 			return { pg: row.id, options: [], rejected, killedAt: killer.step };
 		}
 		const recipes = installRecipes(row, need.group);
-		if (recipes.length === 0)
+		if (recipes.length === 0) {
 			return {
 				pg: row.id,
 				options: [],
 				rejected: `${row.id} rejected: none of its install recipes takes a ${rules.groupLabel(need.group)}`
 			};
+		}
 		const drawn = drawnGroups(row);
 		let firstInstallProblem = '';
 		const installs = bestOfEach(recipes, (recipe) => {
@@ -132,13 +136,15 @@ export function judgeCandidates(
 				row.id,
 				drawn
 			);
-			if (!installHarm.blocked)
+			if (!installHarm.blocked) {
 				return judged(table, rules, recipe, installHarm.cautions, 'install');
+			}
 			firstInstallProblem ||= `installing it (${recipe.reagents}) ${installHarm.blocked}`;
 			return null;
 		});
-		if (installs.length === 0)
+		if (installs.length === 0) {
 			return { pg: row.id, options: [], rejected: `${row.id} rejected: ${firstInstallProblem}` };
+		}
 		// The PG's own drawbacks; a new stereocentre matters only on a chiral substrate, which it
 		// turns into a mixture of diastereomers.
 		const own = row.drawbacks.filter((d) => d.kind !== 'new-stereocentre' || isChiralSubstrate());
@@ -191,8 +197,9 @@ export function judgeCandidates(
 			}
 			options.push(...undominated(here));
 		}
-		if (options.length === 0)
+		if (options.length === 0) {
 			return { pg: row.id, options, rejected: `${row.id} rejected: ${firstRemovalProblem}` };
+		}
 		return { pg: row.id, options, rejected: null };
 	});
 }
@@ -223,14 +230,17 @@ function bestOfEach(recipes: Recipe[], judge: (recipe: Recipe) => Judgement | nu
 	const best = new Map<string, Judgement>();
 	for (const recipe of recipes) {
 		const result = judge(recipe);
-		if (!result) continue;
+		if (!result) {
+			continue;
+		}
 		const held = best.get(recipe.family);
 		if (
 			!held ||
 			result.drawbacks.length < held.drawbacks.length ||
 			(result.drawbacks.length === held.drawbacks.length && result.cautions < held.cautions)
-		)
+		) {
 			best.set(recipe.family, result);
+		}
 	}
 	return [...best.values()];
 }

@@ -21,7 +21,9 @@ export function withRanking(
 ): Plan[] {
 	return plans.map((plan, k) => {
 		if (k === 0) {
-			if (plans.length < 2) return plan;
+			if (plans.length < 2) {
+				return plan;
+			}
 			return {
 				...plan,
 				rationale: [
@@ -57,16 +59,19 @@ function why(
 		names.upper === 'it'
 			? `${say('it', upper)} where ${say(names.lower, lower)}`
 			: `${say('it', lower)} where ${say(names.upper, upper)}`;
-	if (upper.addedSteps !== lower.addedSteps)
+	if (upper.addedSteps !== lower.addedSteps) {
 		return `${contrast((name, c) => `${name} adds ${count(c.addedSteps, 'step')}`)}.`;
+	}
 	if (upper.drawbacks !== lower.drawbacks) {
 		const extra = extraDrawbacks(upper, lower)[0];
-		if (extra)
+		if (extra) {
 			return `${names.lowers} ${extra.pg} has a drawback: ${lowerFirst(extra.drawback.note)}${/[.!?]$/.test(extra.drawback.note) ? '' : '.'}`;
+		}
 		return `${contrast((name, c) => `${name} carries ${count(c.drawbacks, 'drawback')}`)}.`;
 	}
-	if (upper.cautions !== lower.cautions)
+	if (upper.cautions !== lower.cautions) {
 		return `${contrast((name, c) => `${name} leaves ${count(c.cautions, 'caution rating')} to watch`)}.`;
+	}
 	if (upper.preference !== lower.preference) {
 		const i = needs.findIndex(
 			(_, x) => upper.options[x]!.preference < lower.options[x]!.preference
@@ -81,10 +86,11 @@ function why(
 		}
 		return `its protecting groups are the more usual choices (rules/preferences.json).`;
 	}
-	if (upper.harshness !== lower.harshness)
+	if (upper.harshness !== lower.harshness) {
 		return names.upper === 'it'
 			? `its added steps use milder conditions than ${names.lower}'s.`
 			: `its added steps use harsher conditions than ${names.upper}'s.`;
+	}
 	return `it costs the same as ${names.upper === 'it' ? names.lower : names.upper} on every count (steps, drawbacks, cautions, preference, harshness); either will do.`;
 }
 

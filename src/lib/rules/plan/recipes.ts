@@ -31,7 +31,9 @@ export function installRecipes(row: ProtectingGroupConditions, group: string): R
 	const drawn = drawnGroups(row);
 	return row.install.methods.flatMap((method, i) => {
 		const takes = (method.takes as readonly string[] | undefined) ?? drawn;
-		if (!takes.includes(group)) return [];
+		if (!takes.includes(group)) {
+			return [];
+		}
 		return method.reagents.map((reagents) => ({
 			reagents,
 			conditions: [...method.conditions],
@@ -74,10 +76,14 @@ export function recipeDrawbacks(
 	role: 'install' | 'removal'
 ): Drawback[] {
 	let known = drawbacksByRules.get(rules);
-	if (!known) drawbacksByRules.set(rules, (known = new Map()));
+	if (!known) {
+		drawbacksByRules.set(rules, (known = new Map()));
+	}
 	const key = `${role}\u0001${text}`;
 	let drawbacks = known.get(key);
-	if (!drawbacks) known.set(key, (drawbacks = readDrawbacks(table, rules, text, role)));
+	if (!drawbacks) {
+		known.set(key, (drawbacks = readDrawbacks(table, rules, text, role)));
+	}
 	return drawbacks;
 }
 
@@ -116,6 +122,8 @@ const CONCERN_WORDS: Record<string, string> = {
 const rowsByTable = new WeakMap<RuleTable, Map<string, RuleTable['reagents'][number]>>();
 function reagentRow(table: RuleTable, name: string) {
 	let rows = rowsByTable.get(table);
-	if (!rows) rowsByTable.set(table, (rows = new Map(table.reagents.map((r) => [r.name, r]))));
+	if (!rows) {
+		rowsByTable.set(table, (rows = new Map(table.reagents.map((r) => [r.name, r]))));
+	}
 	return rows.get(name);
 }

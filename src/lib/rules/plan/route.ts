@@ -10,14 +10,26 @@ import { installKey } from './search';
 import type { RouteTree } from './tree';
 import type { Need, Option, Protection } from './types';
 
-export type Drawn = { route: RouteDocument; protections: Protection[]; merged: string[][]; shared: { pg: string; count: number }[] };
+export type Drawn = {
+	route: RouteDocument;
+	protections: Protection[];
+	merged: string[][];
+	shared: { pg: string; count: number }[];
+};
 
 /** The protected route for one option per need, e.g. TBS on before step "s2" and off after "s3". */
-export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], options: Option[]): Drawn {
+export function drawRoute(
+	doc: RouteDocument,
+	tree: RouteTree,
+	needs: Need[],
+	options: Option[]
+): Drawn {
 	const taken = new Set([...doc.intermediates.map((n) => n.id), ...doc.steps.map((s) => s.id)]);
 	const fresh = (base: string) => {
 		let id = base.slice(0, 56);
-		for (let i = 2; taken.has(id); i++) id = `${base.slice(0, 56)}-${i}`;
+		for (let i = 2; taken.has(id); i++) {
+			id = `${base.slice(0, 56)}-${i}`;
+		}
 		taken.add(id);
 		return id;
 	};
@@ -32,7 +44,11 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 	const structureAt = (node: string, active: number[]) =>
 		protectedStructure(
 			tree.byId.get(node)!.structure,
-			active.map((x) => ({ pg: options[x]!.pg, transform: options[x]!.transform, atoms: needs[x]!.atomsAt.get(node)! }))
+			active.map((x) => ({
+				pg: options[x]!.pg,
+				transform: options[x]!.transform,
+				atoms: needs[x]!.atomsAt.get(node)!
+			}))
 		);
 	const intermediates: RouteIntermediate[] = [];
 	const steps: RouteStep[] = [];
@@ -44,10 +60,20 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 	const all = needs.map((_, x) => x);
 	for (const node of tree.nodes) {
 		const made = tree.made.get(node.id);
-		if (made) steps.push({ ...made, from: made.from.map((id) => latest.get(id)!) });
+		if (made) {
+			steps.push({ ...made, from: made.from.map((id) => latest.get(id)!) });
+		}
 		// Masks that arrive with the intermediate: on before it, not yet off.
-		let active = all.filter((x) => place(x, needs[x]!.installAt) < place(x, node.id) && place(x, node.id) <= place(x, options[x]!.removeAt));
-		intermediates.push({ ...node, label: labelAt(node, active), structure: structureAt(node.id, active) });
+		let active = all.filter(
+			(x) =>
+				place(x, needs[x]!.installAt) < place(x, node.id) &&
+				place(x, node.id) <= place(x, options[x]!.removeAt)
+		);
+		intermediates.push({
+			...node,
+			label: labelAt(node, active),
+			structure: structureAt(node.id, active)
+		});
 		let current = node.id;
 		const installs = new Map<string, number[]>();
 		// Amines go on first where several PGs go on here (see `installsBefore`).
@@ -61,10 +87,24 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 			active = [...active, ...batch];
 			const option = options[batch[0]!]!;
 			const id = fresh(`${node.id}-${option.pg}`);
-			intermediates.push({ id, label: labelAt(node, active), structure: structureAt(node.id, active) });
-			steps.push({ id: fresh(`protect-${option.pg}`), from: [current], to: id, reagents: option.install.reagents, conditions: [...option.install.conditions], intent: 'protect', notes: 'Added by the planner.' });
+			intermediates.push({
+				id,
+				label: labelAt(node, active),
+				structure: structureAt(node.id, active)
+			});
+			steps.push({
+				id: fresh(`protect-${option.pg}`),
+				from: [current],
+				to: id,
+				reagents: option.install.reagents,
+				conditions: [...option.install.conditions],
+				intent: 'protect',
+				notes: 'Added by the planner.'
+			});
 			current = id;
-			if (batch.length > 1) shared.push({ pg: option.pg, count: batch.length });
+			if (batch.length > 1) {
+				shared.push({ pg: option.pg, count: batch.length });
+			}
 			for (const x of batch) {
 				const need = needs[x]!;
 				const chosen = options[x]!;
@@ -73,8 +113,16 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 					atoms: need.atomsAt.get(node.id)!,
 					intermediate: id,
 					protectingGroup: chosen.pg,
-					install: { before: tree.next.get(node.id)!.id, ...chosen.install, conditions: [...chosen.install.conditions] },
-					removal: { after: chosen.removeAt === tree.target ? 'end' : tree.made.get(chosen.removeAt)!.id, ...chosen.removal, conditions: [...chosen.removal.conditions] }
+					install: {
+						before: tree.next.get(node.id)!.id,
+						...chosen.install,
+						conditions: [...chosen.install.conditions]
+					},
+					removal: {
+						after: chosen.removeAt === tree.target ? 'end' : tree.made.get(chosen.removeAt)!.id,
+						...chosen.removal,
+						conditions: [...chosen.removal.conditions]
+					}
 				});
 			}
 		}
@@ -87,14 +135,37 @@ export function drawRoute(doc: RouteDocument, tree: RouteTree, needs: Need[], op
 			active = active.filter((x) => !batch.includes(x));
 			const removal = options[batch[0]!]!.removal;
 			const id = fresh(`${node.id}-free`);
-			intermediates.push({ id, label: labelAt(node, active), structure: structureAt(node.id, active) });
-			steps.push({ id: fresh(`remove-${batch.map((x) => options[x]!.pg).join('-')}`), from: [current], to: id, reagents: removal.reagents, conditions: [...removal.conditions], intent: 'deprotect', notes: 'Added by the planner.' });
-			if (batch.length > 1) merged.push(batch.map((x) => options[x]!.pg));
+			intermediates.push({
+				id,
+				label: labelAt(node, active),
+				structure: structureAt(node.id, active)
+			});
+			steps.push({
+				id: fresh(`remove-${batch.map((x) => options[x]!.pg).join('-')}`),
+				from: [current],
+				to: id,
+				reagents: removal.reagents,
+				conditions: [...removal.conditions],
+				intent: 'deprotect',
+				notes: 'Added by the planner.'
+			});
+			if (batch.length > 1) {
+				merged.push(batch.map((x) => options[x]!.pg));
+			}
 			current = id;
 		}
 		latest.set(node.id, current);
 	}
 	// Intermediates on no step are the chemist's notes: they stay as they were.
 	const loose = doc.intermediates.filter((n) => !tree.next.has(n.id) && !tree.made.has(n.id));
-	return { route: { name: `${doc.name} (protected)`.slice(0, 120), intermediates: [...intermediates, ...loose], steps }, protections, merged, shared };
+	return {
+		route: {
+			name: `${doc.name} (protected)`.slice(0, 120),
+			intermediates: [...intermediates, ...loose],
+			steps
+		},
+		protections,
+		merged,
+		shared
+	};
 }

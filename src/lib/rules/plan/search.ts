@@ -22,11 +22,12 @@ export type Choice = Cost & { options: Option[]; score: number };
 const knownRemovalKeys = new WeakMap<Option, string>();
 const removalKey = (option: Option) => {
 	let key = knownRemovalKeys.get(option);
-	if (key === undefined)
+	if (key === undefined) {
 		knownRemovalKeys.set(
 			option,
 			(key = `${option.removeAt}\u0001${[...option.removal.conditions].sort().join('+')}`)
 		);
+	}
 	return key;
 };
 /** Needs that take the same PG by the same recipe at the same gap share one step (five ketones, one ketalisation; DHP on two alcohols). */
@@ -94,8 +95,9 @@ export function conflict(
 		!maskedAt(needs, b, na.installAt, a, 'install', ob.removeAt)
 	) {
 		const taken = nb.members.filter((g) => oa.selectivity.takes.includes(g));
-		if (taken.some((g) => !prefersOver(oa.selectivity, na.group, g)))
+		if (taken.some((g) => !prefersOver(oa.selectivity, na.group, g))) {
 			return `putting the ${oa.pg} on (${oa.install.reagents}) would also put ${oa.pg} on the ${rules.groupLabel(nb.group)} beside it unless both take the same protecting group`;
+		}
 	}
 	// A group whose mask came off early is free again for a's install or removal.
 	if (
@@ -132,17 +134,21 @@ export function conflict(
 type RecipeText = { reagents: string; conditions: string[] };
 
 function reacts(rules: CheckRules, group: string, recipe: RecipeText): boolean {
-	for (const c of recipeConditions(rules, recipe))
-		if (rules.reactivity(group, c.id, c.reagents)?.rating === 'reacts')
+	for (const c of recipeConditions(rules, recipe)) {
+		if (rules.reactivity(group, c.id, c.reagents)?.rating === 'reacts') {
 			return true;
+		}
+	}
 	return false;
 }
 
 function strips(rules: CheckRules, recipe: RecipeText, pg: string, group: string): boolean {
 	const site = siteOfGroup(group);
-	for (const c of recipeConditions(rules, recipe))
-		if (rules.stability(pg, c.id, c.reagents, site).rating === 'labile')
+	for (const c of recipeConditions(rules, recipe)) {
+		if (rules.stability(pg, c.id, c.reagents, site).rating === 'labile') {
 			return true;
+		}
+	}
 	return false;
 }
 
@@ -160,8 +166,11 @@ class KeyCounts {
 	}
 	remove(key: string): void {
 		const left = this.#counts.get(key)! - 1;
-		if (left === 0) this.#counts.delete(key);
-		else this.#counts.set(key, left);
+		if (left === 0) {
+			this.#counts.delete(key);
+		} else {
+			this.#counts.set(key, left);
+		}
 	}
 }
 
@@ -186,10 +195,13 @@ export function searchChoices(
 	const fits = (x: number, i: number, y: number, j: number) => {
 		const key = x * needs.length + y;
 		let table = pairs.get(key);
-		if (!table) pairs.set(key, (table = new Uint8Array(options[x]!.length * options[y]!.length)));
+		if (!table) {
+			pairs.set(key, (table = new Uint8Array(options[x]!.length * options[y]!.length)));
+		}
 		const cell = i * options[y]!.length + j;
-		if (table[cell] === 0)
+		if (table[cell] === 0) {
 			table[cell] = compatible(rules, needs, x, options[x]![i]!, y, options[y]![j]!) ? 1 : 2;
+		}
 		return table[cell] === 1;
 	};
 	// Lower bounds for the needs from `depth` on: their cheapest options, one install per install
@@ -214,9 +226,14 @@ export function searchChoices(
 		let other = false;
 		for (let d = depth; d < needs.length; d++) {
 			const window = windows[d]!;
-			if (window.some((node) => removalPlaces.has(node))) continue;
-			if (window.length === 1) single.add(window[0]!);
-			else other = true;
+			if (window.some((node) => removalPlaces.has(node))) {
+				continue;
+			}
+			if (window.length === 1) {
+				single.add(window[0]!);
+			} else {
+				other = true;
+			}
 		}
 		const otherUncovered =
 			other &&
@@ -239,7 +256,9 @@ export function searchChoices(
 		if (best.length >= keep) {
 			// The steps still to come cost most to count: first try the bound without them.
 			const known = stepScore(added) + below + (rest[depth] ?? 0);
-			if (known >= worst() || known + stepScore(stepsStillToCome(depth)) >= worst()) return;
+			if (known >= worst() || known + stepScore(stepsStillToCome(depth)) >= worst()) {
+				return;
+			}
 		}
 		if (depth === needs.length) {
 			const picked = chosen.map((i, x) => options[x]![i]!);
@@ -260,11 +279,16 @@ export function searchChoices(
 		for (let i = 0; i < list.length; i++) {
 			// Options come cheapest first and adding one never removes a step: once one cannot
 			// beat the worst kept choice, none after it can.
-			if (best.length >= keep && steps + below + scores[i]! + (rest[depth + 1] ?? 0) >= worst())
+			if (best.length >= keep && steps + below + scores[i]! + (rest[depth + 1] ?? 0) >= worst()) {
 				break;
+			}
 			let fitsAll = true;
-			for (let j = 0; j < depth && fitsAll; j++) fitsAll = fits(depth, i, j, chosen[j]!);
-			if (!fitsAll) continue;
+			for (let j = 0; j < depth && fitsAll; j++) {
+				fitsAll = fits(depth, i, j, chosen[j]!);
+			}
+			if (!fitsAll) {
+				continue;
+			}
 			const option = list[i]!;
 			const install = installKeys[depth]![i]!;
 			const removal = removalKeys[depth]![i]!;
@@ -289,13 +313,17 @@ export function searchChoices(
 		const mine = signature(choice.options);
 		const same = signatures.indexOf(mine);
 		if (same >= 0) {
-			if (best[same]!.score <= choice.score) return;
+			if (best[same]!.score <= choice.score) {
+				return;
+			}
 			best.splice(same, 1);
 			signatures.splice(same, 1);
 		}
 		// Insert in score order, after equal scores: ties stay in the order they were found.
 		let at = best.length;
-		while (at > 0 && best[at - 1]!.score > choice.score) at--;
+		while (at > 0 && best[at - 1]!.score > choice.score) {
+			at--;
+		}
 		best.splice(at, 0, choice);
 		signatures.splice(at, 0, mine);
 		if (best.length > keep) {
@@ -320,8 +348,11 @@ function installClasses(needs: Need[], installKeys: string[][]): string[] {
 	installKeys.forEach((keys, i) => {
 		for (const key of keys) {
 			const other = holder.get(key);
-			if (other === undefined) holder.set(key, i);
-			else parent[root(i)] = root(other);
+			if (other === undefined) {
+				holder.set(key, i);
+			} else {
+				parent[root(i)] = root(other);
+			}
 		}
 	});
 	return needs.map((need, i) => `${need.installAt}\u0001${root(i)}`);

@@ -25,15 +25,20 @@ export function freeUnits(structure: string): Unit[] {
 	const free = groups.filter((g) => !covered.has(g.key));
 	const units: Unit[] = [];
 	for (const diol of free.filter((g) => DIOLS.includes(g.id))) {
-		if (units.some((u) => u.atoms.some((a) => diol.atoms.includes(a)))) continue;
+		if (units.some((u) => u.atoms.some((a) => diol.atoms.includes(a)))) {
+			continue;
+		}
 		units.push({ id: diol.id, atoms: diol.atoms, members: [diol.id] });
 	}
 	for (const group of free.filter((g) => !DIOLS.includes(g.id))) {
 		const diol = units.find(
 			(u) => DIOLS.includes(u.id) && u.atoms.includes(group.key) && group.id.startsWith('alcohol')
 		);
-		if (diol) diol.members.push(group.id);
-		else units.push({ id: group.id, atoms: group.atoms, members: [group.id] });
+		if (diol) {
+			diol.members.push(group.id);
+		} else {
+			units.push({ id: group.id, atoms: group.atoms, members: [group.id] });
+		}
 	}
 	return units;
 }
@@ -52,7 +57,9 @@ function follow(
 ): (number | undefined)[] {
 	const cacheKey = `${substrates.join('\u0000')}\u0001${product}`;
 	const stored = followed.get(cacheKey);
-	if (stored) return stored;
+	if (stored) {
+		return stored;
+	}
 	const count = (list: Unit[], id: string) => list.filter((u) => u.id === id).length;
 	const ids = [...new Set(before.map((u) => u.id))];
 	const mapped = ids.filter(
@@ -77,9 +84,13 @@ function follow(
 	const result: (number | undefined)[] = before.map(() => undefined);
 	const used = new Set<number>();
 	before.forEach((unit, i) => {
-		if (!map) return;
+		if (!map) {
+			return;
+		}
 		const mapped = unit.atoms.map((a) => map.get(a));
-		if (mapped.some((a) => a === undefined)) return;
+		if (mapped.some((a) => a === undefined)) {
+			return;
+		}
 		const index = after.findIndex(
 			(u, j) => !used.has(j) && u.id === unit.id && key(u.atoms) === key(mapped as number[])
 		);
@@ -89,10 +100,14 @@ function follow(
 		}
 	});
 	for (const id of ids) {
-		if (count(after, id) < count(before, id)) continue;
+		if (count(after, id) < count(before, id)) {
+			continue;
+		}
 		// Same count or more: every instance survives; pair the ones the map missed in order.
 		before.forEach((unit, i) => {
-			if (unit.id !== id || result[i] !== undefined) return;
+			if (unit.id !== id || result[i] !== undefined) {
+				return;
+			}
 			const index = after.findIndex((u, j) => !used.has(j) && u.id === id);
 			if (index >= 0) {
 				result[i] = index;
@@ -121,7 +136,9 @@ function substrateUnits(
 	let offset = 0;
 	return from.flatMap((node) => {
 		const shift = offset;
-		if (from.length > 1) offset += sharedMolecule(tree.byId.get(node)!.structure).getAllAtoms();
+		if (from.length > 1) {
+			offset += sharedMolecule(tree.byId.get(node)!.structure).getAllAtoms();
+		}
 		return units.get(node)!.map((unit, index) => ({
 			unit: { ...unit, atoms: unit.atoms.map((a) => a + shift) },
 			node,
@@ -147,12 +164,14 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 		tracks.push(made);
 		return made;
 	};
-	for (const node of tree.nodes)
-		if (!tree.made.has(node.id))
+	for (const node of tree.nodes) {
+		if (!tree.made.has(node.id)) {
 			open.set(
 				node.id,
 				units.get(node.id)!.map((unit) => track(node.id, unit))
 			);
+		}
+	}
 	for (const step of tree.steps) {
 		const before = substrateUnits(tree, step.from, units);
 		const after = units.get(step.to)!;
@@ -221,7 +240,9 @@ export function findNeeds(tree: RouteTree, rules: CheckRules): Need[] {
 		// Masking is needed where a step reacts with it; where steps are only cautions, plans offer it.
 		const level = hits.some((h) => h.rating === 'reacts') ? 'reacts' : 'caution';
 		const attacks = hits.filter((h) => h.rating === level);
-		if (attacks.length === 0) continue;
+		if (attacks.length === 0) {
+			continue;
+		}
 		const last = track.path.indexOf(attacks.at(-1)!.node);
 		needs.push({
 			group: track.unit.id,
@@ -250,7 +271,9 @@ function worstRating(rules: CheckRules, tree: RouteTree, stepId: string, members
 	for (const c of tree.conditions.get(stepId)!) {
 		for (const group of members) {
 			const rule = rules.reactivity(group, c.id, c.reagents);
-			if (rule?.rating === 'reacts') return { rating: rule.rating, usuallyMasked: false };
+			if (rule?.rating === 'reacts') {
+				return { rating: rule.rating, usuallyMasked: false };
+			}
 			if (rule?.rating === 'caution') {
 				worst = rule.rating;
 				usuallyMasked ||= rule.usuallyMasked === true;

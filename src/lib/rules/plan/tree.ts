@@ -34,40 +34,48 @@ export type RouteTree = {
  * a string says why it is not one (an intermediate used by two steps, or two targets).
  */
 export function routeTree(doc: RouteDocument, rules: CheckRules): RouteTree | string {
-	if (doc.steps.length === 0) return 'The route has no steps to plan.';
+	if (doc.steps.length === 0) {
+		return 'The route has no steps to plan.';
+	}
 	const next = new Map<string, RouteStep>();
 	const made = new Map<string, RouteStep>();
 	for (const step of doc.steps) {
 		for (const from of step.from) {
 			const other = next.get(from);
-			if (other)
+			if (other) {
 				return `Intermediate "${from}" is used by two steps ("${other.id}" and "${step.id}"); the planner plans routes that converge on one target, so plan each branch as its own route.`;
+			}
 			next.set(from, step);
 		}
 		const other = made.get(step.to);
-		if (other)
+		if (other) {
 			return `Intermediate "${step.to}" is made by two steps ("${other.id}" and "${step.id}"); keep one of them for planning.`;
+		}
 		made.set(step.to, step);
 	}
 	const byId = new Map(doc.intermediates.map((n) => [n.id, n]));
 	const onSteps = doc.intermediates.filter((n) => next.has(n.id) || made.has(n.id));
 	const targets = onSteps.filter((n) => !next.has(n.id));
-	if (targets.length !== 1)
+	if (targets.length !== 1) {
 		return `The route ends in ${targets.length} intermediates (${targets.map((n) => `"${n.id}"`).join(', ')}); the planner needs the steps to converge on one target.`;
+	}
 	// Depth-first from the target: each step after everything that feeds it.
 	const nodes: RouteIntermediate[] = [];
 	const steps: RouteStep[] = [];
 	const visit = (id: string) => {
 		const step = made.get(id);
 		if (step) {
-			for (const from of step.from) visit(from);
+			for (const from of step.from) {
+				visit(from);
+			}
 			steps.push(step);
 		}
 		nodes.push(byId.get(id)!);
 	};
 	visit(targets[0]!.id);
-	if (steps.length !== doc.steps.length)
+	if (steps.length !== doc.steps.length) {
 		return "Some steps do not lead to the route's target (a loop?); the planner needs every step on the way to one target.";
+	}
 	const conditions = new Map(
 		steps.map((s) => [s.id, stepConditions(rules, s.reagents, s.conditions)])
 	);

@@ -49,9 +49,13 @@ export async function revokeAllApiTokens(userId: string): Promise<number> {
 export async function userForApiToken(token: string): Promise<SessionUser | null> {
 	await dbReady();
 	const record = await ApiToken.findOne({ where: { tokenHash: sha256(token), revokedAt: null } });
-	if (!record) return null;
+	if (!record) {
+		return null;
+	}
 	const user = await User.findByPk(record.userId);
-	if (!user) return null;
+	if (!user) {
+		return null;
+	}
 	const now = Date.now();
 	if (!record.lastUsedAt || now - record.lastUsedAt.getTime() > LAST_USED_GRANULARITY_MS) {
 		await ApiToken.update({ lastUsedAt: new Date(now) }, { where: { id: record.id } });

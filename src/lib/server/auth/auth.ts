@@ -40,8 +40,12 @@ export const {
 			return token;
 		},
 		session({ session, token }) {
-			if (typeof token.uid === 'string') session.user.id = token.uid;
-			if (typeof token.sid === 'string') session.sessionId = token.sid;
+			if (typeof token.uid === 'string') {
+				session.user.id = token.uid;
+			}
+			if (typeof token.sid === 'string') {
+				session.sessionId = token.sid;
+			}
 			return session;
 		},
 		// Scripted sign-ins name their own callbackUrl; the same same-origin rule as the page's.
@@ -53,13 +57,17 @@ export const {
 	events: {
 		async signOut(message) {
 			const sid = 'token' in message ? message.token?.sid : undefined;
-			if (typeof sid === 'string') await endSession(sid);
+			if (typeof sid === 'string') {
+				await endSession(sid);
+			}
 		}
 	},
 	logger: {
 		error(error) {
 			// A wrong password is an expected outcome, shown on the form; not a server error.
-			if (error.name === 'CredentialsSignin') return;
+			if (error.name === 'CredentialsSignin') {
+				return;
+			}
 			console.error('[auth]', error);
 		}
 	}

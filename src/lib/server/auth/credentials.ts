@@ -13,13 +13,17 @@ export async function verifyCredentials(
 	email: unknown,
 	password: unknown
 ): Promise<SessionUser | null> {
-	if (typeof email !== 'string' || typeof password !== 'string' || !email || !password) return null;
+	if (typeof email !== 'string' || typeof password !== 'string' || !email || !password) {
+		return null;
+	}
 	await dbReady();
 	const user = await User.findOne({ where: { email: normaliseEmail(email) } });
 	if (!user?.passwordHash) {
 		await burnPasswordCheck(password);
 		return null;
 	}
-	if (!(await verifyPassword(password, user.passwordHash))) return null;
+	if (!(await verifyPassword(password, user.passwordHash))) {
+		return null;
+	}
 	return { id: user.id, email: user.email, name: user.name };
 }

@@ -18,7 +18,9 @@ export function isApiPath(url: URL): boolean {
 /** The signed-in (or token-bearing) user; otherwise redirects to sign-in or answers 401. */
 export function requireUser(event: GuardEvent): SessionUser {
 	const user = event.locals.user;
-	if (user) return user;
+	if (user) {
+		return user;
+	}
 	if (isApiPath(event.url)) {
 		error(401, {
 			code: 'unauthenticated',
@@ -71,7 +73,9 @@ const ACTION_PHRASES: Record<Action, string> = {
 export async function requireTeamAction(event: GuardEvent, teamId: string, action: Action) {
 	const user = requireUser(event);
 	const role = await roleIn(user.id, teamId);
-	if (!role) notFound('That team');
+	if (!role) {
+		notFound('That team');
+	}
 	if (!can(role, action)) {
 		error(403, {
 			code: 'forbidden',
@@ -86,7 +90,9 @@ export async function requireProjectAction(event: GuardEvent, projectId: string,
 	const user = requireUser(event);
 	await dbReady();
 	const project = isUuid(projectId) ? await Project.findByPk(projectId) : null;
-	if (!project || !(await roleIn(user.id, project.teamId))) notFound('That project');
+	if (!project || !(await roleIn(user.id, project.teamId))) {
+		notFound('That project');
+	}
 	const { role } = await requireTeamAction(event, project.teamId, action);
 	return { user, role, project };
 }
@@ -98,7 +104,9 @@ export async function requireRouteAction(event: GuardEvent, routeId: string, act
 	const route = isUuid(routeId)
 		? await Route.findByPk(routeId, { include: [{ model: Project, as: 'project' }] })
 		: null;
-	if (!route?.project || !(await roleIn(user.id, route.project.teamId))) notFound('That route');
+	if (!route?.project || !(await roleIn(user.id, route.project.teamId))) {
+		notFound('That route');
+	}
 	const { role } = await requireTeamAction(event, route.project.teamId, action);
 	return { user, role, route, project: route.project };
 }

@@ -56,7 +56,9 @@ type SqliteConnectionManager = { getConnection(options: object): Promise<unknown
 async function sqliteConnectionFor(sequelize: Sequelize): Promise<unknown> {
 	const { options } = sequelize as unknown as { options: { storage?: string } };
 	const storage = options.storage ?? ':memory:';
-	if (storage !== ':memory:') return openSqliteConnection(storage);
+	if (storage !== ':memory:') {
+		return openSqliteConnection(storage);
+	}
 	const manager = sequelize.connectionManager as unknown as SqliteConnectionManager;
 	return manager.getConnection({});
 }
@@ -115,14 +117,20 @@ export async function takeSignInAttempt(email: string, address: string): Promise
 		perAccountFromAddress.get(key),
 		perAddress.get(address)
 	]);
-	if (account && account.remainingPoints <= 0) return refusal(account);
-	if (addressCount && addressCount.remainingPoints <= 0) return refusal(addressCount);
+	if (account && account.remainingPoints <= 0) {
+		return refusal(account);
+	}
+	if (addressCount && addressCount.remainingPoints <= 0) {
+		return refusal(addressCount);
+	}
 	try {
 		await limiterWrite(() => perAddress.consume(address));
 		await limiterWrite(() => perAccountFromAddress.consume(key));
 		return { allowed: true };
 	} catch (rejection) {
-		if (rejection instanceof RateLimiterRes) return refusal(rejection);
+		if (rejection instanceof RateLimiterRes) {
+			return refusal(rejection);
+		}
 		throw rejection;
 	}
 }
@@ -133,7 +141,9 @@ export async function settleSignInAttempt(
 	address: string,
 	succeeded: boolean
 ): Promise<void> {
-	if (!succeeded) return;
+	if (!succeeded) {
+		return;
+	}
 	const { perAccountFromAddress, perAddress } = await limiters();
 	await limiterWrite(() => perAccountFromAddress.delete(accountKey(email, address)));
 	await limiterWrite(() => perAddress.reward(address, 1));

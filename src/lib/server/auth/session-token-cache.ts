@@ -47,12 +47,18 @@ function claimsOf(token: JWT): string {
 
 /** Auth.js's `decode`, remembered per token string until the token expires. */
 export async function decodeSessionToken(params: JWTDecodeParams): Promise<JWT | null> {
-	if (!params.token) return null;
+	if (!params.token) {
+		return null;
+	}
 	const key = cacheKey(params.secret, params.salt, params.token);
 	const hit = decoded.get(key);
-	if (hit && typeof hit.exp === 'number' && hit.exp > nowSeconds()) return { ...hit };
+	if (hit && typeof hit.exp === 'number' && hit.exp > nowSeconds()) {
+		return { ...hit };
+	}
 	const payload = await decode(params);
-	if (payload) decoded.set(key, payload);
+	if (payload) {
+		decoded.set(key, payload);
+	}
 	return payload;
 }
 
@@ -68,14 +74,17 @@ export async function encodeSessionToken(params: JWTEncodeParams): Promise<strin
 		nowSeconds() - token.iat < REISSUE_AFTER_SECONDS
 	) {
 		const again = issued.get(cacheKey(params.secret, salt, token.jti));
-		if (again && again.claims === claimsOf(token)) return again.token;
+		if (again && again.claims === claimsOf(token)) {
+			return again.token;
+		}
 	}
 	const fresh = await encode(params);
 	const payload = await decodeSessionToken({ token: fresh, secret: params.secret, salt });
-	if (payload?.jti)
+	if (payload?.jti) {
 		issued.set(cacheKey(params.secret, salt, payload.jti), {
 			token: fresh,
 			claims: claimsOf(payload)
 		});
+	}
 	return fresh;
 }

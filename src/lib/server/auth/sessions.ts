@@ -28,13 +28,17 @@ export async function userForSession(
 	sessionId: string,
 	userId: string
 ): Promise<SessionUser | null> {
-	if (!isUuid(sessionId) || !isUuid(userId)) return null;
+	if (!isUuid(sessionId) || !isUuid(userId)) {
+		return null;
+	}
 	await dbReady();
 	const session = await Session.findOne({
 		where: { id: sessionId, userId, expiresAt: { [Op.gt]: new Date() } },
 		include: [{ model: User, as: 'user', attributes: ['id', 'email', 'name'], required: true }]
 	});
-	if (!session?.user) return null;
+	if (!session?.user) {
+		return null;
+	}
 	if (endFromNow().getTime() - session.expiresAt.getTime() > EXTEND_GRANULARITY_MS) {
 		await Session.update({ expiresAt: endFromNow() }, { where: { id: sessionId } });
 	}
@@ -44,7 +48,9 @@ export async function userForSession(
 
 /** Ends one session on every server: its cookie is refused from the next request on. */
 export async function endSession(sessionId: string): Promise<void> {
-	if (!isUuid(sessionId)) return;
+	if (!isUuid(sessionId)) {
+		return;
+	}
 	await dbReady();
 	await Session.destroy({ where: { id: sessionId } });
 }

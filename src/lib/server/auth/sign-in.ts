@@ -19,7 +19,9 @@ export async function authorizeSignIn(
 	const emailText = typeof email === 'string' ? email : '';
 	const allowance = await takeSignInAttempt(emailText, address);
 	if (!allowance.allowed) {
-		if (context) context.retryAfterSeconds = allowance.retryAfterSeconds;
+		if (context) {
+			context.retryAfterSeconds = allowance.retryAfterSeconds;
+		}
 		return null;
 	}
 	const user = await verifyCredentials(email, password);

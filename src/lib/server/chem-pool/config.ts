@@ -4,7 +4,9 @@ import { availableParallelism } from 'node:os';
 /** A whole number from the environment: unset or not a number → the default; below `min` → `min`. */
 function fromEnv(name: string, fallback: number, min: number): number {
 	const raw = process.env[name];
-	if (raw === undefined || raw.trim() === '') return fallback;
+	if (raw === undefined || raw.trim() === '') {
+		return fallback;
+	}
 	const value = Number(raw);
 	return Number.isFinite(value) ? Math.max(min, Math.floor(value)) : fallback;
 }

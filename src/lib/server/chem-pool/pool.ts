@@ -20,14 +20,20 @@ const WORKER_FILE = 'chem-worker.mjs';
  * Vitest and the benchmarks bundle into node_modules/.cache/orthogon/.
  */
 export function chemWorkerFile(): string {
-	if (process.env.ORTHOGON_CHEM_WORKER) return path.resolve(process.env.ORTHOGON_CHEM_WORKER);
+	if (process.env.ORTHOGON_CHEM_WORKER) {
+		return path.resolve(process.env.ORTHOGON_CHEM_WORKER);
+	}
 	let dir = path.dirname(fileURLToPath(import.meta.url));
 	for (let up = 0; up < 4; up++, dir = path.dirname(dir)) {
 		const candidate = path.join(dir, WORKER_FILE);
-		if (fs.existsSync(candidate)) return candidate;
+		if (fs.existsSync(candidate)) {
+			return candidate;
+		}
 	}
 	const dev = path.resolve('node_modules', '.cache', 'orthogon', WORKER_FILE);
-	if (fs.existsSync(dev)) return dev;
+	if (fs.existsSync(dev)) {
+		return dev;
+	}
 	throw new Error(
 		`The chemistry worker (${WORKER_FILE}) was not found; run \`npm run build\` or \`node scripts/build-chem-worker.js\`.`
 	);
@@ -44,7 +50,9 @@ const inFlight = new WeakMap<Pool, number>();
 
 function pool(): Pool {
 	const holder = globalThis as Holder;
-	if (holder[POOL]) return holder[POOL];
+	if (holder[POOL]) {
+		return holder[POOL];
+	}
 	const config = chemPoolConfig();
 	const created = new Piscina<WorkerRequest, WorkerAnswer>({
 		filename: chemWorkerFile(),
@@ -75,7 +83,9 @@ export async function runChemistry<K extends ChemistryTask>(
 	const budgetMs = options.budgetMs ?? config.budgetMs;
 	const current = pool();
 	const running = inFlight.get(current) ?? 0;
-	if (running >= current.options.maxThreads + config.maxQueue) throw busy();
+	if (running >= current.options.maxThreads + config.maxQueue) {
+		throw busy();
+	}
 	inFlight.set(current, running + 1);
 	let answer: WorkerAnswer;
 	try {
@@ -102,7 +112,9 @@ function unavailable(caught: unknown, budgetMs: number): ApiFailure | null {
 			{ budgetMs }
 		);
 	}
-	if (error?.message === 'Task queue is at limit') return busy();
+	if (error?.message === 'Task queue is at limit') {
+		return busy();
+	}
 	if (error?.code === 'ERR_WORKER_OUT_OF_MEMORY') {
 		return new ApiFailure(
 			422,

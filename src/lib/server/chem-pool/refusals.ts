@@ -13,8 +13,12 @@ export function codeForStructure(
 	reason: string | undefined,
 	fallback = 'invalid_structure'
 ): string {
-	if (reason === 'too_large') return 'structure_too_large';
-	if (reason === 'invalid_highlight') return 'invalid_highlight';
+	if (reason === 'too_large') {
+		return 'structure_too_large';
+	}
+	if (reason === 'invalid_highlight') {
+		return 'invalid_highlight';
+	}
 	return fallback;
 }
 
@@ -30,7 +34,9 @@ function structureRefusal(caught: StructureError): Refusal {
 
 /** The refusal a thrown value stands for, or null when it is a bug, e.g. a StructureError → 422. */
 export function refusalOf(caught: unknown): Refusal | null {
-	if (isStructureError(caught)) return structureRefusal(caught);
+	if (isStructureError(caught)) {
+		return structureRefusal(caught);
+	}
 	if (caught instanceof UnknownConditionError) {
 		return { status: 422, code: 'unknown_condition', message: caught.message };
 	}

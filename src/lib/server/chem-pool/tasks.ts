@@ -21,7 +21,9 @@ export const chemistryTasks = {
 	drawRoute: ({ structures }: { structures: string[] }) => {
 		const analyses: Record<string, Analysis> = {};
 		for (const structure of structures) {
-			if (analyses[structure]) continue;
+			if (analyses[structure]) {
+				continue;
+			}
 			try {
 				analyses[structure] = analyzeStructure(structure, { depict: true });
 			} catch {

@@ -10,12 +10,16 @@ export type WorkerAnswer = { ok: true; value: unknown } | { ok: false; refusal: 
 
 export default function runTask({ task, input }: WorkerRequest): WorkerAnswer {
 	const run = chemistryTasks[task] as (input: unknown) => unknown;
-	if (typeof run !== 'function') throw new Error(`Unknown chemistry task “${String(task)}”.`);
+	if (typeof run !== 'function') {
+		throw new Error(`Unknown chemistry task “${String(task)}”.`);
+	}
 	try {
 		return { ok: true, value: run(input) };
 	} catch (caught) {
 		const refusal = refusalOf(caught);
-		if (refusal) return { ok: false, refusal };
+		if (refusal) {
+			return { ok: false, refusal };
+		}
 		throw caught;
 	}
 }

@@ -14,7 +14,9 @@ class TunedDatabase extends sqlite3.Database {
 		super(filename, mode ?? sqlite3.OPEN_READWRITE | sqlite3.OPEN_CREATE, (err) => {
 			if (!err) {
 				this.configure('busyTimeout', BUSY_TIMEOUT_MS);
-				if (filename !== ':memory:') this.run('PRAGMA journal_mode=WAL');
+				if (filename !== ':memory:') {
+					this.run('PRAGMA journal_mode=WAL');
+				}
 			}
 			callback?.(err);
 		});
@@ -31,7 +33,9 @@ const tunedSqlite = Object.assign(Object.create(sqlite3) as typeof sqlite3, {
 
 /** Where a `sqlite:` URL keeps its file, e.g. `sqlite:data/orthogon.db` → `data/orthogon.db`. */
 export function sqliteStorage(url: string): string | null {
-	if (!url.startsWith('sqlite:')) return null;
+	if (!url.startsWith('sqlite:')) {
+		return null;
+	}
 	const rest = url.slice('sqlite:'.length).replace(/^\/\//, '');
 	return rest === '' || rest === ':memory:' ? ':memory:' : rest;
 }

@@ -12,7 +12,9 @@ let current: { url: string; sequelize: Sequelize; ready: Promise<void> } | null 
  * do), migrated once before the first query that awaits `dbReady()`.
  */
 export function openDatabase(url = process.env.DATABASE_URL || DEFAULT_DATABASE_URL) {
-	if (current && current.url === url) return current;
+	if (current && current.url === url) {
+		return current;
+	}
 	const sequelize = createSequelize(url);
 	initModels(sequelize);
 	const ready = migrate(sequelize).then(() => undefined);
@@ -26,7 +28,9 @@ export function dbReady(): Promise<void> {
 }
 
 export async function closeDatabase(): Promise<void> {
-	if (!current) return;
+	if (!current) {
+		return;
+	}
 	const { sequelize } = current;
 	current = null;
 	await sequelize.close();

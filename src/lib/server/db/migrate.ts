@@ -27,7 +27,9 @@ const MIGRATION_LOCK_KEY = '8030609077449486190';
  * ends with the transaction, even when a server dies halfway. SQLite serves one server only.
  */
 export async function migrate(sequelize: Sequelize): Promise<string[]> {
-	if (sequelize.getDialect() !== 'postgres') return applyPending(sequelize);
+	if (sequelize.getDialect() !== 'postgres') {
+		return applyPending(sequelize);
+	}
 	return sequelize.transaction(async (transaction) => {
 		await sequelize.query('SELECT pg_advisory_xact_lock(:key)', {
 			replacements: { key: MIGRATION_LOCK_KEY },

@@ -8,7 +8,9 @@ import { createRoute } from '../services/routes';
 /** Fills an empty database with the demo scenario; leaves any database with users alone. */
 export async function seedDemoIfEmpty(): Promise<boolean> {
 	await dbReady();
-	if ((await User.count()) > 0) return false;
+	if ((await User.count()) > 0) {
+		return false;
+	}
 	const passwordHash = await hashPassword(DEMO_PASSWORD);
 	// Routes go in through the route service (its own transaction) once the people exist.
 	const routes: { lead: User; project: Project; document: RouteDocument }[] = [];
@@ -21,7 +23,9 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
 					{ email: person.email, name: person.name, passwordHash },
 					{ transaction }
 				);
-				if (person.role === 'lead') lead ??= user;
+				if (person.role === 'lead') {
+					lead ??= user;
+				}
 				await Membership.create(
 					{ userId: user.id, teamId: team.id, role: person.role },
 					{ transaction }
@@ -50,7 +54,11 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
 					},
 					{ transaction }
 				);
-				if (lead) for (const document of p.routes) routes.push({ lead, project, document });
+				if (lead) {
+					for (const document of p.routes) {
+						routes.push({ lead, project, document });
+					}
+				}
 			}
 		}
 	});

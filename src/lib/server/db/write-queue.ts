@@ -17,7 +17,9 @@ export class DatabaseBusy extends Error {
  * PostgreSQL's serialization failure, deadlock and lock-not-available codes.
  */
 export function isDatabaseBusy(caught: unknown): boolean {
-	if (caught instanceof DatabaseBusy || caught instanceof TimeoutError) return true;
+	if (caught instanceof DatabaseBusy || caught instanceof TimeoutError) {
+		return true;
+	}
 	const original = (caught as { original?: { code?: string } } | null)?.original;
 	const code = original?.code ?? (caught as { code?: string } | null)?.code;
 	return ['SQLITE_BUSY', 'SQLITE_LOCKED', '40001', '40P01', '55P03'].includes(code ?? '');
@@ -46,7 +48,9 @@ export class WriteQueue {
 			}, this.waitLimitMs);
 			const turn = previous.then(async () => {
 				clearTimeout(timer);
-				if (gaveUp) return;
+				if (gaveUp) {
+					return;
+				}
 				await Promise.resolve().then(work).then(resolve, reject);
 			});
 			this.#tail = turn;
@@ -76,7 +80,9 @@ const WRITE_QUERY_TYPES = new Set<string>([
 ]);
 
 function isWrite(sql: unknown, options: { type?: string } | undefined): boolean {
-	if (options?.type && WRITE_QUERY_TYPES.has(options.type)) return true;
+	if (options?.type && WRITE_QUERY_TYPES.has(options.type)) {
+		return true;
+	}
 	const text = typeof sql === 'string' ? sql : (sql as { query?: string } | null)?.query;
 	return /^\s*(insert|update|delete|replace)\b/i.test(text ?? '');
 }
@@ -99,7 +105,9 @@ export function serialiseWrites(sequelize: Sequelize, queue = new WriteQueue()):
 			return managed ? queue.run(() => transaction(...args)) : transaction(...args);
 		},
 		query(sql: unknown, options?: { type?: string; transaction?: unknown }) {
-			if (options?.transaction || !isWrite(sql, options)) return query(sql, options);
+			if (options?.transaction || !isWrite(sql, options)) {
+				return query(sql, options);
+			}
 			return queue.run(() => query(sql, options));
 		}
 	});

@@ -26,6 +26,8 @@ export const closeAfterUnreadBody: Handle = async ({ event, resolve }) => {
 	const { request } = event;
 	const unread = hasBody(request) && !request.bodyUsed && !readThroughClone.has(request);
 	// A 413 raised while reading (BODY_SIZE_LIMIT) also stops mid-body.
-	if (!unread && !(response.status === 413 && hasBody(request))) return response;
+	if (!unread && !(response.status === 413 && hasBody(request))) {
+		return response;
+	}
 	return withHeaders(response, { connection: 'close' });
 };

@@ -22,7 +22,9 @@ function plain(status: number, message: string): Response {
  */
 export const requireFormBodies: Handle = async ({ event, resolve }) => {
 	const { request } = event;
-	if (!BODY_METHODS.includes(request.method) || isApiPath(event.url)) return resolve(event);
+	if (!BODY_METHODS.includes(request.method) || isApiPath(event.url)) {
+		return resolve(event);
+	}
 	const type = mediaType(request);
 	if (!FORM_TYPES.includes(type)) {
 		return plain(
@@ -42,6 +44,8 @@ export const requireFormBodies: Handle = async ({ event, resolve }) => {
 				? plain(413, 'The form is larger than the server accepts; nothing was changed.')
 				: plain(400, 'The form data could not be read; nothing was changed.')
 		);
-	if (problem) return problem;
+	if (problem) {
+		return problem;
+	}
 	return resolve(event);
 };

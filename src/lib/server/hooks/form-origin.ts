@@ -22,7 +22,9 @@ function isBearer(event: RequestEvent): boolean {
 
 /** True when the request could be a cross-site form post riding on the session cookie. */
 export function needsSameOrigin(event: RequestEvent): boolean {
-	if (!UNSAFE_METHODS.includes(event.request.method) || isBearer(event)) return false;
+	if (!UNSAFE_METHODS.includes(event.request.method) || isBearer(event)) {
+		return false;
+	}
 	return FORM_CONTENT_TYPES.includes(mediaType(event.request));
 }
 
@@ -37,7 +39,9 @@ export const checkFormOrigin: Handle = async ({ event, resolve }) => {
 		return resolve(event);
 	}
 	const message = `Cross-site ${event.request.method} form submissions are forbidden: the Origin header must be ${event.url.origin}. Scripts send an API token as a Bearer token instead.`;
-	if (isApiPath(event.url)) return apiError(403, 'cross-site', message);
+	if (isApiPath(event.url)) {
+		return apiError(403, 'cross-site', message);
+	}
 	return new Response(message, {
 		status: 403,
 		headers: { 'content-type': 'text/plain; charset=utf-8' }

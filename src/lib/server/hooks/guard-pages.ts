@@ -9,7 +9,9 @@ const PUBLIC_PAGES = [/^\/signin\/?$/, /^\/set-password\//, /^\/auth\//];
 /** No identity: pages send people to sign in, the API answers 401. */
 export const guardPages: Handle = async ({ event, resolve }) => {
 	const { pathname } = event.url;
-	if (event.locals.user || PUBLIC_PAGES.some((p) => p.test(pathname))) return resolve(event);
+	if (event.locals.user || PUBLIC_PAGES.some((p) => p.test(pathname))) {
+		return resolve(event);
+	}
 	if (isApiPath(event.url)) {
 		return apiError(401, 'unauthenticated', 'Sign in, or send an API token as a Bearer token.');
 	}

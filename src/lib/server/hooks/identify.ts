@@ -12,8 +12,9 @@ export const identify: Handle = async ({ event, resolve }) => {
 	const header = event.request.headers.get('authorization');
 	if (header?.toLowerCase().startsWith('bearer ')) {
 		const user = await userForApiToken(header.slice(7).trim());
-		if (!user)
+		if (!user) {
 			return apiError(401, 'invalid_token', 'That API token is unknown or has been revoked.');
+		}
 		event.locals.user = user;
 		event.locals.via = 'token';
 		return resolve(event);

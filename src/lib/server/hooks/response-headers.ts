@@ -4,11 +4,15 @@
  */
 export function withHeaders(response: Response, headers: Record<string, string>): Response {
 	try {
-		for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);
+		for (const [name, value] of Object.entries(headers)) {
+			response.headers.set(name, value);
+		}
 		return response;
 	} catch {
 		const copy = new Response(response.body, response);
-		for (const [name, value] of Object.entries(headers)) copy.headers.set(name, value);
+		for (const [name, value] of Object.entries(headers)) {
+			copy.headers.set(name, value);
+		}
 		return copy;
 	}
 }

@@ -11,7 +11,9 @@ export const TOO_MANY_ATTEMPTS = 'Too many failed sign-in attempts. Try again la
 // credentials sign-in passes whatever its path. This hook gives it the client's address, and turns
 // a refused scripted attempt into 429 with `retry-after` (the sign-in page words its own answer).
 export const limitScriptedSignIn: Handle = async ({ event, resolve }) => {
-	if (event.request.method !== 'POST') return resolve(event);
+	if (event.request.method !== 'POST') {
+		return resolve(event);
+	}
 	return withSignInContext(event.getClientAddress(), async (context) => {
 		const response = await resolve(event);
 		if (context.retryAfterSeconds === null || !event.url.pathname.startsWith(AUTH_JS_PREFIX)) {

@@ -47,7 +47,9 @@ export function checkRouteDocument(
 			});
 		} catch (caught) {
 			const error = stepErrorOf(caught);
-			if (!error) throw caught;
+			if (!error) {
+				throw caught;
+			}
 			const classified = step.reagents?.trim() ? rules.classify(step.reagents) : null;
 			return {
 				id: step.id,
@@ -63,9 +65,11 @@ export function checkRouteDocument(
 
 /** The per-step `error` for a step the check refused, or null for a bug (which is thrown on). */
 function stepErrorOf(caught: unknown): StepCheck['error'] | null {
-	if (caught instanceof StepStructureError)
+	if (caught instanceof StepStructureError) {
 		return { code: codeForStructure(caught.reason), message: caught.problem };
-	if (caught instanceof UnknownConditionError)
+	}
+	if (caught instanceof UnknownConditionError) {
 		return { code: 'unknown_condition', message: caught.problem };
+	}
 	return null;
 }

@@ -9,9 +9,13 @@ export function firstClash(route: RouteDocument): string | null {
 
 function firstClashIn(checks: RouteStepCheck[]): string | null {
 	for (const step of checks) {
-		if (step.error) return `step "${step.id}": ${step.error.message}`;
+		if (step.error) {
+			return `step "${step.id}": ${step.error.message}`;
+		}
 		const clash = step.clashes.find((c) => c.severity === 'clash');
-		if (clash) return `step "${step.id}": ${clash.message}`;
+		if (clash) {
+			return `step "${step.id}": ${clash.message}`;
+		}
 	}
 	return null;
 }

@@ -33,7 +33,9 @@ export async function listProjectsFor(
 	await dbReady();
 	const memberships = await Membership.findAll({ where: { userId }, attributes: ['teamId'] });
 	const teamIds = memberships.map((m) => m.teamId);
-	if (teamIds.length === 0) return [];
+	if (teamIds.length === 0) {
+		return [];
+	}
 	const projects = await Project.findAll({
 		where: {
 			teamId: { [Op.in]: teamIds },

@@ -5,7 +5,14 @@ import { dbReady, Intermediate, PlannedRoute, Project, Route, Step } from '../db
 import { assertRouteWithinLimits } from '../route-limits';
 import { recordActivity } from './activity';
 
-export type RouteSummary = { id: string; name: string; status: string; version: number; updatedAt: Date; archived: boolean };
+export type RouteSummary = {
+	id: string;
+	name: string;
+	status: string;
+	version: number;
+	updatedAt: Date;
+	archived: boolean;
+};
 
 export class VersionConflict extends Error {
 	constructor(readonly currentVersion: number) {
@@ -24,7 +31,10 @@ function summarise(route: Route): RouteSummary {
 	};
 }
 
-export async function listRoutes(projectId: string, options: { includeArchived?: boolean } = {}): Promise<RouteSummary[]> {
+export async function listRoutes(
+	projectId: string,
+	options: { includeArchived?: boolean } = {}
+): Promise<RouteSummary[]> {
 	await dbReady();
 	const routes = await Route.findAll({
 		where: { projectId, ...(options.includeArchived ? {} : { archivedAt: null }) },
@@ -70,7 +80,12 @@ async function writeChildren(routeId: string, doc: RouteDocument, transaction: T
 export type PlanOrigin = { from: Route; rank: number };
 
 /** Creates a route from a validated route document; `origin` links a saved plan to its route. */
-export async function createRoute(actor: SessionUser, project: Project, doc: RouteDocument, origin?: PlanOrigin): Promise<Route> {
+export async function createRoute(
+	actor: SessionUser,
+	project: Project,
+	doc: RouteDocument,
+	origin?: PlanOrigin
+): Promise<Route> {
 	assertRouteWithinLimits(doc);
 	await dbReady();
 	return Route.sequelize!.transaction(async (transaction) => {
@@ -80,7 +95,10 @@ export async function createRoute(actor: SessionUser, project: Project, doc: Rou
 		);
 		await writeChildren(route.id, doc, transaction);
 		if (origin) {
-			await PlannedRoute.create({ routeId: route.id, plannedFromId: origin.from.id, rank: origin.rank }, { transaction });
+			await PlannedRoute.create(
+				{ routeId: route.id, plannedFromId: origin.from.id, rank: origin.rank },
+				{ transaction }
+			);
 		}
 		await recordActivity(
 			{
@@ -91,7 +109,10 @@ export async function createRoute(actor: SessionUser, project: Project, doc: Rou
 				summary: origin
 					? `${actor.name} saved plan ${origin.rank} for “${origin.from.name}” as the route “${route.name}”.`
 					: `${actor.name} created the route “${route.name}”.`,
-				details: { routeId: route.id, ...(origin ? { plannedFromId: origin.from.id, rank: origin.rank } : {}) }
+				details: {
+					routeId: route.id,
+					...(origin ? { plannedFromId: origin.from.id, rank: origin.rank } : {})
+				}
 			},
 			transaction
 		);
@@ -112,7 +133,10 @@ export type RouteLinks = { plannedFrom: RouteLink | null; plannedVersions: Route
 export async function routeLinks(route: Route): Promise<RouteLinks> {
 	await dbReady();
 	const [origin, versions] = await Promise.all([
-		PlannedRoute.findOne({ where: { routeId: route.id }, include: [{ model: Route, as: 'plannedFrom' }] }),
+		PlannedRoute.findOne({
+			where: { routeId: route.id },
+			include: [{ model: Route, as: 'plannedFrom' }]
+		}),
 		PlannedRoute.findAll({
 			where: { plannedFromId: route.id },
 			include: [{ model: Route, as: 'route' }],
@@ -122,7 +146,9 @@ export async function routeLinks(route: Route): Promise<RouteLinks> {
 	const from = origin?.plannedFrom;
 	return {
 		plannedFrom: from && origin ? { id: from.id, name: from.name, rank: origin.rank } : null,
-		plannedVersions: versions.flatMap((v) => (v.route ? [{ id: v.route.id, name: v.route.name, rank: v.rank }] : []))
+		plannedVersions: versions.flatMap((v) =>
+			v.route ? [{ id: v.route.id, name: v.route.name, rank: v.rank }] : []
+		)
 	};
 }
 
@@ -138,7 +164,9 @@ export async function routeDocument(route: Route): Promise<RouteDocument> {
 			id: node.key,
 			...(node.label ? { label: node.label } : {}),
 			structure: node.structure,
-			...(node.positionX !== null && node.positionY !== null ? { position: { x: node.positionX, y: node.positionY } } : {})
+			...(node.positionX !== null && node.positionY !== null
+				? { position: { x: node.positionX, y: node.positionY } }
+				: {})
 		})),
 		steps: steps.map((step) => ({
 			id: step.key,
@@ -158,10 +186,14 @@ export async function routeDocument(route: Route): Promise<RouteDocument> {
  * unchanged after the children were read means no save landed in between.
  */
 export async function routeDocumentAt(route: Route, version: number): Promise<RouteDocument> {
-	if (route.version !== version) throw new VersionConflict(route.version);
+	if (route.version !== version) {
+		throw new VersionConflict(route.version);
+	}
 	const document = await routeDocument(route);
 	const now = await Route.findByPk(route.id, { attributes: ['version'] });
-	if (now?.version !== version) throw new VersionConflict(now?.version ?? route.version);
+	if (now?.version !== version) {
+		throw new VersionConflict(now?.version ?? route.version);
+	}
 	return document;
 }
 
@@ -205,7 +237,12 @@ export async function saveRoute(
 }
 
 /** Archives or restores a route; archived routes leave the project's list but stay readable. */
-export async function setRouteArchived(actor: SessionUser, route: Route, archived: boolean, teamId: string): Promise<void> {
+export async function setRouteArchived(
+	actor: SessionUser,
+	route: Route,
+	archived: boolean,
+	teamId: string
+): Promise<void> {
 	await dbReady();
 	await Route.sequelize!.transaction(async (transaction) => {
 		await route.update({ archivedAt: archived ? new Date() : null }, { transaction });
@@ -224,7 +261,11 @@ export async function setRouteArchived(actor: SessionUser, route: Route, archive
 }
 
 /** A new draft route in the same project with a copy of the route's document. */
-export async function duplicateRoute(actor: SessionUser, project: Project, route: Route): Promise<Route> {
+export async function duplicateRoute(
+	actor: SessionUser,
+	project: Project,
+	route: Route
+): Promise<Route> {
 	const doc = await routeDocument(route);
 	// Names are capped at 120 characters; the suffix must still fit.
 	return createRoute(actor, project, { ...doc, name: `${doc.name.slice(0, 112)} (copy)` });

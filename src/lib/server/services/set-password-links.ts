@@ -6,7 +6,10 @@ import { randomSecret, sha256 } from '../auth/secrets';
 const LINK_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
 /** Issues a one-time link token for the user (valid 7 days); older unused links stop working. */
-export async function issueSetPasswordLink(userId: string, transaction?: Transaction): Promise<string> {
+export async function issueSetPasswordLink(
+	userId: string,
+	transaction?: Transaction
+): Promise<string> {
 	const token = randomSecret('osp');
 	await SetPasswordLink.update(
 		{ usedAt: new Date() },
@@ -34,7 +37,9 @@ async function liveLink(token: string) {
 export async function setPasswordLinkOwner(token: string) {
 	await dbReady();
 	const link = await liveLink(token);
-	if (!link) return null;
+	if (!link) {
+		return null;
+	}
 	const user = await User.findByPk(link.userId);
 	return user ? { email: user.email, name: user.name } : null;
 }
@@ -45,12 +50,16 @@ export async function setPasswordWithLink(token: string, password: string): Prom
 	const passwordHash = await hashPassword(password);
 	return SetPasswordLink.sequelize!.transaction(async (transaction) => {
 		const link = await liveLink(token);
-		if (!link) return false;
+		if (!link) {
+			return false;
+		}
 		const [spent] = await SetPasswordLink.update(
 			{ usedAt: new Date() },
 			{ where: { id: link.id, usedAt: null }, transaction }
 		);
-		if (spent === 0) return false;
+		if (spent === 0) {
+			return false;
+		}
 		await User.update({ passwordHash }, { where: { id: link.userId }, transaction });
 		return true;
 	});

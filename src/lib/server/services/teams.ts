@@ -80,7 +80,9 @@ export async function addMember(
 		if (await Membership.findOne({ where: { userId: user.id, teamId }, transaction })) {
 			throw new TeamRuleError(`${user.email} is already a member of this team.`);
 		}
-		if (!user.passwordHash) setPasswordToken = await issueSetPasswordLink(user.id, transaction);
+		if (!user.passwordHash) {
+			setPasswordToken = await issueSetPasswordLink(user.id, transaction);
+		}
 		await Membership.create({ userId: user.id, teamId, role: input.role }, { transaction });
 		await recordActivity(
 			{
@@ -102,7 +104,9 @@ async function membershipIn(teamId: string, membershipId: string) {
 		where: { id: membershipId, teamId },
 		include: [{ model: User, as: 'user' }]
 	});
-	if (!membership) throw new TeamRuleError('That person is not a member of this team.');
+	if (!membership) {
+		throw new TeamRuleError('That person is not a member of this team.');
+	}
 	return membership;
 }
 
@@ -117,7 +121,9 @@ export async function changeRole(
 	role: Role
 ): Promise<void> {
 	const membership = await membershipIn(teamId, membershipId);
-	if (membership.role === role) return;
+	if (membership.role === role) {
+		return;
+	}
 	if (membership.role === 'lead' && (await leadCount(teamId)) <= 1) {
 		throw new TeamRuleError('A team needs at least one lead. Make someone else lead first.');
 	}

@@ -5,13 +5,26 @@ import type { Actions, PageServerLoad } from './$types';
 import { can } from '$lib/policy';
 import { paths } from '$lib/paths';
 import { notFound, requireProjectAction, requireRouteAction } from '$lib/server/auth/guards';
-import { createRoute, duplicateRoute, listRoutes, setRouteArchived } from '$lib/server/services/routes';
+import {
+	createRoute,
+	duplicateRoute,
+	listRoutes,
+	setRouteArchived
+} from '$lib/server/services/routes';
 import { recentActivity } from '$lib/server/services/activity';
-import { getProjectSummary, setProjectArchived, updateProject } from '$lib/server/services/projects';
+import {
+	getProjectSummary,
+	setProjectArchived,
+	updateProject
+} from '$lib/server/services/projects';
 import { editProjectSchema, newRouteSchema } from './schema';
 
 export const load: PageServerLoad = async (event) => {
-	const { project, role } = await requireProjectAction(event, event.params.projectId, 'project.read');
+	const { project, role } = await requireProjectAction(
+		event,
+		event.params.projectId,
+		'project.read'
+	);
 	const showArchived = event.url.searchParams.has('archived');
 	const [summary, activity, routes] = await Promise.all([
 		getProjectSummary(project.id),
@@ -19,7 +32,10 @@ export const load: PageServerLoad = async (event) => {
 		listRoutes(project.id, { includeArchived: showArchived })
 	]);
 	const [form, routeForm] = await Promise.all([
-		superValidate({ name: project.name, description: project.description }, zod4(editProjectSchema)),
+		superValidate(
+			{ name: project.name, description: project.description },
+			zod4(editProjectSchema)
+		),
 		superValidate(zod4(newRouteSchema))
 	]);
 	return {
@@ -37,25 +53,49 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	update: async (event) => {
-		const { project, user } = await requireProjectAction(event, event.params.projectId, 'project.edit');
+		const { project, user } = await requireProjectAction(
+			event,
+			event.params.projectId,
+			'project.edit'
+		);
 		const form = await superValidate(event.request, zod4(editProjectSchema));
-		if (!form.valid) return fail(400, { form });
+		if (!form.valid) {
+			return fail(400, { form });
+		}
 		await updateProject(user, project, form.data);
 		return message(form, 'Saved.');
 	},
 	archive: async (event) => {
-		const { project, user } = await requireProjectAction(event, event.params.projectId, 'project.edit');
+		const { project, user } = await requireProjectAction(
+			event,
+			event.params.projectId,
+			'project.edit'
+		);
 		await setProjectArchived(user, project, true);
 	},
 	restore: async (event) => {
-		const { project, user } = await requireProjectAction(event, event.params.projectId, 'project.edit');
+		const { project, user } = await requireProjectAction(
+			event,
+			event.params.projectId,
+			'project.edit'
+		);
 		await setProjectArchived(user, project, false);
 	},
 	createRoute: async (event) => {
-		const { project, user } = await requireProjectAction(event, event.params.projectId, 'route.edit');
+		const { project, user } = await requireProjectAction(
+			event,
+			event.params.projectId,
+			'route.edit'
+		);
 		const routeForm = await superValidate(event.request, zod4(newRouteSchema));
-		if (!routeForm.valid) return fail(400, { routeForm });
-		const route = await createRoute(user, project, { name: routeForm.data.name, intermediates: [], steps: [] });
+		if (!routeForm.valid) {
+			return fail(400, { routeForm });
+		}
+		const route = await createRoute(user, project, {
+			name: routeForm.data.name,
+			intermediates: [],
+			steps: []
+		});
 		redirect(303, paths.route(route.id));
 	},
 	duplicateRoute: async (event) => {
@@ -76,6 +116,8 @@ export const actions: Actions = {
 async function routeOfThisProject(event: RequestEvent<{ projectId: string }>) {
 	const routeId = String((await event.request.formData()).get('routeId') ?? '');
 	const found = await requireRouteAction(event, routeId, 'route.edit');
-	if (found.route.projectId !== event.params.projectId) notFound('That route');
+	if (found.route.projectId !== event.params.projectId) {
+		notFound('That route');
+	}
 	return found;
 }

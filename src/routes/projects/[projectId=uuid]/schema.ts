@@ -8,5 +8,8 @@ export const editProjectSchema = z.object({
 });
 
 export const newRouteSchema = z.object({
-	name: text().trim().min(1, 'Give the route a name.').max(120, 'Keep the name under 120 characters.')
+	name: text()
+		.trim()
+		.min(1, 'Give the route a name.')
+		.max(120, 'Keep the name under 120 characters.')
 });

@@ -26,7 +26,9 @@ export const load: PageServerLoad = async (event) => {
 			{ budgetMs: chemPoolConfig().pageBudgetMs }
 		);
 	} catch (caught) {
-		if (!(caught instanceof ApiFailure)) throw caught;
+		if (!(caught instanceof ApiFailure)) {
+			throw caught;
+		}
 	}
 	return {
 		route: {

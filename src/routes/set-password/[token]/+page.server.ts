@@ -13,7 +13,9 @@ export const load: PageServerLoad = async ({ params }) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const form = await superValidate(event.request, zod4(newPasswordSchema));
-		if (!form.valid) return fail(400, { form, spent: false });
+		if (!form.valid) {
+			return fail(400, { form, spent: false });
+		}
 		if (!(await setPasswordWithLink(event.params.token, form.data.password))) {
 			return fail(410, { form, spent: true });
 		}

@@ -25,7 +25,15 @@ export const load: PageServerLoad = async (event) => {
 		recentActivity({ teamId }, 20),
 		superValidate(zod4(addMemberSchema))
 	]);
-	return { team: { id: team!.id, name: team!.name }, members, activity, addForm, role, me: user.id, canManage: can(role, 'team.manage') };
+	return {
+		team: { id: team!.id, name: team!.name },
+		members,
+		activity,
+		addForm,
+		role,
+		me: user.id,
+		canManage: can(role, 'team.manage')
+	};
 };
 
 /** Runs a team rule change and turns a broken rule into a form error the page shows. */
@@ -34,7 +42,9 @@ async function keepingRules(run: () => Promise<void>) {
 		await run();
 		return null;
 	} catch (caught) {
-		if (caught instanceof TeamRuleError) return fail(400, { problem: caught.message });
+		if (caught instanceof TeamRuleError) {
+			return fail(400, { problem: caught.message });
+		}
 		throw caught;
 	}
 }
@@ -43,10 +53,14 @@ export const actions: Actions = {
 	add: async (event) => {
 		const { user } = await requireTeamAction(event, event.params.teamId, 'team.manage');
 		const form = await superValidate(event.request, zod4(addMemberSchema));
-		if (!form.valid) return fail(400, { addForm: form });
+		if (!form.valid) {
+			return fail(400, { addForm: form });
+		}
 		try {
 			const added = await addMember(user, event.params.teamId, form.data);
-			const link = added.setPasswordToken ? new URL(paths.setPassword(added.setPasswordToken), event.url.origin).href : null;
+			const link = added.setPasswordToken
+				? new URL(paths.setPassword(added.setPasswordToken), event.url.origin).href
+				: null;
 			return message(form, {
 				text: link
 					? `${added.userName} was added. Send them this one-time link to choose a password (it works once, for 7 days):`
@@ -54,20 +68,28 @@ export const actions: Actions = {
 				link
 			});
 		} catch (caught) {
-			if (caught instanceof TeamRuleError) return message(form, { text: caught.message, link: null }, { status: 400 });
+			if (caught instanceof TeamRuleError) {
+				return message(form, { text: caught.message, link: null }, { status: 400 });
+			}
 			throw caught;
 		}
 	},
 	changeRole: async (event) => {
 		const { user } = await requireTeamAction(event, event.params.teamId, 'team.manage');
 		const parsed = changeRoleSchema.safeParse(Object.fromEntries(await event.request.formData()));
-		if (!parsed.success) return fail(400, { problem: 'Choose a role.' });
-		return keepingRules(() => changeRole(user, event.params.teamId, parsed.data.membershipId, parsed.data.role));
+		if (!parsed.success) {
+			return fail(400, { problem: 'Choose a role.' });
+		}
+		return keepingRules(() =>
+			changeRole(user, event.params.teamId, parsed.data.membershipId, parsed.data.role)
+		);
 	},
 	remove: async (event) => {
 		const { user } = await requireTeamAction(event, event.params.teamId, 'team.manage');
 		const parsed = removeMemberSchema.safeParse(Object.fromEntries(await event.request.formData()));
-		if (!parsed.success) return fail(400, { problem: 'That member was not found.' });
+		if (!parsed.success) {
+			return fail(400, { problem: 'That member was not found.' });
+		}
 		return keepingRules(() => removeMember(user, event.params.teamId, parsed.data.membershipId));
 	}
 };

@@ -12,12 +12,38 @@ import { Step } from './step';
 import { Team } from './team';
 import { User } from './user';
 
-export { ActivityEvent, ApiToken, Intermediate, Membership, PlannedRoute, Project, Route, Session, SetPasswordLink, Step, Team, User };
+export {
+	ActivityEvent,
+	ApiToken,
+	Intermediate,
+	Membership,
+	PlannedRoute,
+	Project,
+	Route,
+	Session,
+	SetPasswordLink,
+	Step,
+	Team,
+	User
+};
 export { ROUTE_STATUSES, type RouteStatus } from './route';
 
 /** Binds every model to one Sequelize instance and wires the associations. */
 export function initModels(sequelize: Sequelize) {
-	for (const model of [User, Team, Membership, ApiToken, SetPasswordLink, Project, ActivityEvent, Route, Intermediate, Step, PlannedRoute, Session]) {
+	for (const model of [
+		User,
+		Team,
+		Membership,
+		ApiToken,
+		SetPasswordLink,
+		Project,
+		ActivityEvent,
+		Route,
+		Intermediate,
+		Step,
+		PlannedRoute,
+		Session
+	]) {
 		model.initModel(sequelize);
 	}
 	Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' });

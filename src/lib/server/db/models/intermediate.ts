@@ -7,7 +7,10 @@ import {
 	type Sequelize
 } from 'sequelize';
 
-export class Intermediate extends Model<InferAttributes<Intermediate>, InferCreationAttributes<Intermediate>> {
+export class Intermediate extends Model<
+	InferAttributes<Intermediate>,
+	InferCreationAttributes<Intermediate>
+> {
 	declare id: CreationOptional<string>;
 	declare routeId: string;
 	/** The client's id for this intermediate inside the route document. */

@@ -35,7 +35,12 @@ export class Route extends Model<InferAttributes<Route>, InferCreationAttributes
 				id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
 				projectId: { type: DataTypes.UUID, allowNull: false },
 				name: { type: DataTypes.STRING(120), allowNull: false },
-				status: { type: DataTypes.STRING(24), allowNull: false, defaultValue: 'draft', validate: { isIn: [[...ROUTE_STATUSES]] } },
+				status: {
+					type: DataTypes.STRING(24),
+					allowNull: false,
+					defaultValue: 'draft',
+					validate: { isIn: [[...ROUTE_STATUSES]] }
+				},
 				version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
 				createdById: { type: DataTypes.UUID, allowNull: true },
 				archivedAt: { type: DataTypes.DATE, allowNull: true },

@@ -18,16 +18,25 @@ const saveBody = z.object({ version: z.number().int().positive(), document: z.un
 
 /** `PUT /api/routes/{id}` `{ version, document }` → `{ version }`, or 409 `version-conflict`. */
 export const PUT: RequestHandler = apiHandler(async (event) => {
-	const { route, user, project } = await requireRouteAction(event, event.params.routeId, 'route.edit');
+	const { route, user, project } = await requireRouteAction(
+		event,
+		event.params.routeId,
+		'route.edit'
+	);
 	const body = await readJson(event, saveBody);
 	const document = routeDocumentOr422(body.document);
 	try {
 		return json({ version: await saveRoute(user, route, body.version, document, project.teamId) });
 	} catch (caught) {
 		if (caught instanceof VersionConflict) {
-			return apiError(409, 'version-conflict', `${caught.message} Reload it, or keep your copy as a new route.`, {
-				currentVersion: caught.currentVersion
-			});
+			return apiError(
+				409,
+				'version-conflict',
+				`${caught.message} Reload it, or keep your copy as a new route.`,
+				{
+					currentVersion: caught.currentVersion
+				}
+			);
 		}
 		throw caught;
 	}

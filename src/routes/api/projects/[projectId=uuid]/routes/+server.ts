@@ -10,7 +10,15 @@ import { createRoute, listRoutes } from '$lib/server/services/routes';
 export const GET: RequestHandler = apiHandler(async (event) => {
 	const { project } = await requireProjectAction(event, event.params.projectId, 'project.read');
 	const routes = await listRoutes(project.id);
-	return json({ routes: routes.map(({ id, name, status, version, updatedAt }) => ({ id, name, status, version, updatedAt })) });
+	return json({
+		routes: routes.map(({ id, name, status, version, updatedAt }) => ({
+			id,
+			name,
+			status,
+			version,
+			updatedAt
+		}))
+	});
 });
 
 /** `POST /api/projects/{projectId}/routes` (route document) → `201 { id, version }`. */

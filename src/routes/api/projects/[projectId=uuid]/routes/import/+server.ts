@@ -9,8 +9,12 @@ import { createRoute } from '$lib/server/services/routes';
 /** JSON by its name or its first character; SDF and molfiles by name or an `M  END` line. */
 function kindOf(file: File, text: string): 'json' | 'sdf' | null {
 	const name = file.name.toLowerCase();
-	if (name.endsWith('.json') || /^\s*[[{]/.test(text)) return 'json';
-	if (/\.(sdf|sd|mol)$/.test(name) || /^M {2}END\s*$/m.test(text)) return 'sdf';
+	if (name.endsWith('.json') || /^\s*[[{]/.test(text)) {
+		return 'json';
+	}
+	if (/\.(sdf|sd|mol)$/.test(name) || /^M {2}END\s*$/m.test(text)) {
+		return 'sdf';
+	}
 	return null;
 }
 
@@ -29,14 +33,21 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		);
 	}
 	const declared = Number(event.request.headers.get('content-length') ?? 0);
-	if (declared > MAX_IMPORT_BYTES + 64 * 1024) return tooLarge();
+	if (declared > MAX_IMPORT_BYTES + 64 * 1024) {
+		return tooLarge();
+	}
 	const form = await event.request.formData().catch(() => null);
 	const file = form?.get('file');
-	if (!(file instanceof File))
+	if (!(file instanceof File)) {
 		return apiError(400, 'missing_file', 'Attach the SDF or route JSON file in the field “file”.');
-	if (file.size > MAX_IMPORT_BYTES) return tooLarge();
+	}
+	if (file.size > MAX_IMPORT_BYTES) {
+		return tooLarge();
+	}
 	const text = await file.text();
-	if (text.trim() === '') return apiError(422, 'empty_file', `The file “${file.name}” is empty.`);
+	if (text.trim() === '') {
+		return apiError(422, 'empty_file', `The file “${file.name}” is empty.`);
+	}
 	const kind = kindOf(file, text);
 	if (!kind) {
 		return apiError(

@@ -33,8 +33,9 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		'route.edit'
 	);
 	// The matcher already refuses other ranks; checked again so no call can plan for nothing.
-	if (!isPlanRank(event.params.rank))
+	if (!isPlanRank(event.params.rank)) {
 		noSuchPlan(event.params.rank, 'Plans are numbered 1, 2, 3 ….');
+	}
 	const rank = Number(event.params.rank);
 	const { version } = await readJson(event, body);
 	// A rank that cannot name a plan is answered before any planning work.
@@ -48,7 +49,9 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	try {
 		stored = await routeDocumentAt(route, version);
 	} catch (caught) {
-		if (!(caught instanceof VersionConflict)) throw caught;
+		if (!(caught instanceof VersionConflict)) {
+			throw caught;
+		}
 		return apiError(
 			409,
 			'version-conflict',
