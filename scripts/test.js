@@ -1,6 +1,6 @@
 #!/usr/bin/env node
-// `npm test`: type checks, unit and reference tests, then tests against the built server (crash
-// safety) and browser tests against the built app.
+// `npm test`: formatting and lint, type checks, unit and reference tests, then tests against the
+// built server (crash safety) and browser tests against the built app.
 // Every stage runs even when an earlier one fails, and the last line sums up all of them.
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
@@ -26,6 +26,24 @@ function count(file, read) {
 	} catch {
 		// no report: the stage failed before running tests and is counted below
 	}
+}
+
+// The house style, enforced: prettier's formatting and ESLint's rules (eslint.config.js). Each
+// counts as one check, so a fresh clone with unformatted or lint-failing code fails `npm test`.
+console.log('\n▶ Formatting (prettier --check)');
+if (run('npx', ['prettier', '--check', '.', '--log-level', 'warn'])) {
+	passed += 1;
+} else {
+	failures.push('formatting (run `npm run format`)');
+	failed += 1;
+}
+
+console.log('\n▶ Lint (eslint)');
+if (run('npx', ['eslint', '.', '--max-warnings', '0'])) {
+	passed += 1;
+} else {
+	failures.push('lint');
+	failed += 1;
 }
 
 console.log('\n▶ Type checks (svelte-check)');

@@ -1,4 +1,11 @@
-import { createServer, Agent, request as httpRequest, type Server } from 'node:http';
+import {
+	createServer,
+	Agent,
+	request as httpRequest,
+	type IncomingMessage,
+	type Server,
+	type ServerResponse
+} from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { Handle, RequestEvent } from '@sveltejs/kit';
 import { getRequest, setResponse } from '@sveltejs/kit/node';
@@ -8,7 +15,7 @@ import { closeAfterUnreadBody, markBodyRead } from '../../src/lib/server/hooks/e
 // A real Node server with keep-alive, reading requests the way adapter-node does, whose endpoint
 // refuses uploads from their Content-Length alone, like readJson's 413, without reading them.
 function serve(hook: Handle): Server {
-	return createServer(async (req, res) => {
+	const answer = async (req: IncomingMessage, res: ServerResponse) => {
 		const request = await getRequest({
 			request: req,
 			base: 'http://localhost',
@@ -26,7 +33,8 @@ function serve(hook: Handle): Server {
 					: Response.json({ ok: true })
 		});
 		await setResponse(res, response);
-	});
+	};
+	return createServer((req, res) => void answer(req, res));
 }
 
 type Answer = { status: number; connection: string | undefined };

@@ -126,6 +126,7 @@ async function rowsHoldingControlCharacters(): Promise<string[]> {
 		const [rows] = await sequelize.query(`SELECT * FROM "${table}"`);
 		for (const row of rows as Record<string, unknown>[]) {
 			const values = Object.values(row).filter((v): v is string => typeof v === 'string');
+			// eslint-disable-next-line no-control-regex -- looking for stored control characters
 			if (values.some((v) => /[\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(v))) {
 				found.push(`${table}: ${JSON.stringify(row).slice(0, 160)}`);
 			}

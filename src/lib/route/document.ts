@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { STRUCTURE_LIMITS } from '../chem/limits';
 import { text } from '../schemas/text';
+import { MAX_MATERIALS, materialInput, waterRemovalInput } from '../quantities/contract';
 
 /**
  * The route document: the one exchange form of a route (import, export, API, planner).
@@ -31,7 +32,11 @@ export const stepSchema = z.object({
 	reagents: text().max(2000).optional(),
 	conditions: z.array(text().max(64)).max(30).optional(),
 	notes: text().max(10_000).optional(),
-	intent: z.enum(STEP_INTENTS).optional()
+	intent: z.enum(STEP_INTENTS).optional(),
+	/** What is weighed out for the step (src/lib/quantities/contract.ts). */
+	quantities: z.array(materialInput).max(MAX_MATERIALS).optional(),
+	/** Water removal with an azeotrope and a trap, for a condensation; with its trap log. */
+	waterRemoval: waterRemovalInput.optional()
 });
 
 export const routeDocumentShape = z.object({

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
 /** C0 control characters and DEL, except tab, line feed and carriage return (molfiles need those). */
+// eslint-disable-next-line no-control-regex -- finding control characters is the point
 const CONTROL_CHARACTER = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 
 export const CONTROL_CHARACTER_MESSAGE =
