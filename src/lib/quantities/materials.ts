@@ -83,7 +83,7 @@ export function computeMaterial(
 		amount = limitingAmount;
 	} else {
 		const why =
-			field === 'equiv'
+			material.role === 'limiting'
 				? 'the limiting material is what equivalents count against, so give it a mass, volume or amount'
 				: 'give a mass, volume, amount or equiv';
 		throw new QuantitiesError('missing_amount', `${material.name}: no amount; ${why}.`, {
