@@ -44,6 +44,8 @@ const EXPECTED: Record<string, Expectation> = {
 	'POST /api/analyze': apiAnyone,
 	'POST /api/check': apiAnyone,
 	'POST /api/plan': apiAnyone,
+	'POST /api/quantities': apiAnyone,
+	'GET /api/azeotropes': apiAnyone,
 	'GET /api/rules': apiAnyone,
 	'GET /api/projects': apiAnyone,
 	'POST /api/projects': row('ok', 'ok', '403', '403', '404', '401'),

@@ -15,6 +15,7 @@ import {
 	REAGENT_TAGS,
 	STABILITY_RATINGS
 } from './ids';
+import { physicalDataFields, unsourcedPhysicalData } from './physical';
 
 /** An enum whose error names the bad value and lists the valid ones. */
 export function idEnum<const T extends readonly [string, ...string[]]>(what: string, values: T) {
@@ -89,9 +90,18 @@ export const reagentSchema = z
 		 */
 		concerns: z.array(idEnum('reagent concern', REAGENT_CONCERNS)).min(1).optional(),
 		/** Where the row comes from: a book and chapter, a paper, "common practice" or "from memory". */
-		source: text.optional()
+		source: text.optional(),
+		// molarMass, density, boilingPoint, physicalSource (issue 14: quantities)
+		...physicalDataFields
 	})
 	.superRefine((reagent, ctx) => {
+		if (unsourcedPhysicalData(reagent)) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['physicalSource'],
+				message: 'physical data needs a source'
+			});
+		}
 		if (reagent.kind === 'reagent' && reagent.conditions.length === 0) {
 			ctx.addIssue({
 				code: 'custom',

@@ -3,6 +3,7 @@
 // Errors that are not refusals are bugs and leave the worker as errors (a logged 500).
 
 import { isStructureError, type StructureError } from '../../chem/errors';
+import { isQuantitiesError } from '../../quantities/errors';
 import { StepStructureError, UnknownConditionError } from '../../rules/check/types';
 import { RouteFileError } from '../route-sdf';
 
@@ -43,6 +44,9 @@ export function refusalOf(caught: unknown): Refusal | null {
 	if (caught instanceof StepStructureError) {
 		const details = { step: caught.stepId, role: caught.role, reason: caught.reason };
 		return { status: 422, code: codeForStructure(caught.reason), message: caught.message, details };
+	}
+	if (isQuantitiesError(caught)) {
+		return { status: 422, code: caught.code, message: caught.message, details: caught.details };
 	}
 	if (caught instanceof RouteFileError) {
 		return {

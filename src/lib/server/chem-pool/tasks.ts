@@ -3,6 +3,8 @@
 
 import { analyzeStructure, type Analysis, type AnalyzeOptions } from '../../chem/analyze';
 import type { StepToCheck } from '../../rules/check/types';
+import { computeQuantities } from '../../quantities/compute';
+import type { QuantitiesRequest } from '../../quantities/contract';
 import type { RouteDocument } from '../../route/document';
 import { routeFromJson, routeFromSdf, routeToSdf } from '../route-sdf';
 import { checkRouteDocument, checkSteps } from '../services/check';
@@ -17,6 +19,8 @@ export const chemistryTasks = {
 	importSdf: ({ text, name }: { text: string; name: string }) => routeFromSdf(text, name),
 	importJson: ({ text, name }: { text: string; name: string }) => routeFromJson(text, name),
 	exportSdf: ({ document }: { document: RouteDocument }) => routeToSdf(document),
+	/** What to weigh out and the water a trap should collect (issue 14). */
+	quantities: ({ request }: { request: QuantitiesRequest }) => computeQuantities(request),
 	/** Drawings of a route's intermediates; an unreadable one is left out (its node asks itself). */
 	drawRoute: ({ structures }: { structures: string[] }) => {
 		const analyses: Record<string, Analysis> = {};
