@@ -15,7 +15,7 @@ const doc: RouteDocument = {
 
 describe('prefilledRows', () => {
 	it('starts from the step’s own intermediates: the substrate limiting, the product last', () => {
-		expect(prefilledRows(doc.steps[0], doc)).toEqual([
+		expect(prefilledRows(doc.steps[0]!, doc)).toEqual([
 			{ name: 'OG-5001-A aldehyde', role: 'limiting', structure: 'ald' },
 			{ name: 'OG-5001-B dioxolane', role: 'product', structure: 'acetal' }
 		]);
@@ -31,7 +31,7 @@ describe('prefilledRows', () => {
 			],
 			steps: [{ id: 's', from: ['x', 'y'], to: 'z' }]
 		};
-		expect(prefilledRows(convergent.steps[0], convergent).map((r) => [r.name, r.role])).toEqual([
+		expect(prefilledRows(convergent.steps[0]!, convergent).map((r) => [r.name, r.role])).toEqual([
 			['substrate 1', 'limiting'],
 			['substrate 2', 'reagent'],
 			['product', 'product']
@@ -40,7 +40,7 @@ describe('prefilledRows', () => {
 });
 
 describe('buildRequest', () => {
-	const rows = prefilledRows(doc.steps[0], doc);
+	const rows = prefilledRows(doc.steps[0]!, doc);
 
 	it('waits for the limiting amount, and says what is missing', () => {
 		const result = buildRequest(rows, doc);
@@ -59,10 +59,10 @@ describe('buildRequest', () => {
 
 	it('replaces intermediate ids by their structures and keeps typed SMILES and the water card', () => {
 		const filled = [
-			{ ...rows[0], mass: 20 },
+			{ ...rows[0]!, mass: 20 },
 			{ name: 'ethylene glycol', role: 'reagent' as const, volume: 12 },
 			{ name: 'TsOH', role: 'catalyst' as const, structure: 'Cc1ccc(S(=O)(=O)O)cc1', equiv: 0.02 },
-			rows[1]
+			rows[1]!
 		];
 		const result = buildRequest(filled, doc, { solvent: 'toluene', trapCapacity: 10 });
 		expect(result).toEqual({

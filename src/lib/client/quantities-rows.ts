@@ -40,7 +40,8 @@ export function buildRequest(
 	waterRemoval?: WaterRemovalInput
 ): Readiness {
 	const limiting = rows.filter((row) => row.role === 'limiting');
-	if (limiting.length !== 1) {
+	const [first] = limiting;
+	if (!first || limiting.length > 1) {
 		return {
 			ready: false,
 			why: limiting.length
@@ -48,17 +49,14 @@ export function buildRequest(
 				: 'Mark one material as limiting to compute the amounts.'
 		};
 	}
-	const [first] = limiting;
 	if (![first.mass, first.volume, first.amount].some((value) => value !== undefined)) {
 		return { ready: false, why: `Enter how much ${first.name} you use (e.g. 20 g).` };
 	}
 	const materials = rows.map((row) => {
-		const node = intermediateOf(row.structure, doc);
-		if (!node) {
-			return row;
-		}
-		const { structure: _id, ...rest } = row;
-		return node.structure.trim() ? { ...rest, structure: node.structure } : rest;
+		const { structure, ...rest } = row;
+		// An intermediate's id becomes its structure; a structure field left empty is no structure.
+		const resolved = intermediateOf(structure, doc)?.structure ?? structure;
+		return resolved?.trim() ? { ...rest, structure: resolved } : rest;
 	});
 	return { ready: true, request: { materials, ...(waterRemoval ? { waterRemoval } : {}) } };
 }

@@ -62,7 +62,7 @@ export function parseAmount(typed: string): AmountReading {
 		return { ok: false, message: `“${text}” does not start with a number.` };
 	}
 	const number = Number(match[1]);
-	const unitText = match[2].trim();
+	const unitText = (match[2] ?? '').trim();
 	if (!unitText) {
 		return { ok: false, message: `Give a unit after ${match[1]}: ${KNOWN}.` };
 	}
@@ -116,7 +116,7 @@ export function formatAmount(amount: Amount, role?: MaterialInput['role']): stri
 		]
 	};
 	const units = scales[field];
-	const [unit, factor] = units.find(([, f]) => value >= f) ?? units[units.length - 1];
+	const [unit, factor] = units.find(([, f]) => value >= f) ?? units.at(-1)!;
 	return `${tidy(value / factor)} ${unit}`;
 }
 
