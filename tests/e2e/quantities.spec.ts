@@ -43,7 +43,7 @@ async function addMaterial(page: Page, name: string, amount: string, role?: stri
 	await page.getByRole('button', { name: 'Add material' }).click();
 	await expect(rows).toHaveCount(index + 1);
 	const row = materialRow(page, index);
-	await row.getByLabel('Name').fill(name);
+	await row.getByLabel('Name', { exact: true }).fill(name);
 	if (role) {
 		await row.getByLabel('Role').selectOption(role);
 	}
@@ -61,6 +61,8 @@ test('a chemist fills the acetal step’s quantities, logs the trap, and finds i
 	page,
 	browser
 }) => {
+	// A long story: two people, a reload, and a computation after each edit.
+	test.slow();
 	await signInAndWait(page, 'chemist@example.com');
 	const id = await copyOfDemoRoute(page);
 	await page.goto(`/routes/${id}`);
@@ -68,7 +70,9 @@ test('a chemist fills the acetal step’s quantities, logs the trap, and finds i
 
 	// The table starts from the step's own substrate and product.
 	await expect(page.getByTestId('material-row')).toHaveCount(2);
-	await expect(materialRow(page, 0).getByLabel('Name')).toHaveValue('OG-2031-F aryl aldehyde');
+	await expect(materialRow(page, 0).getByLabel('Name', { exact: true })).toHaveValue(
+		'OG-2031-F aryl aldehyde'
+	);
 	await expect(materialRow(page, 0).getByLabel('Role')).toHaveValue('limiting');
 	await expect(materialRow(page, 1).getByLabel('Role')).toHaveValue('product');
 
