@@ -43,6 +43,7 @@ describe('demo scenario', () => {
 	it("comes with routes to plan: alternatives with reasons, a convergent coupling, and one the planner calls impossible — Greene's; Clayden (from memory)", async () => {
 		const routes = await Route.findAll({ order: [['name', 'ASC']] });
 		expect(routes.map((r) => r.name)).toEqual([
+			'OG-2031 aryl aldehyde — ethylene acetal',
 			'OG-2031 keto ester — methyl addition',
 			'OG-2031 side chain — first sketch',
 			'OG-2044 amide coupling',
@@ -71,6 +72,22 @@ describe('demo scenario', () => {
 		expect(
 			planned.get('OG-3107 lactone core — side-chain addition')!.unsolved![0]!.reason
 		).toContain('no protecting group in the rule table masks a carboxylic ester');
+	});
+
+	it('stores the acetal demo step with its quantities and a trap log run in toluene (issue 14)', async () => {
+		const route = await Route.findOne({
+			where: { name: 'OG-2031 aryl aldehyde — ethylene acetal' }
+		});
+		const step = (await routeDocument(route!)).steps[0]!;
+		expect(step.quantities?.map((m) => [m.name, m.role])).toEqual([
+			['OG-2031-F aryl aldehyde', 'limiting'],
+			['ethylene glycol', 'reagent'],
+			['TsOH·H2O', 'catalyst'],
+			['toluene', 'solvent'],
+			['OG-2031-G dioxolane', 'product']
+		]);
+		expect(step.waterRemoval).toMatchObject({ solvent: 'toluene', trapCapacity: 10 });
+		expect(step.waterRemoval!.log!.length).toBeGreaterThanOrEqual(4);
 	});
 
 	it('rejects a wrong password', async () => {

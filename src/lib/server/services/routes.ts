@@ -68,12 +68,38 @@ async function writeChildren(routeId: string, doc: RouteDocument, transaction: T
 			reagents: step.reagents ?? null,
 			conditionIds: step.conditions ?? null,
 			notes: step.notes ?? null,
-			quantities: null,
+			quantities: storedQuantities(step),
 			intent: step.intent ?? null,
 			ordinal
 		})),
 		{ transaction }
 	);
+}
+
+type RouteStep = RouteDocument['steps'][number];
+type StepQuantities = Pick<RouteStep, 'quantities' | 'waterRemoval'>;
+
+/**
+ * A step's quantities and water removal share the steps table's one JSON column (issue 14), e.g.
+ * `{ materials: [{ name: 'toluene', role: 'solvent', volume: 75 }], waterRemoval: { solvent: 'toluene' } }`.
+ */
+function storedQuantities(step: RouteStep): Record<string, unknown> | null {
+	if (!step.quantities && !step.waterRemoval) {
+		return null;
+	}
+	return { materials: step.quantities, waterRemoval: step.waterRemoval };
+}
+
+/** The column read back; it only ever holds what a validated document wrote. */
+function quantitiesOf(stored: Record<string, unknown> | null): StepQuantities {
+	const { materials, waterRemoval } = (stored ?? {}) as {
+		materials?: StepQuantities['quantities'];
+		waterRemoval?: StepQuantities['waterRemoval'];
+	};
+	return {
+		...(materials?.length ? { quantities: materials } : {}),
+		...(waterRemoval ? { waterRemoval } : {})
+	};
 }
 
 /** Where a route saved from a plan came from: the planned route and the plan's rank. */
@@ -175,7 +201,8 @@ export async function routeDocument(route: Route): Promise<RouteDocument> {
 			...(step.reagents ? { reagents: step.reagents } : {}),
 			...(step.conditionIds?.length ? { conditions: step.conditionIds } : {}),
 			...(step.notes ? { notes: step.notes } : {}),
-			...(step.intent ? { intent: step.intent } : {})
+			...(step.intent ? { intent: step.intent } : {}),
+			...quantitiesOf(step.quantities)
 		}))
 	};
 }
