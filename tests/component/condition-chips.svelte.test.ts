@@ -1,10 +1,9 @@
-import { fireEvent, render, screen, within } from '@testing-library/svelte';
+import { fireEvent, screen, within } from '@testing-library/svelte';
 import { describe, expect, it } from 'vitest';
 import ConditionChips from '$lib/components/route-map/ConditionChips.svelte';
 import type { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
 import type { RouteStep } from '$lib/route/document';
-import { makeEditor, routeDoc } from './route-editor-fixture';
-import WithRouteEditor from './WithRouteEditor.svelte';
+import { makeEditor, routeDoc, renderWithEditor } from './route-editor-fixture';
 
 const step: RouteStep = { ...routeDoc.steps[0]!, conditions: ['organometallic'] };
 const document = { ...routeDoc, steps: [step] };
@@ -13,9 +12,7 @@ const labels = [
 	{ id: 'acid-mild', label: 'Mild acid' }
 ];
 const show = (editor: RouteEditor, inferred: string[]) =>
-	render(WithRouteEditor, {
-		props: { editor, component: ConditionChips, props: { step, inferred } }
-	});
+	renderWithEditor(editor, ConditionChips, { step, inferred });
 const chips = () =>
 	within(screen.getByRole('list'))
 		.getAllByRole('listitem')

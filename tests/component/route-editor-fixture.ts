@@ -1,11 +1,14 @@
 // A RouteEditor with a browser client that never reaches a server: the check answer and the
 // analyses are what each test gives. Component tests render under it with WithRouteEditor.
 
+import { render } from '@testing-library/svelte';
+import type { Component } from 'svelte';
 import { vi } from 'vitest';
 import { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
 import type { ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
 import { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
+import WithRouteEditor from './WithRouteEditor.svelte';
 
 export const routeDoc: RouteDocument = {
 	name: 'OG-2031',
@@ -54,4 +57,19 @@ export async function makeEditor({
 	await editor.start();
 	await editor.check.refresh();
 	return { editor, client };
+}
+
+/** Renders `component` with `props` under `editor` in context. */
+export function renderWithEditor<Props extends Record<string, unknown>>(
+	editor: RouteEditor,
+	component: Component<Props>,
+	props: Props
+) {
+	return render(WithRouteEditor, {
+		props: {
+			editor,
+			component: component as unknown as Component<Record<string, unknown>>,
+			props
+		}
+	});
 }

@@ -1,13 +1,11 @@
-import { fireEvent, render, screen } from '@testing-library/svelte';
+import { fireEvent, screen } from '@testing-library/svelte';
 import { flushSync } from 'svelte';
 import { describe, expect, it } from 'vitest';
 import SidePanel from '$lib/components/route-map/SidePanel.svelte';
 import type { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
-import { makeEditor } from './route-editor-fixture';
-import WithRouteEditor from './WithRouteEditor.svelte';
+import { makeEditor, renderWithEditor } from './route-editor-fixture';
 
-const show = (editor: RouteEditor) =>
-	render(WithRouteEditor, { props: { editor, component: SidePanel, props: {} } });
+const show = (editor: RouteEditor) => renderWithEditor(editor, SidePanel, {});
 const heading = () => screen.getAllByRole('heading', { level: 2 })[0]?.textContent;
 
 describe('SidePanel follows the editor’s one selection', () => {

@@ -1,14 +1,12 @@
-import { fireEvent, render, screen } from '@testing-library/svelte';
+import { fireEvent, screen } from '@testing-library/svelte';
 import { flushSync } from 'svelte';
 import { describe, expect, it } from 'vitest';
 import StepPanel from '$lib/components/route-map/StepPanel.svelte';
 import type { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
-import { makeEditor, routeDoc, stepCheck } from './route-editor-fixture';
-import WithRouteEditor from './WithRouteEditor.svelte';
+import { makeEditor, routeDoc, stepCheck, renderWithEditor } from './route-editor-fixture';
 
 const step = routeDoc.steps[0]!;
-const show = (editor: RouteEditor) =>
-	render(WithRouteEditor, { props: { editor, component: StepPanel, props: { step } } });
+const show = (editor: RouteEditor) => renderWithEditor(editor, StepPanel, { step });
 const text = () => document.body.textContent ?? '';
 
 describe('StepPanel: what the check says about a step', () => {
