@@ -200,8 +200,6 @@ export class RouteEditor {
 		return id;
 	}
 
-	// ── Structures ───────────────────────────────────────────────────────────────────────────
-
 	/** Atoms to shade on an intermediate: the clashes of the selected step that starts from it. */
 	highlightFor(intermediateId: string): string {
 		const selected = this.selection;
