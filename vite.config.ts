@@ -1,5 +1,6 @@
 import { sveltekit } from '@sveltejs/kit/vite';
 import tailwindcss from '@tailwindcss/vite';
+import { svelteTesting } from '@testing-library/svelte/vite';
 import { defineConfig } from 'vitest/config';
 import { chemWorker } from './scripts/vite-chem-worker.js';
 
@@ -20,12 +21,31 @@ export default defineConfig({
 		}
 	},
 	test: {
-		include: ['tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts', 'src/**/*.test.ts'],
-		environment: 'node',
-		// The database tests each open their own in-memory SQLite; run files in separate workers.
-		pool: 'forks',
 		// The first perception in a worker pays openchemlib's JIT warm-up (seconds on 2 busy cores);
 		// speed is measured by `npm run bench`, not by test timeouts.
-		testTimeout: 30_000
+		testTimeout: 30_000,
+		projects: [
+			{
+				extends: true,
+				test: {
+					name: 'node',
+					include: ['tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts', 'src/**/*.test.ts'],
+					environment: 'node',
+					// The database tests each open their own in-memory SQLite; run files in separate workers.
+					pool: 'forks'
+				}
+			},
+			{
+				// Component tests: Svelte's browser build rendered into jsdom by @testing-library/svelte.
+				extends: true,
+				plugins: [svelteTesting()],
+				resolve: { conditions: ['browser'] },
+				test: {
+					name: 'client',
+					include: ['tests/component/**/*.svelte.test.ts'],
+					environment: 'jsdom'
+				}
+			}
+		]
 	}
 });

@@ -1,5 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { RouteEditor } from '../../src/lib/components/route-map/route-editor.svelte';
+import { selectionFromCanvas } from '../../src/lib/components/route-map/flow';
 import type { RouteClient } from '../../src/lib/client/route-client';
 import { Toasts } from '../../src/lib/client/toasts.svelte';
 import type { RouteDocument } from '../../src/lib/route/document';
@@ -39,7 +40,7 @@ const client = {
 			document: { ...doc, name: 'Theirs' }
 		}
 	})),
-	check: vi.fn(async () => 'unavailable' as const),
+	check: vi.fn(async () => null),
 	analyze: vi.fn(),
 	conditionLabels: vi.fn(async () => null)
 };
@@ -194,5 +195,41 @@ describe('route editor undo and roles', () => {
 		await vi.advanceTimersByTimeAsync(1000);
 		expect(editor.doc).toBe(doc);
 		expect(client.save).not.toHaveBeenCalled();
+	});
+});
+
+describe('one selection', () => {
+	it('is cleared when the selected item leaves the document, by delete or by undo', () => {
+		const editor = make();
+		editor.select({ kind: 'step', id: 's1' });
+		editor.remove(['a']);
+		expect(editor.doc.steps).toEqual([]);
+		expect(editor.selection).toBeNull();
+		const id = editor.addIntermediate('CCO', 'ethanol');
+		expect(editor.selection).toEqual({ kind: 'intermediate', id });
+		editor.undo();
+		expect(editor.selection).toBeNull();
+	});
+
+	it('looks items up by id in the document as it is now', () => {
+		const editor = make();
+		expect(editor.document.intermediate('b')?.structure).toBe('CC(=O)CCC(C)(C)O');
+		editor.updateIntermediate('b', { label: 'tertiary alcohol' });
+		expect(editor.document.intermediate('b')?.label).toBe('tertiary alcohol');
+		expect(editor.document.step('s1')?.to).toBe('b');
+		editor.remove([], [], ['s1']);
+		expect(editor.document.step('s1')).toBeUndefined();
+	});
+
+	it('takes what the canvas selects: the current item while it stays selected, else the first', () => {
+		const current = { kind: 'step', id: 's1' } as const;
+		const edge = { data: { stepId: 's1', from: 'a', primary: true } };
+		expect(selectionFromCanvas([{ id: 'a' }], [edge], current)).toBe(current);
+		expect(selectionFromCanvas([{ id: 'a' }], [], current)).toEqual({
+			kind: 'intermediate',
+			id: 'a'
+		});
+		expect(selectionFromCanvas([], [edge], null)).toEqual({ kind: 'step', id: 's1' });
+		expect(selectionFromCanvas([], [], current)).toBeNull();
 	});
 });

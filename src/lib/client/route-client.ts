@@ -63,13 +63,10 @@ export class RouteClient {
 		return result.ok ? result.data.id : null;
 	}
 
-	/** The clash check of the stored route; `'unavailable'` while the server has no check endpoint. */
-	async check(routeId: string): Promise<Map<string, StepCheck> | 'unavailable' | null> {
+	/** The clash check of the stored route by step id; null (and a toast) when it failed. */
+	async check(routeId: string): Promise<Map<string, StepCheck> | null> {
 		const result = await callApi<CheckAnswer>(`/api/routes/${routeId}/check`, {}, this.fetcher);
 		if (!result.ok) {
-			if (result.status === 404) {
-				return 'unavailable';
-			}
 			this.toasts.show(`The clash check failed: ${result.message}`, 'problem');
 			return null;
 		}

@@ -3,6 +3,7 @@
 
 import type { Edge, Node } from '@xyflow/svelte';
 import type { RouteDocument, RouteStep } from '$lib/route/document';
+import type { Selection } from './undoable-document.svelte';
 
 export type IntermediateNodeData = { intermediateId: string };
 export type IntermediateFlowNode = Node<IntermediateNodeData, 'intermediate'>;
@@ -88,4 +89,29 @@ export function toEdges(
 			};
 		})
 	);
+}
+
+/**
+ * What the canvas's own selection (a click, Enter on a focused node, a box) means for the editor's
+ * one selection: the current item while the canvas still selects it, else the first node, else
+ * the step of the first edge, else nothing. The canvas then shows exactly that item selected.
+ */
+export function selectionFromCanvas(
+	nodes: readonly { id: string }[],
+	edges: readonly { data?: StepEdgeData }[],
+	current: Selection
+): Selection {
+	const stepIds = edges.flatMap((edge) => (edge.data ? [edge.data.stepId] : []));
+	if (current?.kind === 'intermediate' && nodes.some((node) => node.id === current.id)) {
+		return current;
+	}
+	if (current?.kind === 'step' && stepIds.includes(current.id)) {
+		return current;
+	}
+	const [firstNode] = nodes;
+	if (firstNode) {
+		return { kind: 'intermediate', id: firstNode.id };
+	}
+	const [firstStep] = stepIds;
+	return firstStep ? { kind: 'step', id: firstStep } : null;
 }

@@ -1,26 +1,20 @@
-// The state of one open route map: the document, its saved version, autosave, undo, the clash
-// check and structure depictions. Components read it through context and change it only through
-// its methods, which replace the document (never mutate it) so undo and autosave see every edit.
+// The state of one open route map, behind one object in context: the undoable document and its
+// selection (undoable-document), autosave (autosave), structure depictions (structure-drawings)
+// and the clash check (clash-check). Components read it and change the route only through its
+// methods, which replace the document (never mutate it) so undo and autosave see every edit.
 
-import { SvelteMap } from 'svelte/reactivity';
-import type { RouteDocument } from '$lib/route/document';
-import type { Analysis, ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
+import type { Analysis, ConditionLabel, RouteClient } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
+import type { RouteDocument } from '$lib/route/document';
+import { Autosave } from './autosave.svelte';
+import { ClashCheck } from './clash-check.svelte';
 import * as ops from './document-ops';
 import { heavyAtomCount, substrateHighlight } from './step-view';
+import { StructureDrawings } from './structure-drawings.svelte';
+import { UndoableDocument, type Selection } from './undoable-document.svelte';
 
-export type SaveState = 'saved' | 'pending' | 'saving' | 'failed' | 'conflict';
-export type Selection = { kind: 'intermediate' | 'step'; id: string } | null;
-export type AnalysisState =
-	| { status: 'loading' }
-	| { status: 'ready'; analysis: Analysis }
-	| { status: 'failed'; message: string };
-export type CheckState = Map<string, StepCheck> | 'unavailable' | null;
-
-const SAVE_DELAY_MS = 700;
-const UNDO_LIMIT = 100;
-/** Keystrokes in one field within this window undo together, not letter by letter. */
-const COALESCE_MS = 1500;
+export type { SaveState } from './autosave.svelte';
+export type { Selection } from './undoable-document.svelte';
 
 type Init = {
 	routeId: string;
@@ -35,19 +29,11 @@ export class RouteEditor {
 	readonly routeId: string;
 	readonly projectId: string;
 	readonly canEdit: boolean;
-	#doc = $state.raw<RouteDocument>({ name: '', intermediates: [], steps: [] });
-	#version = $state(1);
-	#saveState = $state<SaveState>('saved');
-	#failure = $state('');
-	#check = $state.raw<CheckState>(null);
-	#selection = $state.raw<Selection>(null);
+	readonly document: UndoableDocument;
+	readonly autosave: Autosave;
+	readonly structures: StructureDrawings;
+	readonly check: ClashCheck;
 	#labels = $state.raw<ConditionLabel[] | null>(null);
-	#undo = $state.raw<RouteDocument[]>([]);
-	#analyses = new SvelteMap<string, AnalysisState>();
-	#savedDoc: RouteDocument;
-	#coalesce: { key: string; at: number } | null = null;
-	#timer: ReturnType<typeof setTimeout> | undefined;
-	#inFlight: Promise<unknown> | null = null;
 
 	constructor(
 		init: Init,
@@ -57,90 +43,93 @@ export class RouteEditor {
 		this.routeId = init.routeId;
 		this.projectId = init.projectId;
 		this.canEdit = init.canEdit;
-		this.#doc = init.document;
-		this.#savedDoc = init.document;
-		this.#version = init.version;
-		for (const [structure, analysis] of Object.entries(init.analyses)) {
-			this.#analyses.set(key(structure, ''), { status: 'ready', analysis });
-		}
+		this.document = new UndoableDocument(init.document, () => this.autosave.schedule());
+		this.check = new ClashCheck(init.routeId, client);
+		this.autosave = new Autosave(
+			{
+				routeId: init.routeId,
+				version: init.version,
+				saved: init.document,
+				current: () => this.document.current,
+				onsaved: () => void this.check.refresh()
+			},
+			client
+		);
+		this.structures = new StructureDrawings(client, init.analyses);
 	}
 
 	get doc() {
-		return this.#doc;
-	}
-	get version() {
-		return this.#version;
-	}
-	get saveState() {
-		return this.#saveState;
-	}
-	get failure() {
-		return this.#failure;
-	}
-	get check() {
-		return this.#check;
+		return this.document.current;
 	}
 	get selection() {
-		return this.#selection;
+		return this.document.selection;
+	}
+	get version() {
+		return this.autosave.version;
+	}
+	get saveState() {
+		return this.autosave.state;
+	}
+	get failure() {
+		return this.autosave.failure;
 	}
 	get conditionLabels() {
 		return this.#labels;
 	}
 	get canUndo() {
-		return this.canEdit && this.#undo.length > 0;
+		return this.canEdit && this.document.canUndo;
 	}
 	get hasUnsaved() {
-		return this.#saveState !== 'saved';
+		return this.saveState !== 'saved';
 	}
 
 	/** First data after the page mounts: the check, condition labels, and a layout for unplaced nodes. */
 	async start() {
-		void this.refreshCheck();
+		void this.check.refresh();
 		void this.client.conditionLabels().then((labels) => (this.#labels = labels));
-		if (this.#doc.intermediates.some((node) => !node.position)) {
+		const before = this.doc;
+		if (before.intermediates.some((node) => !node.position)) {
 			// A view-only change: it is saved with the next real edit, and viewers can lay out too.
-			const laid = ops.movePositions(this.#doc, await ops.layoutPositions(this.#doc));
-			if (this.#doc === this.#savedDoc) {
-				this.#savedDoc = laid;
-			}
-			this.#doc = laid;
+			const laid = ops.movePositions(before, await ops.layoutPositions(before));
+			this.autosave.adoptIfSaved(before, laid);
+			this.document.replace(laid);
 		}
 	}
 
 	select(selection: Selection) {
-		this.#selection = selection;
+		this.document.select(selection);
 	}
 
-	// ── Edits ────────────────────────────────────────────────────────────────────────────────
+	// ── Edits (nothing changes for viewers) ──────────────────────────────────────────────────
 
 	addIntermediate(structure: string, label?: string): string {
 		const id = ops.newId();
-		this.#change(ops.addIntermediate(this.#doc, { id, structure, ...(label ? { label } : {}) }));
-		this.#selection = { kind: 'intermediate', id };
+		this.#change(ops.addIntermediate(this.doc, { id, structure, ...(label ? { label } : {}) }));
+		this.select({ kind: 'intermediate', id });
 		return id;
 	}
 
 	updateIntermediate(id: string, patch: { label?: string; structure?: string }, field?: string) {
-		this.#change(ops.updateIntermediate(this.#doc, id, patch), field && `${id}:${field}`);
+		this.#change(ops.updateIntermediate(this.doc, id, patch), field && `${id}:${field}`);
 	}
 
 	updateStep(id: string, patch: Parameters<typeof ops.updateStep>[2], field?: string) {
-		this.#change(ops.updateStep(this.#doc, id, patch), field && `${id}:${field}`);
+		this.#change(ops.updateStep(this.doc, id, patch), field && `${id}:${field}`);
 	}
 
 	rename(name: string) {
 		if (name.trim()) {
-			this.#change({ ...this.#doc, name }, 'route:name');
+			this.#change({ ...this.doc, name }, 'route:name');
 		}
 	}
 
 	connect(from: string, to: string) {
-		const result = ops.connect(this.#doc, from, to);
+		const result = ops.connect(this.doc, from, to);
 		if (!result.ok) {
 			return this.toasts.show(result.reason, 'problem');
 		}
 		this.#change(result.doc);
-		this.#selection = { kind: 'step', id: result.stepId };
+		this.select({ kind: 'step', id: result.stepId });
 	}
 
 	remove(
@@ -148,96 +137,35 @@ export class RouteEditor {
 		inputs: { stepId: string; from: string }[] = [],
 		stepIds: string[] = []
 	) {
-		this.#change(ops.removeElements(this.#doc, nodeIds, inputs, stepIds));
-		const selected = this.#selection;
-		if (selected && (nodeIds.includes(selected.id) || !this.#exists(selected))) {
-			this.#selection = null;
-		}
+		this.#change(ops.removeElements(this.doc, nodeIds, inputs, stepIds));
 	}
 
 	move(moves: Map<string, { x: number; y: number }>) {
-		this.#change(ops.movePositions(this.#doc, moves));
+		this.#change(ops.movePositions(this.doc, moves));
 	}
 
 	async layout() {
-		this.#change(ops.movePositions(this.#doc, await ops.layoutPositions(this.#doc)));
+		this.#change(ops.movePositions(this.doc, await ops.layoutPositions(this.doc)));
 	}
 
 	undo() {
-		const previous = this.#undo.at(-1);
-		if (!previous || !this.canEdit) {
-			return;
+		if (this.canEdit) {
+			this.document.undo();
 		}
-		this.#undo = this.#undo.slice(0, -1);
-		this.#coalesce = null;
-		this.#doc = previous;
-		if (this.#selection && !this.#exists(this.#selection)) {
-			this.#selection = null;
-		}
-		this.#schedule();
-	}
-
-	#exists(selection: NonNullable<Selection>) {
-		const list = selection.kind === 'step' ? this.#doc.steps : this.#doc.intermediates;
-		return list.some((item) => item.id === selection.id);
 	}
 
 	#change(next: RouteDocument, coalesceKey?: string | false) {
-		if (!this.canEdit || next === this.#doc) {
-			return;
-		}
-		const now = Date.now();
-		const joins =
-			coalesceKey && this.#coalesce?.key === coalesceKey && now - this.#coalesce.at < COALESCE_MS;
-		if (!joins) {
-			this.#undo = [...this.#undo.slice(-(UNDO_LIMIT - 1)), this.#doc];
-		}
-		this.#coalesce = coalesceKey ? { key: coalesceKey, at: now } : null;
-		this.#doc = next;
-		this.#schedule();
-	}
-
-	// ── Autosave ─────────────────────────────────────────────────────────────────────────────
-
-	#schedule() {
-		// During a conflict nothing is sent: the chemist decides first, and keeps typing meanwhile.
-		if (this.#saveState === 'conflict') {
-			return;
-		}
-		this.#saveState = this.#doc === this.#savedDoc ? 'saved' : 'pending';
-		clearTimeout(this.#timer);
-		if (this.#saveState === 'pending') {
-			this.#timer = setTimeout(() => void this.saveNow(), SAVE_DELAY_MS);
+		if (this.canEdit) {
+			this.document.change(next, coalesceKey);
 		}
 	}
+
+	// ── Saving ───────────────────────────────────────────────────────────────────────────────
 
 	/** Sends the document now (also used by "Retry" and before leaving the page). */
 	async saveNow() {
-		clearTimeout(this.#timer);
-		// A save already on its way picks up newer edits when it returns.
-		if (this.#inFlight || this.#saveState === 'conflict' || !this.canEdit) {
-			return;
-		}
-		const sent = this.#doc;
-		if (sent === this.#savedDoc) {
-			return void (this.#saveState = 'saved');
-		}
-		this.#saveState = 'saving';
-		const request = this.client.save(this.routeId, this.#version, sent);
-		this.#inFlight = request;
-		const result = await request;
-		this.#inFlight = null;
-		if (result.ok) {
-			this.#version = result.data.version;
-			this.#savedDoc = sent;
-			this.#saveState = 'saved';
-			void this.refreshCheck();
-			this.#schedule();
-		} else if (result.status === 409) {
-			this.#saveState = 'conflict';
-		} else {
-			this.#saveState = 'failed';
-			this.#failure = result.message;
+		if (this.canEdit) {
+			await this.autosave.saveNow();
 		}
 	}
 
@@ -245,21 +173,8 @@ export class RouteEditor {
 	 * Saves what is on the page and waits until the server holds it, for actions that read the
 	 * stored route (the planner). False when it could not be saved (a conflict or a failure).
 	 */
-	async flush(): Promise<boolean> {
-		while (this.canEdit && this.#saveState !== 'saved') {
-			if (this.#saveState === 'conflict') {
-				return false;
-			}
-			if (this.#inFlight) {
-				await this.#inFlight;
-			} else {
-				await this.saveNow();
-				if (this.#saveState === 'failed') {
-					return false;
-				}
-			}
-		}
-		return true;
+	flush(): Promise<boolean> {
+		return this.canEdit ? this.autosave.flush() : Promise.resolve(true);
 	}
 
 	/** After a conflict: drop local edits and show the stored route. */
@@ -268,84 +183,35 @@ export class RouteEditor {
 		if (!result.ok) {
 			return;
 		}
-		this.#doc = result.data.document;
-		this.#savedDoc = result.data.document;
-		this.#version = result.data.version;
-		this.#undo = [];
-		this.#selection = null;
-		this.#saveState = 'saved';
+		this.autosave.markSaved(result.data.document, result.data.version);
+		this.document.replace(result.data.document, { forgetHistory: true });
 		await this.start();
 	}
 
 	/** After a conflict: store the local document as a new route; returns its id. */
 	async keepMineAsCopy(): Promise<string | null> {
-		const name = `${this.#doc.name.slice(0, 108)} (my copy)`;
-		const id = await this.client.create(this.projectId, { ...this.#doc, name });
+		const mine = this.doc;
+		const name = `${mine.name.slice(0, 108)} (my copy)`;
+		const id = await this.client.create(this.projectId, { ...mine, name });
 		if (id) {
-			this.#savedDoc = this.#doc;
-			this.#saveState = 'saved';
+			this.autosave.markSaved(mine);
 			this.toasts.show(`Your version is saved as “${name}”.`, 'success');
 		}
 		return id;
 	}
 
-	async refreshCheck() {
-		const check = await this.client.check(this.routeId);
-		if (check !== null) {
-			this.#check = check;
-		}
-	}
-
-	// ── Structures ───────────────────────────────────────────────────────────────────────────
-
-	analysis(structure: string, highlight = ''): AnalysisState | undefined {
-		return this.#analyses.get(key(structure, highlight));
-	}
-
-	/** Starts fetching a depiction unless one is cached or on its way; call from an effect. */
-	ensureAnalysis(structure: string, highlight = '') {
-		const k = key(structure, highlight);
-		if (this.#analyses.has(k)) {
-			return;
-		}
-		this.#analyses.set(k, { status: 'loading' });
-		void this.client.analyze(structure, highlight).then((result) => {
-			this.#analyses.set(
-				k,
-				result.ok
-					? { status: 'ready', analysis: result.data }
-					: { status: 'failed', message: result.message }
-			);
-		});
-	}
-
-	/** Reads a structure before it enters the route; the answer is cached for its node. */
-	async validate(structure: string): Promise<{ ok: true } | { ok: false; message: string }> {
-		const result = await this.client.analyze(structure);
-		if (!result.ok) {
-			return { ok: false, message: result.message };
-		}
-		this.#analyses.set(key(structure, ''), { status: 'ready', analysis: result.data });
-		return { ok: true };
-	}
-
 	/** Atoms to shade on an intermediate: the clashes of the selected step that starts from it. */
 	highlightFor(intermediateId: string): string {
-		const selected = this.#selection;
-		const check = this.#check;
-		if (selected?.kind !== 'step' || !(check instanceof Map)) {
+		const selected = this.selection;
+		const step = selected?.kind === 'step' ? this.document.step(selected.id) : undefined;
+		const check = step && this.check.of(step.id);
+		if (!step || !check) {
 			return '';
 		}
-		const step = this.#doc.steps.find((s) => s.id === selected.id);
-		if (!step) {
-			return '';
-		}
-		return substrateHighlight(step, check.get(step.id)?.clashes ?? [], intermediateId, (id) => {
-			const node = this.#doc.intermediates.find((n) => n.id === id);
-			const state = node && this.analysis(node.structure);
+		return substrateHighlight(step, check.clashes, intermediateId, (id) => {
+			const node = this.document.intermediate(id);
+			const state = node && this.structures.analysis(node.structure);
 			return state?.status === 'ready' ? heavyAtomCount(state.analysis.formula) : null;
 		});
 	}
 }
-
-const key = (structure: string, highlight: string) => `${highlight}\u0000${structure}`;

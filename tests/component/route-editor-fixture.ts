@@ -1,0 +1,75 @@
+// A RouteEditor with a browser client that never reaches a server: the check answer and the
+// analyses are what each test gives. Component tests render under it with WithRouteEditor.
+
+import { render } from '@testing-library/svelte';
+import type { Component } from 'svelte';
+import { vi } from 'vitest';
+import { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
+import type { ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
+import { Toasts } from '$lib/client/toasts.svelte';
+import type { RouteDocument } from '$lib/route/document';
+import WithRouteEditor from './WithRouteEditor.svelte';
+
+export const routeDoc: RouteDocument = {
+	name: 'OG-2031',
+	intermediates: [
+		{ id: 'a', label: 'keto ester', structure: 'CC(=O)CCC(=O)OC', position: { x: 0, y: 0 } },
+		{ id: 'b', label: 'hydroxy ketone', structure: 'CC(=O)CCC(C)(C)O', position: { x: 320, y: 0 } }
+	],
+	steps: [{ id: 's1', from: ['a'], to: 'b', reagents: 'MeMgBr, THF' }]
+};
+
+/** One step's check answer with nothing found, changed by `over`. */
+export const stepCheck = (over: Partial<StepCheck> = {}): StepCheck => ({
+	id: 's1',
+	conditions: [],
+	hazards: [],
+	clashes: [],
+	unrecognized: [],
+	...over
+});
+
+type Options = {
+	canEdit?: boolean;
+	document?: RouteDocument;
+	checks?: StepCheck[];
+	labels?: ConditionLabel[] | null;
+};
+
+/** The editor, with its check answer already in (when `checks` is given). */
+export async function makeEditor({
+	canEdit = true,
+	document = routeDoc,
+	checks,
+	labels = null
+}: Options = {}) {
+	const client = {
+		save: vi.fn(async () => ({ ok: true, status: 200, data: { version: 2 } })),
+		check: vi.fn(async () => (checks ? new Map(checks.map((c) => [c.id, c])) : null)),
+		analyze: vi.fn(async () => ({ ok: false, status: 400, code: 'x', message: 'not in tests' })),
+		conditionLabels: vi.fn(async () => labels)
+	};
+	const editor = new RouteEditor(
+		{ routeId: 'r', projectId: 'p', version: 1, document, canEdit, analyses: {} },
+		client as unknown as RouteClient,
+		new Toasts()
+	);
+	await editor.start();
+	await editor.check.refresh();
+	return { editor, client };
+}
+
+/** Renders `component` with `props` under `editor` in context. */
+export function renderWithEditor<Props extends Record<string, unknown>>(
+	editor: RouteEditor,
+	component: Component<Props>,
+	props: Props
+) {
+	return render(WithRouteEditor, {
+		props: {
+			editor,
+			component: component as unknown as Component<Record<string, unknown>>,
+			props
+		}
+	});
+}
