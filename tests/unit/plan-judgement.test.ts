@@ -3,7 +3,7 @@ import type { RouteDocument } from '../../src/lib/route/document';
 import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
 import { planRoute, type Plan } from '../../src/lib/rules/plan';
 import { withRanking } from '../../src/lib/rules/plan/rationale';
-import { scoreOf, type Choice } from '../../src/lib/rules/plan/search';
+import { scoreOf, type Choice } from '../../src/lib/rules/plan/cost';
 import type { Need, Option } from '../../src/lib/rules/plan/types';
 import { checkRouteDocument } from '../../src/lib/server/services/check';
 import { planRouteDocument } from '../../src/lib/server/services/plan';

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { perceiveText } from '../../src/lib/chem';
 import type { RouteDocument } from '../../src/lib/route/document';
 import { planRoute } from '../../src/lib/rules/plan';
-import { scoreOf } from '../../src/lib/rules/plan/search';
+import { scoreOf } from '../../src/lib/rules/plan/cost';
 import { firstClash, planRouteDocument } from '../../src/lib/server/services/plan';
 import { line } from '../factories/plan-routes';
 

@@ -9,7 +9,7 @@
 // reference set to prove they never hide a match.
 
 import { Molecule, SSSearcher } from 'openchemlib';
-import type { CompiledPattern } from './patterns';
+import type { CompiledPattern } from './compile-pattern';
 import { atomTable, mayMatch, type AtomTable } from './prefilter';
 import { compareMappings, distinctMatches, firstPerAtomSet, matchedAtoms } from './smarts-match';
 

@@ -8,36 +8,25 @@
 // loosely or not at all, see ringSizeTest and degreeTest) makes the reader give up with null, and
 // the pattern stays with openchemlib. That the two agree on every mapping is
 // tests/unit/chem-smarts-match.test.ts.
+import {
+	ANY_BOND,
+	AROMATIC,
+	AROMATIC_SYMBOLS,
+	BOND_SYMBOLS,
+	ORGANIC,
+	SINGLE,
+	Unsupported,
+	aromaticElement,
+	closingBracket,
+	closingParen,
+	primitive,
+	splitTop,
+	testsRingSize,
+	type AtomTest
+} from './smarts-primitives';
 
-export const SINGLE = 1;
-export const DOUBLE = 2;
-export const TRIPLE = 4;
-export const AROMATIC = 8;
-const ANY_BOND = SINGLE | DOUBLE | TRIPLE | AROMATIC;
-const BOND_SYMBOLS: Record<string, number> = {
-	'-': SINGLE,
-	'=': DOUBLE,
-	'#': TRIPLE,
-	':': AROMATIC,
-	'~': ANY_BOND,
-	'/': SINGLE,
-	'\\': SINGLE
-};
-
-/** One test on a molecule atom, or a combination of them. */
-export type AtomTest =
-	| { kind: 'all' | 'any'; tests: AtomTest[] }
-	| { kind: 'not'; test: AtomTest }
-	| { kind: 'element'; element: number }
-	| { kind: 'aromatic'; aromatic: boolean }
-	| { kind: 'hydrogens'; count: number }
-	| { kind: 'connections'; count: number }
-	/** Explicit connections (SMARTS `D`): exactly `count`, or at least it when `atLeast`. */
-	| { kind: 'degree'; count: number; atLeast: boolean }
-	/** The size of the atom's smallest ring (SMARTS `r<n>`). */
-	| { kind: 'ringSize'; size: number }
-	| { kind: 'charge'; charge: number }
-	| { kind: 'recursive'; query: ExactQuery };
+// Bond bits and the atom test type are defined with the primitives; callers read them here.
+export { AROMATIC, DOUBLE, SINGLE, TRIPLE, type AtomTest } from './smarts-primitives';
 
 /** A pattern as a spanning tree in SMARTS order (each atom's parent comes earlier) plus ring closures. */
 export type ExactQuery = {
@@ -50,36 +39,6 @@ export type ExactQuery = {
 	/** The atom map number of each atom (0: none); atom roles in patterns.ts. */
 	mapNumbers: number[];
 };
-
-const ORGANIC: Record<string, number> = {
-	B: 5,
-	C: 6,
-	N: 7,
-	O: 8,
-	F: 9,
-	P: 15,
-	S: 16,
-	Cl: 17,
-	Br: 35,
-	I: 53
-};
-const AROMATIC_SYMBOLS: Record<string, number> = { b: 5, c: 6, n: 7, o: 8, p: 15, s: 16 };
-/** Bracket symbols read here; others (and ambiguous ones such as Sc, Cs) leave the pattern to openchemlib. */
-const BRACKET_ELEMENTS: Record<string, number> = {
-	...ORGANIC,
-	Si: 14,
-	Se: 34,
-	Sn: 50,
-	Li: 3,
-	Na: 11,
-	K: 19,
-	Mg: 12,
-	Zn: 30,
-	Cu: 29,
-	Pd: 46
-};
-
-class Unsupported extends Error {}
 
 const recursiveQueries = new Map<string, ExactQuery>();
 
@@ -187,26 +146,6 @@ function symbolAtom(symbol: string): { test: AtomTest; aromatic: boolean; map: n
 	return { test: { kind: 'element', element: ORGANIC[symbol]! }, aromatic: false, map: 0 };
 }
 
-const aromaticElement = (element: number): AtomTest => ({
-	kind: 'all',
-	tests: [
-		{ kind: 'element', element },
-		{ kind: 'aromatic', aromatic: true }
-	]
-});
-
-function closingBracket(smarts: string, open: number): number {
-	let depth = 0;
-	for (let j = open; j < smarts.length; j++) {
-		if (smarts[j] === '[') {
-			depth++;
-		} else if (smarts[j] === ']' && --depth === 0) {
-			return j;
-		}
-	}
-	return -1;
-}
-
 /** `[...]`: the map number comes off the end; the rest is an expression (`;` < `,` < `&` and adjacency < `!`). */
 function bracketAtom(inside: string): { test: AtomTest; aromatic: boolean; map: number } {
 	const mapped = /:(\d+)$/.exec(inside);
@@ -215,28 +154,6 @@ function bracketAtom(inside: string): { test: AtomTest; aromatic: boolean; map: 
 		throw new Unsupported();
 	}
 	return { test: lowAnd(body), aromatic: /^[a-z]/.test(body), map: mapped ? Number(mapped[1]) : 0 };
-}
-
-/** Splits at `separator` outside parentheses (recursive parts keep theirs). */
-function splitTop(text: string, separator: string): string[] {
-	const parts: string[] = [];
-	let depth = 0;
-	let start = 0;
-	for (let i = 0; i < text.length; i++) {
-		if (text[i] === '(') {
-			depth++;
-		} else if (text[i] === ')') {
-			depth--;
-		} else if (depth === 0 && text[i] === separator) {
-			parts.push(text.slice(start, i));
-			start = i + 1;
-		}
-	}
-	parts.push(text.slice(start));
-	if (parts.some((part) => part === '')) {
-		throw new Unsupported();
-	}
-	return parts;
 }
 
 const combine = (kind: 'all' | 'any', tests: AtomTest[]): AtomTest =>
@@ -288,99 +205,4 @@ function primitives(run: string): AtomTest[] {
 		tests.push(negated ? { kind: 'not', test } : test);
 	}
 	return tests;
-}
-
-function closingParen(text: string, open: number): number {
-	let depth = 0;
-	for (let j = open; j < text.length; j++) {
-		if (text[j] === '(') {
-			depth++;
-		} else if (text[j] === ')' && --depth === 0) {
-			return j;
-		}
-	}
-	throw new Unsupported();
-}
-
-/** One primitive; `first` says whether it opens its run (only there is a symbol an element). */
-function primitive(head: string, digits: string, first: boolean): AtomTest {
-	const count = digits === '' ? 1 : Number(digits);
-	if (head.startsWith('#')) {
-		if (digits !== '') {
-			throw new Unsupported();
-		}
-		return { kind: 'element', element: Number(head.slice(1)) };
-	}
-	if (head.startsWith('+') || head.startsWith('-')) {
-		const signs = head.replace(/\d+$/, '');
-		if (!/^(\++|-+)$/.test(signs) || (signs.length > 1 && signs.length !== head.length)) {
-			throw new Unsupported();
-		}
-		const magnitude = signs.length === head.length ? signs.length : Number(head.slice(1));
-		return { kind: 'charge', charge: signs[0] === '+' ? magnitude : -magnitude };
-	}
-	// '[H]' alone (a hydrogen atom) was refused in bracketAtom, so H is always a hydrogen count.
-	if (head === 'H') {
-		return { kind: 'hydrogens', count };
-	}
-	if (head === 'X') {
-		return { kind: 'connections', count };
-	}
-	if (head === 'A' || head === 'a') {
-		if (digits !== '') {
-			throw new Unsupported();
-		}
-		return { kind: 'aromatic', aromatic: head === 'a' };
-	}
-	if (head === 'D') {
-		return degreeTest(digits);
-	}
-	if (head === 'r') {
-		return ringSizeTest(digits);
-	}
-	if (digits !== '' || !first) {
-		throw new Unsupported();
-	} // isotopes, R, v, x, …
-	if (head in BRACKET_ELEMENTS) {
-		return { kind: 'element', element: BRACKET_ELEMENTS[head]! };
-	}
-	if (head in AROMATIC_SYMBOLS) {
-		return aromaticElement(AROMATIC_SYMBOLS[head]!);
-	}
-	throw new Unsupported();
-}
-
-/** Whether a test (outside recursive parts) asks for a ring size. */
-function testsRingSize(test: AtomTest): boolean {
-	if (test.kind === 'all' || test.kind === 'any') {
-		return test.tests.some(testsRingSize);
-	}
-	if (test.kind === 'not') {
-		return testsRingSize(test.test);
-	}
-	return test.kind === 'ringSize';
-}
-
-/**
- * `D<n>` as openchemlib reads it: D0 to D3 exactly, D4 four or more (S with six F is D4, D5 and
- * D6 alike); it ignores D5 and up and a bare D, so those stay with it.
- */
-function degreeTest(digits: string): AtomTest {
-	const count = Number(digits);
-	if (digits === '' || count > 4) {
-		throw new Unsupported();
-	}
-	return { kind: 'degree', count, atLeast: count === 4 };
-}
-
-/**
- * `r<n>` as openchemlib reads it: the atom's smallest ring has n atoms, so the fused carbons of
- * indole are r5, not r6. It ignores r8 and up and a bare r (every atom matches), so those stay with it.
- */
-function ringSizeTest(digits: string): AtomTest {
-	const size = Number(digits);
-	if (digits === '' || size < 3 || size > 7) {
-		throw new Unsupported();
-	}
-	return { kind: 'ringSize', size };
 }

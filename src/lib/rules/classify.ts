@@ -1,12 +1,13 @@
 /**
  * Reagent text → condition classes. Every reagent spelling is compiled once, at load, into
  * sticky regular expressions grouped by first character; classifying a step is one left-to-right
- * scan that takes the longest spelling starting at each word boundary.
- */
-import { CONDITION_IDS, type ConditionId } from './ids';
+ * scan that takes the longest spelling starting at each word boundary (reagent-scan.ts). This
+ * file turns the matches into the step's classes, heat, hazards and the fragments left unknown.
+ */ import { CONDITION_IDS, type ConditionId } from './ids';
 import { foldText } from './normalize';
-import { isNoiseFragment, standsAlone } from './reagent-text';
-import { formulaFits, isBareMetal, readsAsFormula } from './spelling';
+import { WORD_CHAR, compileBuckets, scan, type Spelling } from './reagent-scan';
+import { isNoiseFragment } from './reagent-text';
+import { isBareMetal, readsAsFormula } from './spelling';
 import type { Reagent } from './schemas';
 
 /** The other reagent of the step whose tag picked a reagent's classes, and why it matters. */
@@ -62,155 +63,8 @@ function inContext(
 /** At or above this temperature a step counts as `heat` even without the word "reflux". */
 export const HEAT_THRESHOLD_CELSIUS = 80;
 
-const WORD_CHAR = /[\p{L}\p{N}]/u;
-const BOUNDARY_AFTER = '(?![\\p{L}\\p{N}])';
-
 const FRAGMENT_SPLIT = /[,;\n]|\bthen\b|\bfollowed by\b|\band\b/giu;
 const TEMPERATURE = /(?<![\p{L}\p{N}.])([-+]?\d+(?:\.\d+)?)\s*°\s*c(?![\p{L}])/gu;
-
-interface Spelling {
-	folded: string;
-	/** As listed in rules/reagents.json. */
-	written: string;
-	/** A formula matched loosely fits only typed text that is not another formula. */
-	formula: boolean;
-	/** A bare metal counts only where it stands alone (see reagent-text.ts). */
-	metal: boolean;
-	reagent: Reagent;
-}
-
-interface Candidate {
-	start: number;
-	end: number;
-	spelling: Spelling;
-}
-
-function escapeRegExp(text: string): string {
-	return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-}
-
-/** Pattern for one folded spelling: spacing, separators, dots and dashes are matched loosely. */
-function spellingPattern(folded: string): string {
-	let out = '';
-	let i = 0;
-	while (i < folded.length) {
-		const ch = folded[i] as string;
-		if (/[\s,;/·]/.test(ch)) {
-			let run = '';
-			while (i < folded.length && /[\s,;/·]/.test(folded[i] as string)) {
-				run += folded[i++];
-			}
-			if (/[,;/]/.test(run)) {
-				out += '\\s*[,;/]\\s*';
-			}
-			// An adduct is written with a dot, dash or slash: "HF·py", "HF-py" and "HF/py" are one reagent.
-			else if (run.includes('·')) {
-				out += '(?:\\s*[·.*/-]\\s*|\\s+)';
-			} else {
-				out += '\\s+';
-			}
-			continue;
-		}
-		out += ch === '-' ? '[-\\s]' : escapeRegExp(ch);
-		i++;
-	}
-	return out;
-}
-
-interface Bucket {
-	regex: RegExp;
-	owners: Spelling[];
-}
-
-/**
- * Spellings grouped by first character, each group one sticky regex (longest spelling first),
- * so a scan tries only the few spellings that can start where it stands.
- */
-function compileBuckets(spellings: Spelling[]): Map<string, Bucket> {
-	const byFirst = new Map<string, Spelling[]>();
-	for (const spelling of new Map(spellings.map((s) => [s.folded, s])).values()) {
-		const first = spelling.folded[0] as string;
-		byFirst.set(first, [...(byFirst.get(first) ?? []), spelling]);
-	}
-	const buckets = new Map<string, Bucket>();
-	for (const [first, group] of byFirst) {
-		group.sort((a, b) => b.folded.length - a.folded.length || a.folded.localeCompare(b.folded));
-		const body = group.map((s) => `(${spellingPattern(s.folded)})`).join('|');
-		buckets.set(first, {
-			regex: new RegExp(`(?:${body})${BOUNDARY_AFTER}`, 'uy'),
-			owners: group
-		});
-	}
-	return buckets;
-}
-
-/** The longest spelling in `buckets` that starts exactly at `at`, if any. */
-function matchAt(buckets: Map<string, Bucket>, text: string, at: number): Candidate | undefined {
-	const bucket = buckets.get(text[at] as string);
-	if (!bucket) {
-		return undefined;
-	}
-	bucket.regex.lastIndex = at;
-	const m = bucket.regex.exec(text);
-	if (!m) {
-		return undefined;
-	}
-	const group = m.findIndex((g, i) => i > 0 && g !== undefined);
-	const spelling = bucket.owners[group - 1];
-	return spelling && { start: at, end: at + m[0].length, spelling };
-}
-
-/** Whether a match may stand for what was typed: formula case and metal context (see spelling.ts). */
-function fits(candidate: Candidate | undefined, cased: string): Candidate | undefined {
-	if (!candidate) {
-		return undefined;
-	}
-	const { start, end, spelling } = candidate;
-	if (spelling.formula && !formulaFits(spelling.written, cased.slice(start, end))) {
-		return undefined;
-	}
-	if (spelling.metal && !standsAlone(cased, start, end)) {
-		return undefined;
-	}
-	return candidate;
-}
-
-/** A word starts here, and not inside a formula's brackets: "CO" in "Co2(CO)8" starts nothing. */
-function startsWord(text: string, at: number): boolean {
-	if (at === 0) {
-		return true;
-	}
-	const previous = text[at - 1] as string;
-	if (WORD_CHAR.test(previous)) {
-		return false;
-	}
-	return !(/[([]/.test(previous) && at >= 2 && /[\p{L}\p{N})\]]/u.test(text[at - 2] as string));
-}
-
-/** Leftmost-longest matches over the text, tried only where a word can begin. */
-function scan(
-	folded: string,
-	cased: string,
-	loose: Map<string, Bucket>,
-	exact: Map<string, Bucket>
-): Candidate[] {
-	const taken: Candidate[] = [];
-	let at = 0;
-	while (at < folded.length) {
-		if (folded[at] !== ' ' && startsWord(folded, at)) {
-			const a = fits(matchAt(loose, folded, at), cased);
-			const b = fits(matchAt(exact, cased, at), cased);
-			const best = a && b ? (b.end > a.end ? b : a) : (a ?? b);
-			if (best) {
-				taken.push(best);
-				at = best.end;
-				continue;
-			}
-		}
-		at++;
-	}
-	return taken;
-}
 
 const EDGE_PUNCTUATION = /^[\s.:/+&~–-]+|[\s.:/+&~–-]+$/gu;
 const PARTNER: Record<string, string> = { ')': '(', ']': '[', '}': '{' };

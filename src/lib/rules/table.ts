@@ -5,85 +5,17 @@
  * one team's layer. `stabilityOf` and `reactivityOf` look in the layer first and fall back to the
  * defaults; the answer says which layer it came from, so a clash message can credit the team's
  * reason instead of the textbook's. The defaults are never modified, and tables are frozen.
- */
-import { compileClassifier, type ReagentClassifier } from './classify';
+ */ import { compileClassifier, type ReagentClassifier } from './classify';
 import { DEFAULT_RULE_FILES } from './default-files';
-import type {
-	ConditionId,
-	FreeGroupId,
-	PgSite,
-	ProtectingGroupId,
-	ReactivityRating,
-	ReactivityRowRating,
-	StabilityRating
-} from './ids';
+import type { ConditionId, ProtectingGroupId, StabilityRating } from './ids';
 import { parseOverrides, type RuleOverrides, type RuleOverridesInput } from './overrides';
-import type {
-	Condition,
-	Preference,
-	ProtectingGroupConditions,
-	ReactivityEntry,
-	Reagent,
-	WhereOnEntry
-} from './schemas';
+import type { Condition, ProtectingGroupConditions, ReactivityEntry } from './schemas';
+import { reactivityForReagents, withReagentRatings } from './table-reagent-ratings';
+import type { ReactivityAnswer, RuleTable } from './table-types';
 import { parseRuleFiles, type RuleData } from './validate';
 
-export type RuleLayer = 'default' | 'override';
-
-export interface StabilityAnswer {
-	rating: StabilityRating;
-	source: string;
-	/** The override's reason; default ratings carry their reasons in the row's notes. */
-	reason?: string;
-	layer: RuleLayer;
-	/** Set when the rating is the row's `whereOn` entry for what the PG sits on. */
-	site?: PgSite;
-}
-
-export interface ReactivityAnswer {
-	rating: ReactivityRating;
-	reason: string;
-	source: string;
-	layer: RuleLayer;
-	/** A caution chemists usually mask for rather than accept (the row's `usuallyMasked`). */
-	usuallyMasked?: true;
-}
-
-export interface RuleTable {
-	readonly conditions: readonly Condition[];
-	readonly reagents: readonly Reagent[];
-	readonly reactivity: readonly ReactivityEntry[];
-	readonly protectingGroups: readonly ProtectingGroupConditions[];
-	/** Which PGs a chemist reaches for first, per group type (rules/preferences.json). */
-	readonly preferences: readonly Preference[];
-	readonly overrides: RuleOverrides | null;
-	condition(id: ConditionId): Condition;
-	protectingGroup(id: ProtectingGroupId): ProtectingGroupConditions;
-	/**
-	 * `reagents` are the canonical names of the reagents that brought the condition; a PG row's
-	 * `reagentRatings` refine the class rating for them (the worst one applies). `site` is what the
-	 * PG sits on, when the caller knows it: the row's `whereOn` entry for it replaces the class rating.
-	 */
-	stabilityOf(
-		pg: ProtectingGroupId,
-		condition: ConditionId,
-		reagents?: readonly string[],
-		site?: PgSite
-	): StabilityAnswer;
-	/** The PG's rating under every class, finer classes resolved (what the API and screens show). */
-	ratingsOf(pg: ProtectingGroupId): Record<ConditionId, StabilityRating>;
-	/**
-	 * `undefined` means no known problem (or a team override of `none`). `reagents` are the
-	 * canonical names of the reagents that brought the condition; a row's `reagentRatings` refine
-	 * its rating for them (the worst one applies).
-	 */
-	reactivityOf(
-		group: FreeGroupId,
-		condition: ConditionId,
-		reagents?: readonly string[]
-	): ReactivityAnswer | undefined;
-	conditionsForReagents: ReagentClassifier;
-}
+// The table's types live in table-types.ts; callers keep importing them from here.
+export type { ReactivityAnswer, RuleLayer, RuleTable, StabilityAnswer } from './table-types';
 
 function deepFreeze<T>(value: T): T {
 	if (value && typeof value === 'object' && !Object.isFrozen(value)) {
@@ -106,7 +38,6 @@ interface Base {
 }
 
 const pairKey = (a: string, b: ConditionId) => `${a}\u0000${b}`;
-const SEVERITY: Record<StabilityRating, number> = { stable: 0, caution: 1, labile: 2 };
 
 function prepare(data: RuleData): Base {
 	deepFreeze(data);
@@ -120,72 +51,6 @@ function prepare(data: RuleData): Base {
 			data.conditions.flatMap((c) => (c.refines ? [[c.id, c.refines] as const] : []))
 		)
 	};
-}
-
-/**
- * The answer for the reagents that brought a class: each reagent its own entry where the row
- * names it, else the row's answer; the worst one applies. No starting value, so a reagent's own
- * rating may be milder than the row's (PPTS and TBDPS; TFA and a tertiary alcohol).
- */
-function worstForReagents<A extends { rating: string }>(
-	rowAnswer: A,
-	reagents: readonly string[],
-	own: (reagent: string) => A | undefined,
-	severity: Readonly<Record<string, number>>
-): A {
-	if (reagents.length === 0) {
-		return rowAnswer;
-	}
-	return reagents
-		.map((name) => own(name) ?? rowAnswer)
-		.reduce((worst, next) => (severity[next.rating]! > severity[worst.rating]! ? next : worst));
-}
-
-/** A PG's default rating under one class, refined for the reagents that brought it. */
-function withReagentRatings(
-	row: ProtectingGroupConditions,
-	condition: ConditionId,
-	rating: StabilityRating,
-	reagents: readonly string[],
-	onSite?: WhereOnEntry
-): StabilityAnswer {
-	const classAnswer: StabilityAnswer = onSite
-		? { rating, source: row.source, layer: 'default', reason: onSite.reason, site: onSite.site }
-		: { rating, source: row.source, layer: 'default' };
-	return worstForReagents(
-		classAnswer,
-		reagents,
-		(name) => {
-			const entry = row.reagentRatings.find((r) => r.reagent === name && r.condition === condition);
-			return (
-				entry && {
-					rating: entry.rating,
-					reason: entry.reason,
-					source: row.source,
-					layer: 'default'
-				}
-			);
-		},
-		SEVERITY
-	);
-}
-
-const REACTS: Record<ReactivityRowRating, number> = { none: 0, caution: 1, reacts: 2 };
-
-/**
- * A free group's default rating under one class, refined for the reagents that brought it, e.g.
- * a tertiary alcohol under TFA alone is `none`, under TFA and H2SO4 the row's `caution`.
- */
-function reactivityForReagents(
-	entry: ReactivityEntry,
-	reagents: readonly string[]
-): { rating: ReactivityRowRating; reason: string } {
-	return worstForReagents<{ rating: ReactivityRowRating; reason: string }>(
-		{ rating: entry.rating, reason: entry.reason },
-		reagents,
-		(name) => entry.reagentRatings.find((r) => r.reagent === name),
-		REACTS
-	);
 }
 
 function layer(base: Base, overrides: RuleOverrides | null): RuleTable {

@@ -1,14 +1,22 @@
 /**
  * Validation of the rule files as a whole: each file against its schema, then the checks that
  * span files (every condition class defined once, every protecting group rated once, no reagent
- * spelling claimed twice). All problems are collected and reported together.
+ * spelling claimed twice). All problems are collected and reported together. The checks live in
+ * validate-classes.ts, validate-reagents.ts, validate-reagent-ratings.ts and validate-planning.ts.
  */
 import type { z } from 'zod';
-import { CONDITION_IDS, PROTECTING_GROUP_IDS } from './ids';
 import { formatIssue, formatZodIssues, RuleTableError, RULE_FILES } from './issues';
+import { CONDITION_IDS, PROTECTING_GROUP_IDS } from './ids';
+import {
+	checkBroadRatings,
+	checkEachOnce,
+	checkNoneRows,
+	checkReactivityPairs,
+	checkRefinements
+} from './validate-classes';
+import { checkContextTags, checkReagentSpellings } from './validate-reagents';
 import { checkReactivityReagentRatings, checkReagentRatings } from './validate-reagent-ratings';
 import { checkInstallMethods, checkPreferences } from './validate-planning';
-import { spellingKey } from './spelling';
 import {
 	conditionsFileSchema,
 	preferencesFileSchema,
@@ -41,78 +49,6 @@ function parseFile<S extends z.ZodType>(schema: S, file: string, raw: unknown, p
 	}
 	problems.push(...formatZodIssues(file, result.error));
 	return undefined;
-}
-
-/** Reports ids of a fixed list that a file defines twice or not at all. */
-function checkEachOnce(
-	file: string,
-	what: string,
-	expected: readonly string[],
-	ids: readonly string[],
-	problems: string[]
-) {
-	const firstIndex = new Map<string, number>();
-	ids.forEach((id, index) => {
-		if (firstIndex.has(id)) {
-			problems.push(
-				formatIssue(
-					file,
-					[index, 'id'],
-					`duplicate ${what} "${id}" (first at [${firstIndex.get(id)}])`
-				)
-			);
-		} else {
-			firstIndex.set(id, index);
-		}
-	});
-	const missing = expected.filter((id) => !firstIndex.has(id));
-	if (missing.length > 0) {
-		problems.push(
-			formatIssue(file, [], `missing ${what}: ${missing.map((id) => `"${id}"`).join(', ')}`)
-		);
-	}
-}
-
-function checkReagentSpellings(reagents: readonly Reagent[], problems: string[]) {
-	const owner = new Map<string, string>();
-	reagents.forEach((reagent, index) => {
-		const exactCase = new Set(reagent.exactCase ?? []);
-		const spellings: [string, PropertyKey[]][] = [
-			[reagent.name, [index, 'name']],
-			...reagent.synonyms.map((s, i): [string, PropertyKey[]] => [s, [index, 'synonyms', i]])
-		];
-		for (const [spelling, path] of spellings) {
-			// Formulas keep their case (CoCl2 is not COCl2); names fold.
-			const key = spellingKey(spelling, exactCase.has(spelling.trim()));
-			const previous = owner.get(key);
-			if (previous !== undefined && previous !== reagent.name) {
-				problems.push(
-					formatIssue(
-						RULE_FILES.reagents,
-						path,
-						`"${spelling}" is already a spelling of "${previous}"`
-					)
-				);
-			} else {
-				owner.set(key, reagent.name);
-			}
-		}
-	});
-}
-
-function checkReactivityPairs(entries: readonly ReactivityEntry[], problems: string[]) {
-	const seen = new Map<string, number>();
-	entries.forEach((entry, index) => {
-		const key = `${entry.group} × ${entry.condition}`;
-		const first = seen.get(key);
-		if (first !== undefined) {
-			problems.push(
-				formatIssue(RULE_FILES.reactivity, [index], `duplicate pair ${key} (first at [${first}])`)
-			);
-		} else {
-			seen.set(key, index);
-		}
-	});
 }
 
 /** Validates raw file contents, e.g. `parseRuleFiles({ conditions, reagents, reactivity, protectingGroups })`. */
@@ -212,24 +148,6 @@ export function parseRuleFiles(raw: RawRuleFiles): RuleData {
 	return { conditions, reagents, reactivity, protectingGroups, preferences };
 }
 
-/** A `when` tag that no reagent carries could never apply: a typo, or a tag not yet given out. */
-function checkContextTags(reagents: readonly Reagent[], problems: string[]) {
-	const carried = new Set(reagents.flatMap((r) => r.tags ?? []));
-	reagents.forEach((reagent, index) => {
-		(reagent.when ?? []).forEach((entry, i) => {
-			if (!carried.has(entry.tag)) {
-				problems.push(
-					formatIssue(
-						RULE_FILES.reagents,
-						[index, 'when', i, 'tag'],
-						`no reagent carries the tag "${entry.tag}", so this context never applies`
-					)
-				);
-			}
-		});
-	});
-}
-
 /** Every group a PG protects is drawn by exactly one of its install transforms, and no other group is. */
 function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: string[]) {
 	pgs.forEach((pg, index) => {
@@ -262,66 +180,6 @@ function checkTransformCoverage(pgs: ProtectingGroupConditions[], problems: stri
 					)
 				);
 			}
-		}
-	});
-}
-
-/** A finer class sits in a broader one, one level deep: `organometallic-grignard` → `organometallic`. */
-function checkRefinements(conditions: Condition[], problems: string[]) {
-	const refines = new Map(conditions.map((c) => [c.id, c.refines]));
-	conditions.forEach((condition, index) => {
-		if (!condition.refines) {
-			return;
-		}
-		const where = [index, 'refines'];
-		if (condition.refines === condition.id) {
-			problems.push(formatIssue(RULE_FILES.conditions, where, 'a class cannot refine itself'));
-		} else if (refines.get(condition.refines)) {
-			problems.push(
-				formatIssue(
-					RULE_FILES.conditions,
-					where,
-					`"${condition.refines}" is itself a finer class; refine its broader class "${refines.get(condition.refines)}"`
-				)
-			);
-		}
-	});
-}
-
-/** Every protecting group rates every broader class; finer classes inherit where they are not rated. */
-function checkBroadRatings(
-	conditions: Condition[],
-	pgs: ProtectingGroupConditions[],
-	problems: string[]
-) {
-	const broad = conditions.filter((c) => !c.refines).map((c) => c.id);
-	pgs.forEach((pg, index) => {
-		for (const id of broad) {
-			if (pg.stability[id] === undefined) {
-				problems.push(
-					formatIssue(
-						RULE_FILES.protectingGroups,
-						[index, 'stability', id],
-						'missing rating (every broader condition class needs one: stable, caution or labile)'
-					)
-				);
-			}
-		}
-	});
-}
-
-/** `none` only makes sense where a broader class's row could otherwise be inherited. */
-function checkNoneRows(conditions: Condition[], rows: ReactivityEntry[], problems: string[]) {
-	const finer = new Set(conditions.filter((c) => c.refines).map((c) => c.id));
-	rows.forEach((row, index) => {
-		if (row.rating === 'none' && !finer.has(row.condition)) {
-			problems.push(
-				formatIssue(
-					RULE_FILES.reactivity,
-					[index, 'rating'],
-					`"none" is only for a finer class (${row.condition} refines nothing; leave the pair out instead)`
-				)
-			);
 		}
 	});
 }

@@ -3,17 +3,19 @@
 
 import type { RouteDocument } from '../../route/document';
 import { checkRulesFrom } from '../check/rules-adapter';
-import { cannotMask, joinTiers, leftFree, maskedBecause, type Tier } from './cautions';
+import { cannotMask, joinTiers, leftFree, type Tier } from './cautions';
 import type { CheckRules } from '../check/types';
 import { loadRuleTable, type RuleTable } from '../table';
 import { clearDrawCache } from './draw';
-import { judgeCandidates, type Judged } from './options';
+import { judgeCandidates } from './options';
 import { drawRoute } from './route';
 import { withRanking } from './rationale';
-import { conflict, searchChoices, type Choice } from './search';
+import type { Choice } from './cost';
+import { searchChoices } from './search';
+import { because, notTogether, together, whyUnsolved } from './sentences';
 import { clearFollowCache, findNeeds } from './track';
 import { routeTree, type RouteTree } from './tree';
-import type { Need, Option, Plan, PlanAnswer, Unsolved } from './types';
+import type { Need, Plan, PlanAnswer, Unsolved } from './types';
 
 export type * from './types';
 
@@ -184,96 +186,4 @@ function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = [])
 		plans: [],
 		unsolved: needs.map((need) => ({ group: need.group, atoms: need.atoms, reason }))
 	};
-}
-
-function because(rules: CheckRules, tree: RouteTree, need: Need, option: Option): string {
-	const threats = need.attackedAt.map((id) => tree.stepName(id)).join(', ');
-	const off =
-		option.removeAt !== need.freeAt
-			? `after ${tree.stepName(tree.made.get(option.removeAt)!.id)}, as soon as nothing attacks it`
-			: need.freeAt === tree.target
-				? 'at the end'
-				: `before ${tree.stepName(tree.next.get(need.freeAt)!.id)}, where it reacts`;
-	const cautions = option.cautions
-		? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)`
-		: '';
-	const level = need.level === 'caution' ? ` ${maskedBecause(rules, tree, need)}` : '';
-	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${cautions}.${option.why ? ` ${option.why}` : ''}${level}`;
-}
-
-function whyUnsolved(rules: CheckRules, tree: RouteTree, need: Need, judged: Judged[]): Unsolved {
-	const label = rules.groupLabel(need.group);
-	const first = tree.stepName(need.attackedAt[0]!);
-	if (judged.length === 0) {
-		return {
-			group: need.group,
-			atoms: need.atoms,
-			reason: `${capital(first)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.`
-		};
-	}
-	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt)
-		? judged[0]!.killedAt
-		: undefined;
-	if (killer !== undefined) {
-		return {
-			group: need.group,
-			atoms: need.atoms,
-			reason: `${capital(tree.stepName(killer))} makes it impossible: the free ${label} must be masked from ${first} on, and that step's conditions would remove every protecting group that masks it (${judged.map((j) => j.pg).join(', ')}).`
-		};
-	}
-	return {
-		group: need.group,
-		atoms: need.atoms,
-		reason: `${capital(first)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.`
-	};
-}
-
-const capital = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
-
-/** E.g. `['TBS', 'dioxolane']` → "TBS and dioxolane together"; `['THP', 'THP']` → "both THP groups at once". */
-function together(pgs: string[]): string {
-	const unique = [...new Set(pgs)];
-	if (unique.length > 1) {
-		return `${unique.join(' and ')} together`;
-	}
-	return pgs.length === 2
-		? `both ${unique[0]} groups at once`
-		: `all ${pgs.length} ${unique[0]} groups at once`;
-}
-
-/**
- * Protecting groups that suit a group on their own but not beside this plan's other choices, and
- * why, e.g. "dioxolane not used for the ketone: putting the acetonide on (…) would strip the
- * dioxolane on the ketone." At most three per group; a PG merely ranked lower is not mentioned.
- */
-function notTogether(
-	rules: CheckRules,
-	needs: Need[],
-	judged: Judged[][],
-	chosen: Option[]
-): string[] {
-	return needs.flatMap((need, i) =>
-		judged[i]!.filter((j) => j.options.length && j.pg !== chosen[i]!.pg)
-			.flatMap((j) => {
-				let reason: string | null = null;
-				for (const option of j.options) {
-					const clash = chosen
-						.map((other, k) =>
-							k === i
-								? null
-								: (conflict(rules, needs, i, option, k, other) ??
-									conflict(rules, needs, k, other, i, option))
-						)
-						.find((r) => r !== null);
-					if (!clash) {
-						return [];
-					}
-					reason ??= clash;
-				}
-				return reason
-					? [`${j.pg} not used for the ${rules.groupLabel(need.group)}: ${reason}.`]
-					: [];
-			})
-			.slice(0, 3)
-	);
 }

@@ -5,7 +5,7 @@
 import type { CheckRules } from '../check/types';
 import { PROTECTING_GROUP_IDS } from '../ids';
 import type { RuleTable } from '../table';
-import type { Choice } from './search';
+import type { Choice } from './cost';
 import type { Drawback, Need, Plan } from './types';
 
 /**

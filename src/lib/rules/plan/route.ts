@@ -6,7 +6,7 @@
 import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/document';
 import { protectedStructure } from './draw';
 import { installsBefore } from './exposure';
-import { installKey } from './search';
+import { installKey } from './conflict';
 import type { RouteTree } from './tree';
 import type { Need, Option, Protection } from './types';
 
