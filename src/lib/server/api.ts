@@ -1,9 +1,9 @@
 import { error, isHttpError, json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
+import type { ApiErrorBody } from '../api/errors';
 import { DatabaseBusy, isDatabaseBusy } from './db/write-queue';
 
-/** The one error shape every `/api` response uses: `{ error: { code, message, details? } }`. */
-export type ApiErrorBody = { error: { code: string; message: string; details?: unknown } };
+export type { ApiErrorBody };
 
 const CODES_BY_STATUS: Record<number, string> = {
 	400: 'bad_request',

@@ -4,6 +4,7 @@
 
 import { SvelteMap } from 'svelte/reactivity';
 import type { RouteDocument } from '$lib/route/document';
+import { isVersionConflict } from '$lib/client/api';
 import type { Analysis, ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
 import * as ops from './document-ops';
@@ -233,7 +234,7 @@ export class RouteEditor {
 			this.#saveState = 'saved';
 			void this.refreshCheck();
 			this.#schedule();
-		} else if (result.status === 409) {
+		} else if (isVersionConflict(result)) {
 			this.#saveState = 'conflict';
 		} else {
 			this.#saveState = 'failed';
