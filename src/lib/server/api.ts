@@ -95,7 +95,7 @@ export function apiHandler<E extends RequestEvent = RequestEvent>(
 /** The last resort when a write could not get the lock: 503 with retry-after, never a 500. */
 function databaseBusy(): Response {
 	const busy = new DatabaseBusy();
-	const response = apiError(503, 'database-busy', busy.message);
+	const response = apiError(503, 'database_busy', busy.message);
 	response.headers.set('retry-after', String(busy.retryAfterSeconds));
 	return response;
 }
