@@ -37,7 +37,7 @@ export const handle = sequence(
 export const handleError: HandleServerError = ({ error, status, message }) => {
 	// Pages cannot change the status here; they at least say what happened and that it may pass.
 	if (isDatabaseBusy(error)) {
-		return { message: new DatabaseBusy().message, code: 'database-busy' };
+		return { message: new DatabaseBusy().message, code: 'database_busy' };
 	}
 	if (status !== 404) {
 		console.error('[server]', error);

@@ -51,6 +51,12 @@ test('a chemist plans protection, sees the ranked plans, uses plan 1 and lands o
 	await expect(
 		page.getByRole('heading', { name: `${name} (protected, plan 1)`, level: 1 })
 	).toBeVisible();
+	// The success notice is the app's, not the old route screen's: it outlives the move.
+	await expect(
+		page
+			.getByRole('status')
+			.filter({ hasText: `Plan 1 is saved as “${name} (protected, plan 1)”.` })
+	).toBeVisible();
 	await expect(page.getByTestId('intermediate-node')).toHaveCount(4);
 
 	// The planner's steps are marked on the canvas, in words and for screen readers.

@@ -194,6 +194,10 @@ test('when someone else saved first, the page says so and keeps the chemist’s 
 	await notice.getByRole('button', { name: 'Keep mine as a copy' }).click();
 	await expect(page).not.toHaveURL(new RegExp(id));
 	await expect(page.getByRole('heading', { name: `${name} (my copy)`, level: 1 })).toBeVisible();
+	// The notice is the app's, not the old route screen's: it outlives the move to the copy.
+	await expect(
+		page.getByRole('status').filter({ hasText: `Your version is saved as “${name} (my copy)”.` })
+	).toBeVisible();
 	await expect(page.getByTestId('step-label')).toContainText('MeMgBr, THF, −78 °C');
 
 	// Their version is untouched.

@@ -1,5 +1,7 @@
 import type { RequestEvent } from '@sveltejs/kit';
+import { existsSync } from 'node:fs';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { match as matchRank } from '../../src/params/rank';
 import { POST as savePlan } from '../../src/routes/api/routes/[routeId=uuid]/plan/[rank=rank]/save/+server';
 import { POST as createOne } from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
 import { GET as getRoute } from '../../src/routes/api/routes/[routeId=uuid]/+server';
@@ -138,53 +140,34 @@ describe('POST /api/routes/{id}/plan/{rank}/save', () => {
 		const stale = await call(savePlan, 'chemist', { routeId, rank: '1' }, { version: 7 });
 		expect(stale.status).toBe(409);
 		expect(stale.body.error).toMatchObject({
-			code: 'version-conflict',
+			code: 'version_conflict',
 			details: { currentVersion: 1 }
 		});
 		expect((await call(savePlan, 'chemist', { routeId, rank: '1' }, {})).body.error.code).toBe(
 			'invalid_body'
 		);
-		for (const rank of ['9', '0', 'first']) {
-			const missing = await call(savePlan, 'chemist', { routeId, rank }, { version: 1 });
-			expect(missing.status, rank).toBe(404);
-			expect(missing.body.error.code).toBe('no_such_plan');
-		}
+		const missing = await call(savePlan, 'chemist', { routeId, rank: '9' }, { version: 1 });
+		expect(missing.status).toBe(404);
+		expect(missing.body.error.code).toBe('no_such_plan');
 	});
 
-	it('answers a rank that cannot name a plan before planning (issue 10, defect 11)', async () => {
-		const routeId = await storedRoute();
-		// With a 1 ms chemistry budget any planning would answer 503; the rank is refused first.
-		process.env.ORTHOGON_CHEM_BUDGET_MS = '1';
-		try {
-			for (const rank of ['0', 'first', '1e3']) {
-				const refused = await call(savePlan, 'chemist', { routeId, rank }, { version: 1 });
-				expect(refused.status, rank).toBe(404);
-				expect(refused.body.error).toMatchObject({
-					code: 'no_such_plan',
-					message: expect.stringMatching(/numbered 1, 2, 3/)
-				});
-			}
-		} finally {
-			delete process.env.ORTHOGON_CHEM_BUDGET_MS;
+	// Issue 10, defect 11: a rank that cannot name a plan is refused before any planning. The
+	// `rank` matcher does it in the router, so the handler never sees such a rank (issue 13: no
+	// hand check in the handler); the router then answers the `/api` fallback's 404.
+	it('leaves ranks that cannot name a plan to the router: the save route is guarded by the rank matcher', () => {
+		expect(
+			existsSync('src/routes/api/routes/[routeId=uuid]/plan/[rank=rank]/save/+server.ts')
+		).toBe(true);
+		for (const rank of ['0', 'first', '1e3', '1e9', '-1', '01', '1.5', '']) {
+			expect(matchRank(rank), rank).toBe(false);
 		}
+		expect(['1', '2', '12'].map(matchRank)).toEqual([true, true, true]);
 	});
 	it('says why when the route has no plan at all', async () => {
 		const routeId = await storedRoute(hopeless());
 		const answer = await call(savePlan, 'chemist', { routeId, rank: '1' }, { version: 1 });
 		expect(answer.status).toBe(404);
 		expect(answer.body.error.message).toMatch(/^There is no plan 1 for this route\. .*step "s1"/);
-	});
-
-	it("refuses a rank that is not a number before planning the route (404, not the planner's 422)", async () => {
-		const broken = await createRoute(f.people.chemist, project, {
-			...grignard(),
-			steps: [{ id: 's1', from: ['i0'], to: 'gone' }]
-		});
-		for (const rank of ['first', '0', '1e9']) {
-			const answer = await call(savePlan, 'chemist', { routeId: broken.id, rank }, { version: 1 });
-			expect(answer.status, rank).toBe(404);
-			expect(answer.body.error.code).toBe('no_such_plan');
-		}
 	});
 
 	it('answers 422 naming the problem when the stored route is not a valid route document', async () => {

@@ -99,7 +99,7 @@ describe('route API', () => {
 			document: doc('Lost edit')
 		});
 		expect(stale.status).toBe(409);
-		expect(stale.body.error.code).toBe('version-conflict');
+		expect(stale.body.error.code).toBe('version_conflict');
 		const got = await call(oneRoute.GET, 'chemist', { routeId });
 		expect(got.body.name).toBe('Route one, revised');
 		expect(got.body.version).toBe(2);

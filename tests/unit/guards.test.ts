@@ -1,11 +1,14 @@
 import { isHttpError, isRedirect } from '@sveltejs/kit';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { ACTIONS, can, ROLES } from '../../src/lib/policy';
 import {
 	requireProjectAction,
+	requireRouteAction,
 	requireTeamAction,
 	requireUser
 } from '../../src/lib/server/auth/guards';
+import { Membership } from '../../src/lib/server/db';
+import { createRoute } from '../../src/lib/server/services/routes';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 type Fixture = Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
@@ -102,15 +105,50 @@ describe('requireProjectAction', () => {
 			)
 		).toBe('403');
 	});
-	it('answers 404 for ids that do not exist or are not ids at all', async () => {
+	// Ids that are not uuids never reach the guard: the `uuid` matcher answers 404 in the router
+	// (tests/unit/text-and-ids.test.ts checks every id segment uses it).
+	it('answers 404 for ids that do not exist', async () => {
 		const event = fakeEvent({ user: f.people.lead });
 		expect(
 			await outcome(() =>
 				requireProjectAction(event, '00000000-0000-4000-8000-000000000000', 'project.read')
 			)
 		).toBe('404');
-		expect(await outcome(() => requireProjectAction(event, 'not-an-id', 'project.read'))).toBe(
-			'404'
-		);
+	});
+});
+
+describe('one membership query per guarded request', () => {
+	const membershipQueries = async (run: () => Promise<unknown>) => {
+		const spy = vi.spyOn(Membership, 'findOne');
+		try {
+			await outcome(run);
+			return spy.mock.calls.length;
+		} finally {
+			spy.mockRestore();
+		}
+	};
+
+	it('reads the caller’s role once for a project, a route and a team, allowed or refused', async () => {
+		const project = await makeProject(f.team.id, 'Counted project');
+		const route = await createRoute(f.people.lead, project, {
+			name: 'Counted route',
+			intermediates: [],
+			steps: []
+		});
+		for (const person of [f.people.chemist, f.people.viewer, f.people.outsider]) {
+			const event = fakeEvent({ user: person });
+			expect(
+				await membershipQueries(() => requireProjectAction(event, project.id, 'route.edit')),
+				`project, ${person.name}`
+			).toBe(1);
+			expect(
+				await membershipQueries(() => requireRouteAction(event, route.id, 'route.edit')),
+				`route, ${person.name}`
+			).toBe(1);
+			expect(
+				await membershipQueries(() => requireTeamAction(event, f.team.id, 'route.edit')),
+				`team, ${person.name}`
+			).toBe(1);
+		}
 	});
 });

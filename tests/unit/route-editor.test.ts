@@ -99,7 +99,7 @@ describe('route editor autosave', () => {
 
 	it('on a conflict stops saving, keeps every edit, and can keep them as a copy', async () => {
 		const editor = make();
-		answers = [{ ok: false, status: 409, code: 'version-conflict', message: 'changed' }];
+		answers = [{ ok: false, status: 409, code: 'version_conflict', message: 'changed' }];
 		editor.rename('Mine');
 		await vi.advanceTimersByTimeAsync(1000);
 		expect(editor.saveState).toBe('conflict');
@@ -116,7 +116,7 @@ describe('route editor autosave', () => {
 
 	it('on a conflict can load their version instead', async () => {
 		const editor = make();
-		answers = [{ ok: false, status: 409, code: 'version-conflict', message: 'changed' }];
+		answers = [{ ok: false, status: 409, code: 'version_conflict', message: 'changed' }];
 		editor.rename('Mine');
 		await vi.advanceTimersByTimeAsync(1000);
 		await editor.loadTheirs();
@@ -163,7 +163,7 @@ describe('route editor flush (before the planner reads the stored route)', () =>
 
 	it('reports false on a conflict or a failed save, and true at once with nothing to send', async () => {
 		const conflicted = make();
-		answers = [{ ok: false, status: 409, code: 'version-conflict', message: 'changed' }];
+		answers = [{ ok: false, status: 409, code: 'version_conflict', message: 'changed' }];
 		conflicted.rename('Mine');
 		expect(await conflicted.flush()).toBe(false);
 		const offline = make();

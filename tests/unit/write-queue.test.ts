@@ -81,7 +81,7 @@ describe('lock errors at the API', () => {
 		expect(response.status).toBe(503);
 		expect(response.headers.get('retry-after')).toBe('2');
 		expect((await response.json()).error).toEqual({
-			code: 'database-busy',
+			code: 'database_busy',
 			message: expect.stringContaining('Try again')
 		});
 	});

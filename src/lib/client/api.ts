@@ -1,6 +1,8 @@
 // The one way the browser calls the JSON API: every outcome, network failures included, comes back
 // as a value, so callers branch on it instead of wrapping each call in try/catch.
 
+import { VERSION_CONFLICT, type ApiErrorBody, type VersionConflictDetails } from '$lib/api/errors';
+
 export type ApiFailure = {
 	ok: false;
 	status: number;
@@ -8,7 +10,20 @@ export type ApiFailure = {
 	message: string;
 	details?: unknown;
 };
+/**
+ * The route changed since the version a write was sent against. Told apart here, once, so
+ * callers ask `isVersionConflict` rather than reading statuses or codes themselves.
+ */
+export type VersionConflict = ApiFailure & {
+	status: 409;
+	code: typeof VERSION_CONFLICT;
+	details: VersionConflictDetails;
+};
 export type ApiResult<T> = { ok: true; status: number; data: T } | ApiFailure;
+
+export function isVersionConflict(result: ApiResult<unknown>): result is VersionConflict {
+	return !result.ok && result.status === 409 && result.code === VERSION_CONFLICT;
+}
 
 export async function callApi<T>(
 	url: string,
@@ -35,8 +50,7 @@ export async function callApi<T>(
 	if (response.ok) {
 		return { ok: true, status: response.status, data: body as T };
 	}
-	const error = (body as { error?: { code?: string; message?: string; details?: unknown } } | null)
-		?.error;
+	const error = (body as Partial<ApiErrorBody> | null)?.error;
 	return {
 		ok: false,
 		status: response.status,

@@ -2,30 +2,30 @@
 // message for its failures (a toast) except where the page shows the failure in place: a save
 // conflict (the conflict notice) and an unreadable structure (the field's error).
 
-import type { Analysis } from '$lib/chem/analyze';
+import type {
+	AnalyzeAnswer as Analysis,
+	CheckAnswer,
+	CreatedRouteAnswer,
+	ImportedRouteAnswer,
+	PlanAnswer,
+	RouteAnswer,
+	RulesAnswer,
+	SavedPlanAnswer,
+	SavedRouteAnswer,
+	StepCheck
+} from '$lib/api/answers';
 import type { RouteDocument } from '$lib/route/document';
-import type { CheckAnswer, Clash, StepCheck } from '$lib/rules/check/types';
-import type { CheckedPlanAnswer as PlanAnswer } from '$lib/rules/plan';
-import { callApi, jsonBody, type ApiResult } from './api';
+import { callApi, isVersionConflict, jsonBody, type ApiResult } from './api';
 import type { Toasts } from './toasts.svelte';
 
-// The /api/analyze answer, as the chemistry core defines it (a type only: no chemistry code ships).
-export type { Analysis };
-
-// The check answer as the chemistry core defines it and the endpoints send it (types only).
-export type { Clash, StepCheck };
-export type RouteAnswer = {
-	id: string;
-	projectId: string;
-	name: string;
-	status: string;
-	version: number;
-	document: RouteDocument;
-};
-export type ConditionLabel = { id: string; label: string };
+// The answers as the server defines them (types only: no server or chemistry code ships); the
+// route map's components take them from here.
+export type { Clash } from '$lib/api/answers';
+export type { Analysis, PlanAnswer, RouteAnswer, StepCheck };
+/** A condition class as the route map shows it: `{ id: 'base-aqueous', label: 'Aqueous base' }`. */
+export type ConditionLabel = Pick<RulesAnswer['conditions'][number], 'id' | 'label'>;
 /** Readable names for the rule table's ids: free groups and protecting groups. */
 export type RuleLabels = { groups: Map<string, string>; protectingGroups: Map<string, string> };
-export type { PlanAnswer };
 
 export class RouteClient {
 	constructor(
@@ -37,25 +37,25 @@ export class RouteClient {
 		return this.#call<RouteAnswer>(`/api/routes/${routeId}`, {}, 'The route could not be loaded');
 	}
 
-	/** A 409 is left to the caller (the conflict notice); other failures are toasted. */
+	/** A version conflict is left to the caller (the conflict notice); other failures are toasted. */
 	async save(
 		routeId: string,
 		version: number,
 		document: RouteDocument
-	): Promise<ApiResult<{ version: number }>> {
-		const result = await callApi<{ version: number }>(
+	): Promise<ApiResult<SavedRouteAnswer>> {
+		const result = await callApi<SavedRouteAnswer>(
 			`/api/routes/${routeId}`,
 			jsonBody('PUT', { version, document }),
 			this.fetcher
 		);
-		if (!result.ok && result.status !== 409) {
+		if (!result.ok && !isVersionConflict(result)) {
 			this.toasts.show(`Not saved: ${result.message}`, 'problem');
 		}
 		return result;
 	}
 
 	async create(projectId: string, document: RouteDocument): Promise<string | null> {
-		const result = await this.#call<{ id: string }>(
+		const result = await this.#call<CreatedRouteAnswer>(
 			`/api/projects/${projectId}/routes`,
 			jsonBody('POST', document),
 			'The route could not be created'
@@ -82,22 +82,10 @@ export class RouteClient {
 		);
 	}
 
-	/** Condition classes with their labels, or null until `GET /api/rules` exists (raw ids are shown then). */
+	/** Condition classes with their labels, or null when the rules cannot be read (raw ids are shown then). */
 	async conditionLabels(): Promise<ConditionLabel[] | null> {
-		const result = await callApi<unknown>('/api/rules', {}, this.fetcher);
-		if (!result.ok) {
-			return null;
-		}
-		const body = result.data;
-		const inner =
-			body && typeof body === 'object' && 'conditions' in body
-				? (body as { conditions: unknown }).conditions
-				: body;
-		const list: unknown[] = Array.isArray(inner) ? inner : [];
-		return list.filter((item): item is ConditionLabel => {
-			const candidate = item as Partial<ConditionLabel> | null;
-			return typeof candidate?.id === 'string' && typeof candidate.label === 'string';
-		});
+		const result = await callApi<RulesAnswer>('/api/rules', {}, this.fetcher);
+		return result.ok ? result.data.conditions.map(({ id, label }) => ({ id, label })) : null;
 	}
 
 	/** The ranked plans for the stored route; failures are shown in the plans dialog, not toasted. */
@@ -106,20 +94,21 @@ export class RouteClient {
 	}
 
 	/**
-	 * Saves plan `rank` of the route at `version` as a new route; a 409 (the route changed since
-	 * the plans were made) is left to the caller, which plans again; other failures are toasted.
+	 * Saves plan `rank` of the route at `version` as a new route; a version conflict (the route
+	 * changed since the plans were made) is left to the caller, which plans again; other failures
+	 * are toasted.
 	 */
 	async savePlan(
 		routeId: string,
 		rank: number,
 		version: number
-	): Promise<ApiResult<{ id: string; name: string }>> {
-		const result = await callApi<{ id: string; name: string }>(
+	): Promise<ApiResult<SavedPlanAnswer>> {
+		const result = await callApi<SavedPlanAnswer>(
 			`/api/routes/${routeId}/plan/${rank}/save`,
 			jsonBody('POST', { version }),
 			this.fetcher
 		);
-		if (!result.ok && result.status !== 409) {
+		if (!result.ok && !isVersionConflict(result)) {
 			this.toasts.show(`Plan ${rank} was not saved: ${result.message}`, 'problem');
 		}
 		return result;
@@ -127,11 +116,7 @@ export class RouteClient {
 
 	/** Labels of free groups and protecting groups; null when the rules cannot be read (ids are shown). */
 	async ruleLabels(): Promise<RuleLabels | null> {
-		const result = await callApi<{ groups?: unknown; protectingGroups?: unknown }>(
-			'/api/rules',
-			{},
-			this.fetcher
-		);
+		const result = await callApi<RulesAnswer>('/api/rules', {}, this.fetcher);
 		if (!result.ok) {
 			return null;
 		}
@@ -144,7 +129,7 @@ export class RouteClient {
 	async importFile(projectId: string, file: File): Promise<string | null> {
 		const form = new FormData();
 		form.set('file', file);
-		const result = await this.#call<{ id: string }>(
+		const result = await this.#call<ImportedRouteAnswer>(
 			`/api/projects/${projectId}/routes/import`,
 			{ method: 'POST', body: form },
 			`“${file.name}” was not imported`
@@ -161,14 +146,8 @@ export class RouteClient {
 	}
 }
 
-function labelMap(list: unknown): Map<string, string> {
-	const rows: unknown[] = Array.isArray(list) ? list : [];
+function labelMap(rows: readonly { id: string; label?: unknown }[]): Map<string, string> {
 	return new Map(
-		rows.flatMap((row) => {
-			const item = row as Partial<ConditionLabel> | null;
-			return typeof item?.id === 'string' && typeof item.label === 'string'
-				? [[item.id, item.label] as const]
-				: [];
-		})
+		rows.flatMap((row) => (typeof row.label === 'string' ? [[row.id, row.label] as const] : []))
 	);
 }

@@ -1,9 +1,9 @@
 import { error, isHttpError, json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
+import type { ApiErrorBody } from '../api/errors';
 import { DatabaseBusy, isDatabaseBusy } from './db/write-queue';
 
-/** The one error shape every `/api` response uses: `{ error: { code, message, details? } }`. */
-export type ApiErrorBody = { error: { code: string; message: string; details?: unknown } };
+export type { ApiErrorBody };
 
 const CODES_BY_STATUS: Record<number, string> = {
 	400: 'bad_request',
@@ -95,7 +95,7 @@ export function apiHandler<E extends RequestEvent = RequestEvent>(
 /** The last resort when a write could not get the lock: 503 with retry-after, never a 500. */
 function databaseBusy(): Response {
 	const busy = new DatabaseBusy();
-	const response = apiError(503, 'database-busy', busy.message);
+	const response = apiError(503, 'database_busy', busy.message);
 	response.headers.set('retry-after', String(busy.retryAfterSeconds));
 	return response;
 }

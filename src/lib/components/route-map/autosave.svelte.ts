@@ -1,6 +1,7 @@
 // Autosave of one route: a quiet moment after each edit the document goes to the server with the
 // version it was based on. A version conflict stops saving until the chemist decides.
 
+import { isVersionConflict } from '$lib/client/api';
 import type { RouteClient } from '$lib/client/route-client';
 import type { RouteDocument } from '$lib/route/document';
 
@@ -94,7 +95,7 @@ export class Autosave {
 			this.#state = 'saved';
 			this.options.onsaved();
 			this.schedule();
-		} else if (result.status === 409) {
+		} else if (isVersionConflict(result)) {
 			this.#state = 'conflict';
 		} else {
 			this.#state = 'failed';

@@ -1,6 +1,7 @@
 // The "Plan protection" dialog's state: ask the server for ranked plans of the stored route (after
 // saving what is on the page, so the plans match the map) and save a chosen plan as a new route.
 
+import { isVersionConflict } from '$lib/client/api';
 import type { PlanAnswer, RouteClient, RuleLabels } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteEditor } from './route-editor.svelte';
@@ -79,7 +80,7 @@ export class ProtectionPlans {
 			this.toasts.show(`Plan ${rank} is saved as “${result.data.name}”.`, 'success');
 			return result.data.id;
 		}
-		if (result.status === 409) {
+		if (isVersionConflict(result)) {
 			this.#view = {
 				status: 'failed',
 				message:

@@ -1,7 +1,6 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { can, ROLE_LABELS, type Action, type Role } from '../../policy';
 import { paths } from '../../paths';
-import { isUuid } from '../../uuid';
 import { dbReady, Membership, Project, Route } from '../db';
 import type { SessionUser } from './credentials';
 
@@ -71,10 +70,17 @@ const ACTION_PHRASES: Record<Action, string> = {
 
 /** Passes when the user is in the team with a role that grants the action. */
 export async function requireTeamAction(event: GuardEvent, teamId: string, action: Action) {
-	const user = requireUser(event);
+	return authorize(requireUser(event), teamId, action, 'That team');
+}
+
+/**
+ * The one membership query of a guarded request: no role → 404 naming `what` (the team, or the
+ * project or route reached through it), a role without the grant → 403.
+ */
+async function authorize(user: SessionUser, teamId: string, action: Action, what: string) {
 	const role = await roleIn(user.id, teamId);
 	if (!role) {
-		notFound('That team');
+		notFound(what);
 	}
 	if (!can(role, action)) {
 		error(403, {
@@ -85,15 +91,18 @@ export async function requireTeamAction(event: GuardEvent, teamId: string, actio
 	return { user, role };
 }
 
+// Ids reach these guards from route parameters the `uuid` matcher has already checked (src/params),
+// or from forms and bodies whose schema or reader checks them; a non-uuid never gets this far.
+
 /** Loads a project and checks the action against the role in the project's team. */
 export async function requireProjectAction(event: GuardEvent, projectId: string, action: Action) {
 	const user = requireUser(event);
 	await dbReady();
-	const project = isUuid(projectId) ? await Project.findByPk(projectId) : null;
-	if (!project || !(await roleIn(user.id, project.teamId))) {
+	const project = await Project.findByPk(projectId);
+	if (!project) {
 		notFound('That project');
 	}
-	const { role } = await requireTeamAction(event, project.teamId, action);
+	const { role } = await authorize(user, project.teamId, action, 'That project');
 	return { user, role, project };
 }
 
@@ -101,12 +110,10 @@ export async function requireProjectAction(event: GuardEvent, projectId: string,
 export async function requireRouteAction(event: GuardEvent, routeId: string, action: Action) {
 	const user = requireUser(event);
 	await dbReady();
-	const route = isUuid(routeId)
-		? await Route.findByPk(routeId, { include: [{ model: Project, as: 'project' }] })
-		: null;
-	if (!route?.project || !(await roleIn(user.id, route.project.teamId))) {
+	const route = await Route.findByPk(routeId, { include: [{ model: Project, as: 'project' }] });
+	if (!route?.project) {
 		notFound('That route');
 	}
-	const { role } = await requireTeamAction(event, route.project.teamId, action);
+	const { role } = await authorize(user, route.project.teamId, action, 'That route');
 	return { user, role, route, project: route.project };
 }

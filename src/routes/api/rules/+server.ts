@@ -1,5 +1,6 @@
 import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
+import type { RulesAnswer } from '$lib/api/answers';
 import { apiHandler } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
 import { perceptionRules } from '$lib/chem/patterns';
@@ -17,5 +18,5 @@ export const GET: RequestHandler = apiHandler(async (event) => {
 		...row,
 		stability: table.ratingsOf(row.id)
 	}));
-	return json({ conditions: table.conditions, protectingGroups, groups });
+	return json({ conditions: table.conditions, protectingGroups, groups } satisfies RulesAnswer);
 });

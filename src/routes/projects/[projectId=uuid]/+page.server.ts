@@ -4,6 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import type { Actions, PageServerLoad } from './$types';
 import { can } from '$lib/policy';
 import { paths } from '$lib/paths';
+import { isUuid } from '$lib/uuid';
 import { notFound, requireProjectAction, requireRouteAction } from '$lib/server/auth/guards';
 import {
 	createRoute,
@@ -115,6 +116,10 @@ export const actions: Actions = {
 /** The route a row action names, refused unless it belongs to this page's project. */
 async function routeOfThisProject(event: RequestEvent<{ projectId: string }>) {
 	const routeId = String((await event.request.formData()).get('routeId') ?? '');
+	// A form field, not a path segment: no matcher has checked it (PostgreSQL refuses non-uuids).
+	if (!isUuid(routeId)) {
+		notFound('That route');
+	}
 	const found = await requireRouteAction(event, routeId, 'route.edit');
 	if (found.route.projectId !== event.params.projectId) {
 		notFound('That route');

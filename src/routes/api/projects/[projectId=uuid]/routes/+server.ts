@@ -1,6 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
+import type { CreatedRouteAnswer, RouteListAnswer } from '$lib/api/answers';
 import { apiHandler, readJson } from '$lib/server/api';
 import { requireProjectAction } from '$lib/server/auth/guards';
 import { routeDocumentOr422 } from '$lib/server/route-api';
@@ -10,7 +11,7 @@ import { createRoute, listRoutes } from '$lib/server/services/routes';
 export const GET: RequestHandler = apiHandler(async (event) => {
 	const { project } = await requireProjectAction(event, event.params.projectId, 'project.read');
 	const routes = await listRoutes(project.id);
-	return json({
+	const answer: RouteListAnswer = {
 		routes: routes.map(({ id, name, status, version, updatedAt }) => ({
 			id,
 			name,
@@ -18,7 +19,8 @@ export const GET: RequestHandler = apiHandler(async (event) => {
 			version,
 			updatedAt
 		}))
-	});
+	};
+	return json(answer);
 });
 
 /** `POST /api/projects/{projectId}/routes` (route document) → `201 { id, version }`. */
@@ -26,5 +28,6 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	const { project, user } = await requireProjectAction(event, event.params.projectId, 'route.edit');
 	const document = routeDocumentOr422(await readJson(event, z.unknown()));
 	const route = await createRoute(user, project, document);
-	return json({ id: route.id, version: route.version }, { status: 201 });
+	const created: CreatedRouteAnswer = { id: route.id, version: route.version };
+	return json(created, { status: 201 });
 });

@@ -1,5 +1,6 @@
 import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
+import type { ImportedRouteAnswer } from '$lib/api/answers';
 import { apiError, apiHandler } from '$lib/server/api';
 import { requireProjectAction } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
@@ -62,7 +63,8 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	// (`invalid_import`, or `structure_too_large` naming the record) with nothing stored.
 	const document = await runChemistry(kind === 'json' ? 'importJson' : 'importSdf', { text, name });
 	const route = await createRoute(user, project, given ? { ...document, name } : document);
-	return json({ id: route.id }, { status: 201 });
+	const imported: ImportedRouteAnswer = { id: route.id };
+	return json(imported, { status: 201 });
 });
 
 function tooLarge() {

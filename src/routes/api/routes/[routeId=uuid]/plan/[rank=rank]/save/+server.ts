@@ -1,11 +1,12 @@
 import { error, json } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
+import type { SavedPlanAnswer } from '$lib/api/answers';
+import { VERSION_CONFLICT, type VersionConflictDetails } from '$lib/api/errors';
 import { apiError, apiHandler, readJson } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
-import { isPlanRank } from '$lib/route/plan-rank';
 import {
 	createRoute,
 	plannedRouteName,
@@ -32,19 +33,9 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		event.params.routeId,
 		'route.edit'
 	);
-	// The matcher already refuses other ranks; checked again so no call can plan for nothing.
-	if (!isPlanRank(event.params.rank)) {
-		noSuchPlan(event.params.rank, 'Plans are numbered 1, 2, 3 ….');
-	}
+	// The `rank` matcher has already answered 404 for anything that cannot name a plan.
 	const rank = Number(event.params.rank);
 	const { version } = await readJson(event, body);
-	// A rank that cannot name a plan is answered before any planning work.
-	if (rank === null) {
-		error(404, {
-			code: 'no_such_plan',
-			message: `There is no plan “${event.params.rank}”: plans are numbered 1, 2, 3, …`
-		});
-	}
 	let stored;
 	try {
 		stored = await routeDocumentAt(route, version);
@@ -52,11 +43,12 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		if (!(caught instanceof VersionConflict)) {
 			throw caught;
 		}
+		const details: VersionConflictDetails = { currentVersion: caught.currentVersion };
 		return apiError(
 			409,
-			'version-conflict',
+			VERSION_CONFLICT,
 			`The route has changed since these plans were made (now at version ${caught.currentVersion}). Plan again.`,
-			{ currentVersion: caught.currentVersion }
+			details
 		);
 	}
 	const answer = await runChemistry('plan', { document: routeDocumentOr422(stored) });
@@ -72,5 +64,6 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		name: plannedRouteName(route.name, plan.rank)
 	});
 	const created = await createRoute(user, project, document, { from: route, rank: plan.rank });
-	return json({ id: created.id, version: created.version, name: created.name }, { status: 201 });
+	const saved: SavedPlanAnswer = { id: created.id, version: created.version, name: created.name };
+	return json(saved, { status: 201 });
 });
