@@ -40,13 +40,13 @@ const client = {
 		}
 	})),
 	check: vi.fn(async () => 'unavailable' as const),
-	analyze: vi.fn(),
-	conditionLabels: vi.fn(async () => null)
+	analyze: vi.fn()
 };
+const labels = { conditions: [], groups: new Map(), protectingGroups: new Map() };
 
 const make = (canEdit = true) =>
 	new RouteEditor(
-		{ routeId: 'r', projectId: 'p', version: 1, document: doc, canEdit, analyses: {} },
+		{ routeId: 'r', projectId: 'p', version: 1, document: doc, canEdit, analyses: {}, labels },
 		client as unknown as RouteClient,
 		new Toasts()
 	);

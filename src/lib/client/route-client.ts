@@ -85,24 +85,6 @@ export class RouteClient {
 		);
 	}
 
-	/** Condition classes with their labels, or null until `GET /api/rules` exists (raw ids are shown then). */
-	async conditionLabels(): Promise<ConditionLabel[] | null> {
-		const result = await callApi<unknown>('/api/rules', {}, this.fetcher);
-		if (!result.ok) {
-			return null;
-		}
-		const body = result.data;
-		const inner =
-			body && typeof body === 'object' && 'conditions' in body
-				? (body as { conditions: unknown }).conditions
-				: body;
-		const list: unknown[] = Array.isArray(inner) ? inner : [];
-		return list.filter((item): item is ConditionLabel => {
-			const candidate = item as Partial<ConditionLabel> | null;
-			return typeof candidate?.id === 'string' && typeof candidate.label === 'string';
-		});
-	}
-
 	/** The ranked plans for the stored route; failures are shown in the plans dialog, not toasted. */
 	plan(routeId: string): Promise<ApiResult<PlanAnswer>> {
 		return callApi<PlanAnswer>(`/api/routes/${routeId}/plan`, { method: 'POST' }, this.fetcher);
@@ -128,22 +110,6 @@ export class RouteClient {
 		return result;
 	}
 
-	/** Labels of free groups and protecting groups; null when the rules cannot be read (ids are shown). */
-	async ruleLabels(): Promise<RuleLabels | null> {
-		const result = await callApi<{ groups?: unknown; protectingGroups?: unknown }>(
-			'/api/rules',
-			{},
-			this.fetcher
-		);
-		if (!result.ok) {
-			return null;
-		}
-		return {
-			groups: labelMap(result.data.groups),
-			protectingGroups: labelMap(result.data.protectingGroups)
-		};
-	}
-
 	async importFile(projectId: string, file: File): Promise<string | null> {
 		const form = new FormData();
 		form.set('file', file);
@@ -162,16 +128,4 @@ export class RouteClient {
 		}
 		return result;
 	}
-}
-
-function labelMap(list: unknown): Map<string, string> {
-	const rows: unknown[] = Array.isArray(list) ? list : [];
-	return new Map(
-		rows.flatMap((row) => {
-			const item = row as Partial<ConditionLabel> | null;
-			return typeof item?.id === 'string' && typeof item.label === 'string'
-				? [[item.id, item.label] as const]
-				: [];
-		})
-	);
 }

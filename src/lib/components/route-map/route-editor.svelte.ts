@@ -4,7 +4,13 @@
 
 import { SvelteMap } from 'svelte/reactivity';
 import type { RouteDocument } from '$lib/route/document';
-import type { Analysis, ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
+import type {
+	Analysis,
+	ConditionLabel,
+	RouteClient,
+	RuleLabels,
+	StepCheck
+} from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
 import * as ops from './document-ops';
 import { heavyAtomCount, substrateHighlight } from './step-view';
@@ -29,6 +35,8 @@ type Init = {
 	document: RouteDocument;
 	canEdit: boolean;
 	analyses: Record<string, Analysis>;
+	/** Names for rule-table ids, sent with the page load (so no download of the rule table). */
+	labels: RuleLabels & { conditions: ConditionLabel[] };
 };
 
 export class RouteEditor {
@@ -41,7 +49,8 @@ export class RouteEditor {
 	#failure = $state('');
 	#check = $state.raw<CheckState>(null);
 	#selection = $state.raw<Selection>(null);
-	#labels = $state.raw<ConditionLabel[] | null>(null);
+	readonly ruleLabels: RuleLabels;
+	readonly conditionLabels: ConditionLabel[];
 	#undo = $state.raw<RouteDocument[]>([]);
 	#analyses = new SvelteMap<string, AnalysisState>();
 	#savedDoc: RouteDocument;
@@ -57,6 +66,8 @@ export class RouteEditor {
 		this.routeId = init.routeId;
 		this.projectId = init.projectId;
 		this.canEdit = init.canEdit;
+		this.conditionLabels = init.labels.conditions;
+		this.ruleLabels = init.labels;
 		this.#doc = init.document;
 		this.#savedDoc = init.document;
 		this.#version = init.version;
@@ -83,9 +94,6 @@ export class RouteEditor {
 	get selection() {
 		return this.#selection;
 	}
-	get conditionLabels() {
-		return this.#labels;
-	}
 	get canUndo() {
 		return this.canEdit && this.#undo.length > 0;
 	}
@@ -93,10 +101,9 @@ export class RouteEditor {
 		return this.#saveState !== 'saved';
 	}
 
-	/** First data after the page mounts: the check, condition labels, and a layout for unplaced nodes. */
+	/** First data after the page mounts: the check and a layout for unplaced nodes. */
 	async start() {
 		void this.refreshCheck();
-		void this.client.conditionLabels().then((labels) => (this.#labels = labels));
 		if (this.#doc.intermediates.some((node) => !node.position)) {
 			// A view-only change: it is saved with the next real edit, and viewers can lay out too.
 			const laid = ops.movePositions(this.#doc, await ops.layoutPositions(this.#doc));
