@@ -3,6 +3,8 @@
 import { createInterface } from 'node:readline/promises';
 import { parseArgs } from 'node:util';
 import { loadDotEnv, resolveEnvironment } from './environment.js';
+import { FIELD_LIMITS } from '../src/lib/schemas/limits';
+import { chosenPassword } from '../src/lib/schemas/password';
 
 const { values } = parseArgs({
 	options: {
@@ -24,11 +26,21 @@ const teamName = values.team ?? (await ask.question('Team name: '));
 const password =
 	values.password ??
 	process.env.ORTHOGON_PASSWORD ??
-	(await ask.question('Password (10+ characters): '));
+	(await ask.question(`Password (${FIELD_LIMITS.password.min}+ characters): `));
 ask.close();
 
-if (password.length < 10) {
-	console.error('The password needs at least 10 characters.');
+// The same limits as the sign-up and account forms (src/lib/schemas/limits.ts).
+const problems = [
+	...(chosenPassword.safeParse(password).error?.issues ?? []).map((i) => `Password: ${i.message}`),
+	...(name.length > FIELD_LIMITS.personName.max
+		? [`Name: keep it to ${FIELD_LIMITS.personName.max} characters.`]
+		: []),
+	...(teamName.length > FIELD_LIMITS.teamName.max
+		? [`Team name: keep it to ${FIELD_LIMITS.teamName.max} characters.`]
+		: [])
+];
+if (problems.length > 0) {
+	console.error(problems.join('\n'));
 	process.exit(1);
 }
 const { team, user } = await createTeamWithLead({ teamName, email, name, password });

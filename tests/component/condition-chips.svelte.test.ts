@@ -3,11 +3,12 @@ import { describe, expect, it } from 'vitest';
 import ConditionChips from '$lib/components/route-map/ConditionChips.svelte';
 import type { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
 import type { RouteStep } from '$lib/route/document';
+import type { ConditionLabel } from '$lib/client/route-client';
 import { makeEditor, routeDoc, renderWithEditor } from './route-editor-fixture';
 
 const step: RouteStep = { ...routeDoc.steps[0]!, conditions: ['organometallic'] };
 const document = { ...routeDoc, steps: [step] };
-const labels = [
+const labels: ConditionLabel[] = [
 	{ id: 'organometallic', label: 'Organometallic reagents' },
 	{ id: 'acid-mild', label: 'Mild acid' }
 ];

@@ -46,11 +46,19 @@ export async function makeEditor({
 	const client = {
 		save: vi.fn(async () => ({ ok: true, status: 200, data: { version: 2 } })),
 		check: vi.fn(async () => (checks ? new Map(checks.map((c) => [c.id, c])) : null)),
-		analyze: vi.fn(async () => ({ ok: false, status: 400, code: 'x', message: 'not in tests' })),
-		conditionLabels: vi.fn(async () => labels)
+		analyze: vi.fn(async () => ({ ok: false, status: 400, code: 'x', message: 'not in tests' }))
 	};
 	const editor = new RouteEditor(
-		{ routeId: 'r', projectId: 'p', version: 1, document, canEdit, analyses: {} },
+		{
+			routeId: 'r',
+			projectId: 'p',
+			version: 1,
+			document,
+			canEdit,
+			analyses: {},
+			// The page load sends the labels; none in a test that does not name them.
+			labels: { conditions: labels ?? [], groups: new Map(), protectingGroups: new Map() }
+		},
 		client as unknown as RouteClient,
 		new Toasts()
 	);

@@ -91,17 +91,4 @@ describe('a step the server could not check', () => {
 	});
 });
 
-describe('the rule labels', () => {
-	it('reads condition, group and PG labels from the rules answer, skipping rows without one', async () => {
-		const body = {
-			conditions: [{ id: 'base-aqueous', label: 'Aqueous base', broad: true }],
-			groups: [{ id: 'ketone', label: 'ketone', smarts: 'C(=O)' }],
-			protectingGroups: [{ id: 'TBS', label: 'TBS ether' }, { id: 'Bn' }]
-		};
-		const client = new RouteClient(new Toasts(), answering(200, body));
-		expect(await client.conditionLabels()).toEqual([{ id: 'base-aqueous', label: 'Aqueous base' }]);
-		const labels = await client.ruleLabels();
-		expect(labels?.groups.get('ketone')).toBe('ketone');
-		expect([...(labels?.protectingGroups ?? [])]).toEqual([['TBS', 'TBS ether']]);
-	});
-});
+describe('the rule labels', () => {});

@@ -41,13 +41,13 @@ const client = {
 		}
 	})),
 	check: vi.fn(async () => null),
-	analyze: vi.fn(),
-	conditionLabels: vi.fn(async () => null)
+	analyze: vi.fn()
 };
+const labels = { conditions: [], groups: new Map(), protectingGroups: new Map() };
 
 const make = (canEdit = true) =>
 	new RouteEditor(
-		{ routeId: 'r', projectId: 'p', version: 1, document: doc, canEdit, analyses: {} },
+		{ routeId: 'r', projectId: 'p', version: 1, document: doc, canEdit, analyses: {}, labels },
 		client as unknown as RouteClient,
 		new Toasts()
 	);

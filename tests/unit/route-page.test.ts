@@ -108,3 +108,21 @@ describe('the route map page load', () => {
 		expect(isRedirect(visitor) && visitor.location).toMatch(/^\/signin\?redirectTo=/);
 	});
 });
+
+describe('the route map labels sent with the page load (instead of two downloads of /api/rules)', () => {
+	it('names condition classes, free groups and protecting groups as the rule files do', async () => {
+		const { labels } = (await open('viewer')) as {
+			labels: {
+				conditions: { id: string; label: string }[];
+				groups: Map<string, string>;
+				protectingGroups: Map<string, string>;
+			};
+		};
+		// rules/conditions.json, rules/groups.json and rules/protecting-groups.json.
+		expect(labels.conditions).toContainEqual({ id: 'acid-strong', label: 'Strong acid' });
+		expect(labels.groups.get('ester')).toBe('carboxylic ester');
+		expect(labels.protectingGroups.get('TBS')).toMatch(/silyl/i);
+		// Only the names: none of the ratings, descriptions or patterns the rule table holds.
+		expect(Object.keys(labels.conditions[0]!).sort()).toEqual(['id', 'label']);
+	});
+});

@@ -82,12 +82,6 @@ export class RouteClient {
 		);
 	}
 
-	/** Condition classes with their labels, or null when the rules cannot be read (raw ids are shown then). */
-	async conditionLabels(): Promise<ConditionLabel[] | null> {
-		const result = await callApi<RulesAnswer>('/api/rules', {}, this.fetcher);
-		return result.ok ? result.data.conditions.map(({ id, label }) => ({ id, label })) : null;
-	}
-
 	/** The ranked plans for the stored route; failures are shown in the plans dialog, not toasted. */
 	plan(routeId: string): Promise<ApiResult<PlanAnswer>> {
 		return callApi<PlanAnswer>(`/api/routes/${routeId}/plan`, { method: 'POST' }, this.fetcher);
@@ -114,18 +108,6 @@ export class RouteClient {
 		return result;
 	}
 
-	/** Labels of free groups and protecting groups; null when the rules cannot be read (ids are shown). */
-	async ruleLabels(): Promise<RuleLabels | null> {
-		const result = await callApi<RulesAnswer>('/api/rules', {}, this.fetcher);
-		if (!result.ok) {
-			return null;
-		}
-		return {
-			groups: labelMap(result.data.groups),
-			protectingGroups: labelMap(result.data.protectingGroups)
-		};
-	}
-
 	async importFile(projectId: string, file: File): Promise<string | null> {
 		const form = new FormData();
 		form.set('file', file);
@@ -144,10 +126,4 @@ export class RouteClient {
 		}
 		return result;
 	}
-}
-
-function labelMap(rows: readonly { id: string; label?: unknown }[]): Map<string, string> {
-	return new Map(
-		rows.flatMap((row) => (typeof row.label === 'string' ? [[row.id, row.label] as const] : []))
-	);
 }

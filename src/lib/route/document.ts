@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { STRUCTURE_LIMITS } from '../chem/limits';
+import { FIELD_LIMITS } from '../schemas/limits';
 import { text } from '../schemas/text';
 import { MAX_MATERIALS, materialInput, waterRemovalInput } from '../quantities/contract';
 
@@ -20,7 +21,7 @@ export type StepIntent = (typeof STEP_INTENTS)[number];
 
 export const intermediateSchema = z.object({
 	id: clientId,
-	label: text().trim().max(120).optional(),
+	label: text().trim().max(FIELD_LIMITS.intermediateLabel.max).optional(),
 	structure: text().max(MAX_STRUCTURE_CHARS, 'A structure is limited to 1 MB of text.'),
 	position: z.object({ x: z.number().finite(), y: z.number().finite() }).optional()
 });
@@ -29,9 +30,9 @@ export const stepSchema = z.object({
 	id: clientId,
 	from: z.array(clientId).min(1, 'A step needs at least one starting intermediate.').max(8),
 	to: clientId,
-	reagents: text().max(2000).optional(),
+	reagents: text().max(FIELD_LIMITS.stepReagents.max).optional(),
 	conditions: z.array(text().max(64)).max(30).optional(),
-	notes: text().max(10_000).optional(),
+	notes: text().max(FIELD_LIMITS.stepNotes.max).optional(),
 	intent: z.enum(STEP_INTENTS).optional(),
 	/** What is weighed out for the step (src/lib/quantities/contract.ts). */
 	quantities: z.array(materialInput).max(MAX_MATERIALS).optional(),
@@ -39,8 +40,14 @@ export const stepSchema = z.object({
 	waterRemoval: waterRemovalInput.optional()
 });
 
+/** A route's name, as the route document, the new-route form and the API all take it. */
+export const routeName = text()
+	.trim()
+	.min(FIELD_LIMITS.routeName.min, 'Give the route a name.')
+	.max(FIELD_LIMITS.routeName.max, `Keep the name to ${FIELD_LIMITS.routeName.max} characters.`);
+
 export const routeDocumentShape = z.object({
-	name: text().trim().min(1, 'Give the route a name.').max(120),
+	name: routeName,
 	intermediates: z.array(intermediateSchema).max(MAX_ROUTE_NODES),
 	steps: z.array(stepSchema).max(MAX_ROUTE_NODES)
 });

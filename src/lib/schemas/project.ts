@@ -1,14 +1,17 @@
 import { z } from 'zod';
+import { FIELD_LIMITS } from './limits';
 import { text } from './text';
+
+const { projectName: NAME, projectDescription: DESCRIPTION } = FIELD_LIMITS;
 
 export const projectName = text()
 	.trim()
-	.min(2, 'Give the project a name of at least 2 characters.')
-	.max(120, 'Keep the name under 120 characters.');
+	.min(NAME.min, `Give the project a name of at least ${NAME.min} characters.`)
+	.max(NAME.max, `Keep the name to ${NAME.max} characters.`);
 
 export const projectDescription = text()
 	.trim()
-	.max(4000, 'Keep the target description under 4000 characters.');
+	.max(DESCRIPTION.max, `Keep the target description to ${DESCRIPTION.max} characters.`);
 
 /** A new project, as the page form and `POST /api/projects` both take it. */
 export const newProjectSchema = z.object({

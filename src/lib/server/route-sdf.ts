@@ -2,6 +2,7 @@
 // intermediate, in route order, with the incoming step carried as data fields. The route document
 // stays the lossless form; SDF keeps what a flat list of molecules can hold.
 
+import { FIELD_LIMITS } from '../schemas/limits';
 import { detectFormat, isStructureError, readStructure, splitSdf } from '../chem';
 import {
 	STEP_INTENTS,
@@ -172,7 +173,10 @@ export function routeFromSdf(text: string, name: string): RouteDocument {
 		}
 		seen.set(id, n);
 		const title = record.molfile.split('\n')[0]?.trim();
-		const label = (fields.label ?? (title && title !== id ? title : undefined))?.slice(0, 120);
+		const label = (fields.label ?? (title && title !== id ? title : undefined))?.slice(
+			0,
+			FIELD_LIMITS.intermediateLabel.max
+		);
 		intermediates.push({ id, ...(label ? { label } : {}), structure: record.molfile });
 		if (index === 0 || fields.from?.trim().toLowerCase() === NO_STEP) {
 			return;

@@ -1,15 +1,22 @@
 import { z } from 'zod';
-import { MIN_PASSWORD_LENGTH } from '$lib/schemas/password';
+import { FIELD_LIMITS } from '$lib/schemas/limits';
+import { chosenPassword } from '$lib/schemas/password';
 import { text } from '$lib/schemas/text';
 
 export const createTokenSchema = z.object({
-	label: text().trim().min(2, 'Name the token after what will use it.').max(80)
+	label: text()
+		.trim()
+		.min(FIELD_LIMITS.tokenLabel.min, 'Name the token after what will use it.')
+		.max(
+			FIELD_LIMITS.tokenLabel.max,
+			`Keep the label to ${FIELD_LIMITS.tokenLabel.max} characters.`
+		)
 });
 
 export const changePasswordSchema = z
 	.object({
 		current: z.string().min(1, 'Enter your current password.'),
-		next: z.string().min(MIN_PASSWORD_LENGTH, `Use at least ${MIN_PASSWORD_LENGTH} characters.`),
+		next: chosenPassword,
 		confirm: z.string(),
 		// An unticked checkbox sends nothing, so absent means false here; the page ticks it at first
 		// (see changePasswordDefaults).

@@ -2,7 +2,7 @@
 // saving what is on the page, so the plans match the map) and save a chosen plan as a new route.
 
 import { isVersionConflict } from '$lib/client/api';
-import type { PlanAnswer, RouteClient, RuleLabels } from '$lib/client/route-client';
+import type { PlanAnswer, RouteClient } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteEditor } from './route-editor.svelte';
 
@@ -16,7 +16,6 @@ export type PlansView =
 export class ProtectionPlans {
 	#view = $state.raw<PlansView>({ status: 'closed' });
 	#saving = $state<number | null>(null);
-	#labels = $state.raw<RuleLabels | null>(null);
 	// Each opening gets a number, so an answer that arrives after a close or a newer opening is dropped.
 	#request = 0;
 
@@ -36,16 +35,14 @@ export class ProtectionPlans {
 	get saving() {
 		return this.#saving;
 	}
+	/** Group and protecting-group names, which came with the page. */
 	get labels() {
-		return this.#labels;
+		return this.editor.ruleLabels;
 	}
 
 	async open() {
 		const request = ++this.#request;
 		this.#view = { status: 'loading' };
-		if (!this.#labels) {
-			void this.client.ruleLabels().then((labels) => (this.#labels = labels));
-		}
 		if (!(await this.editor.flush())) {
 			if (request === this.#request) {
 				this.#view = { status: 'failed', message: this.#unsaved() };

@@ -3,7 +3,7 @@
 // and the clash check (clash-check). Components read it and change the route only through its
 // methods, which replace the document (never mutate it) so undo and autosave see every edit.
 
-import type { Analysis, ConditionLabel, RouteClient } from '$lib/client/route-client';
+import type { Analysis, ConditionLabel, RouteClient, RuleLabels } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
 import { Autosave } from './autosave.svelte';
@@ -23,6 +23,8 @@ type Init = {
 	document: RouteDocument;
 	canEdit: boolean;
 	analyses: Record<string, Analysis>;
+	/** Names for rule-table ids, sent with the page load (so no download of the rule table). */
+	labels: RuleLabels & { conditions: ConditionLabel[] };
 };
 
 export class RouteEditor {
@@ -33,7 +35,8 @@ export class RouteEditor {
 	readonly autosave: Autosave;
 	readonly structures: StructureDrawings;
 	readonly check: ClashCheck;
-	#labels = $state.raw<ConditionLabel[] | null>(null);
+	readonly ruleLabels: RuleLabels;
+	readonly conditionLabels: ConditionLabel[];
 
 	constructor(
 		init: Init,
@@ -43,6 +46,8 @@ export class RouteEditor {
 		this.routeId = init.routeId;
 		this.projectId = init.projectId;
 		this.canEdit = init.canEdit;
+		this.conditionLabels = init.labels.conditions;
+		this.ruleLabels = init.labels;
 		this.document = new UndoableDocument(init.document, () => this.autosave.schedule());
 		this.check = new ClashCheck(init.routeId, client);
 		this.autosave = new Autosave(
@@ -73,9 +78,6 @@ export class RouteEditor {
 	get failure() {
 		return this.autosave.failure;
 	}
-	get conditionLabels() {
-		return this.#labels;
-	}
 	get canUndo() {
 		return this.canEdit && this.document.canUndo;
 	}
@@ -83,10 +85,9 @@ export class RouteEditor {
 		return this.saveState !== 'saved';
 	}
 
-	/** First data after the page mounts: the check, condition labels, and a layout for unplaced nodes. */
+	/** First data after the page mounts: the check and a layout for unplaced nodes. */
 	async start() {
 		void this.check.refresh();
-		void this.client.conditionLabels().then((labels) => (this.#labels = labels));
 		const before = this.doc;
 		if (before.intermediates.some((node) => !node.position)) {
 			// A view-only change: it is saved with the next real edit, and viewers can lay out too.

@@ -4,6 +4,7 @@
 // a convergent route get their own protection steps before the step that joins them.
 
 import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/document';
+import { FIELD_LIMITS, withSuffix } from '../../schemas/limits';
 import { protectedStructure } from './draw';
 import { installsBefore } from './exposure';
 import { installKey } from './conflict';
@@ -39,7 +40,9 @@ export function drawRoute(
 	const labelAt = (node: RouteIntermediate, active: number[]) => {
 		const base = node.label ?? node.id;
 		const pgs = [...new Set(active.map((x) => options[x]!.pg))];
-		return (pgs.length ? `${base} (with ${pgs.join(', ')})` : base).slice(0, 120);
+		const max = FIELD_LIMITS.intermediateLabel.max;
+		// The base is cut, not the list: the protecting groups are what the label is for.
+		return pgs.length ? withSuffix(base, ` (with ${pgs.join(', ')})`, max) : base.slice(0, max);
 	};
 	const structureAt = (node: string, active: number[]) =>
 		protectedStructure(
@@ -160,7 +163,7 @@ export function drawRoute(
 	const loose = doc.intermediates.filter((n) => !tree.next.has(n.id) && !tree.made.has(n.id));
 	return {
 		route: {
-			name: `${doc.name} (protected)`.slice(0, 120),
+			name: withSuffix(doc.name, ' (protected)', FIELD_LIMITS.routeName.max),
 			intermediates: [...intermediates, ...loose],
 			steps
 		},

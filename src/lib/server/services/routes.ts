@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { RouteDocument } from '../../route/document';
+import { FIELD_LIMITS, withSuffix } from '../../schemas/limits';
 import type { SessionUser } from '../../types';
 import { dbReady, Intermediate, PlannedRoute, Project, Route, Step } from '../db';
 import { assertRouteWithinLimits } from '../route-limits';
@@ -146,10 +147,9 @@ export async function createRoute(
 	});
 }
 
-/** The name of a route saved from plan `rank`, cut so the suffix fits in 120 characters. */
+/** The name of a route saved from plan `rank`, cut so the suffix fits in a route name. */
 export function plannedRouteName(name: string, rank: number): string {
-	const suffix = ` (protected, plan ${rank})`;
-	return `${name.slice(0, 120 - suffix.length).trimEnd()}${suffix}`;
+	return withSuffix(name, ` (protected, plan ${rank})`, FIELD_LIMITS.routeName.max);
 }
 
 export type RouteLink = { id: string; name: string; rank: number };
@@ -294,6 +294,6 @@ export async function duplicateRoute(
 	route: Route
 ): Promise<Route> {
 	const doc = await routeDocument(route);
-	// Names are capped at 120 characters; the suffix must still fit.
-	return createRoute(actor, project, { ...doc, name: `${doc.name.slice(0, 112)} (copy)` });
+	const name = withSuffix(doc.name, ' (copy)', FIELD_LIMITS.routeName.max);
+	return createRoute(actor, project, { ...doc, name });
 }

@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { text } from '$lib/schemas/text';
 import { projectDescription, projectName } from '$lib/schemas/project';
+import { routeName } from '$lib/route/document';
 
 export const editProjectSchema = z.object({
 	name: projectName,
@@ -8,8 +8,5 @@ export const editProjectSchema = z.object({
 });
 
 export const newRouteSchema = z.object({
-	name: text()
-		.trim()
-		.min(1, 'Give the route a name.')
-		.max(120, 'Keep the name under 120 characters.')
+	name: routeName
 });

@@ -5,6 +5,7 @@ import { ApiFailure } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
 import { chemPoolConfig } from '$lib/server/chem-pool/config';
 import { runChemistry } from '$lib/server/chem-pool/pool';
+import { routeMapLabels } from '$lib/server/route-map-labels';
 import { routeDocument, routeLinks } from '$lib/server/services/routes';
 
 export const load: PageServerLoad = async (event) => {
@@ -41,6 +42,8 @@ export const load: PageServerLoad = async (event) => {
 		project: { id: project.id, name: project.name },
 		document,
 		analyses,
+		// The names the map shows for condition, group and protecting-group ids (no /api/rules call).
+		labels: routeMapLabels(),
 		links,
 		role,
 		canEdit: can(role, 'route.edit')

@@ -6,6 +6,7 @@ import {
 	type InferCreationAttributes,
 	type Sequelize
 } from 'sequelize';
+import { FIELD_LIMITS } from '../../../schemas/limits';
 
 /** A personal API token. Only its SHA-256 is stored; `prefix` lets the owner tell tokens apart. */
 export class ApiToken extends Model<InferAttributes<ApiToken>, InferCreationAttributes<ApiToken>> {
@@ -24,7 +25,7 @@ export class ApiToken extends Model<InferAttributes<ApiToken>, InferCreationAttr
 			{
 				id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
 				userId: { type: DataTypes.UUID, allowNull: false },
-				label: { type: DataTypes.STRING(80), allowNull: false },
+				label: { type: DataTypes.STRING(FIELD_LIMITS.tokenLabel.max), allowNull: false },
 				tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
 				prefix: { type: DataTypes.STRING(16), allowNull: false },
 				lastUsedAt: { type: DataTypes.DATE, allowNull: true },

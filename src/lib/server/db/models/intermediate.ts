@@ -6,6 +6,7 @@ import {
 	type InferCreationAttributes,
 	type Sequelize
 } from 'sequelize';
+import { FIELD_LIMITS } from '../../../schemas/limits';
 
 export class Intermediate extends Model<
 	InferAttributes<Intermediate>,
@@ -32,7 +33,7 @@ export class Intermediate extends Model<
 				id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
 				routeId: { type: DataTypes.UUID, allowNull: false },
 				key: { type: DataTypes.STRING(64), allowNull: false },
-				label: { type: DataTypes.STRING(120), allowNull: true },
+				label: { type: DataTypes.STRING(FIELD_LIMITS.intermediateLabel.max), allowNull: true },
 				structure: { type: DataTypes.TEXT, allowNull: false },
 				canonical: { type: DataTypes.TEXT, allowNull: true },
 				positionX: { type: DataTypes.DOUBLE, allowNull: true },

@@ -8,6 +8,7 @@ import {
 	type Sequelize
 } from 'sequelize';
 import type { Team } from './team';
+import { FIELD_LIMITS } from '../../../schemas/limits';
 
 export class Project extends Model<InferAttributes<Project>, InferCreationAttributes<Project>> {
 	declare id: CreationOptional<string>;
@@ -26,7 +27,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
 			{
 				id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
 				teamId: { type: DataTypes.UUID, allowNull: false },
-				name: { type: DataTypes.STRING(120), allowNull: false },
+				name: { type: DataTypes.STRING(FIELD_LIMITS.projectName.max), allowNull: false },
 				description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
 				createdById: { type: DataTypes.UUID, allowNull: true },
 				archivedAt: { type: DataTypes.DATE, allowNull: true },

@@ -10,6 +10,7 @@ import {
 import type { Intermediate } from './intermediate';
 import type { Project } from './project';
 import type { Step } from './step';
+import { FIELD_LIMITS } from '../../../schemas/limits';
 
 export const ROUTE_STATUSES = ['draft', 'in-review', 'changes-requested', 'approved'] as const;
 export type RouteStatus = (typeof ROUTE_STATUSES)[number];
@@ -34,7 +35,7 @@ export class Route extends Model<InferAttributes<Route>, InferCreationAttributes
 			{
 				id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
 				projectId: { type: DataTypes.UUID, allowNull: false },
-				name: { type: DataTypes.STRING(120), allowNull: false },
+				name: { type: DataTypes.STRING(FIELD_LIMITS.routeName.max), allowNull: false },
 				status: {
 					type: DataTypes.STRING(24),
 					allowNull: false,

@@ -6,6 +6,7 @@ import {
 	type InferCreationAttributes,
 	type Sequelize
 } from 'sequelize';
+import { FIELD_LIMITS } from '../../../schemas/limits';
 
 export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<Team>> {
 	declare id: CreationOptional<string>;
@@ -17,7 +18,7 @@ export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<T
 		Team.init(
 			{
 				id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
-				name: { type: DataTypes.STRING(120), allowNull: false },
+				name: { type: DataTypes.STRING(FIELD_LIMITS.teamName.max), allowNull: false },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},

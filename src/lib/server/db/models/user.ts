@@ -6,6 +6,7 @@ import {
 	type InferCreationAttributes,
 	type Sequelize
 } from 'sequelize';
+import { FIELD_LIMITS } from '../../../schemas/limits';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
 	declare id: CreationOptional<string>;
@@ -21,7 +22,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
 			{
 				id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
 				email: { type: DataTypes.STRING(320), allowNull: false, unique: true },
-				name: { type: DataTypes.STRING(120), allowNull: false },
+				name: { type: DataTypes.STRING(FIELD_LIMITS.personName.max), allowNull: false },
 				passwordHash: { type: DataTypes.STRING(100), allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE

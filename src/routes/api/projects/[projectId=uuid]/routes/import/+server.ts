@@ -4,6 +4,7 @@ import type { ImportedRouteAnswer } from '$lib/api/answers';
 import { apiError, apiHandler } from '$lib/server/api';
 import { requireProjectAction } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
+import { FIELD_LIMITS } from '$lib/schemas/limits';
 import { MAX_IMPORT_BYTES } from '$lib/server/route-sdf';
 import { createRoute } from '$lib/server/services/routes';
 
@@ -58,7 +59,10 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		);
 	}
 	const given = String(form?.get('name') ?? '').trim();
-	const name = (given || file.name.replace(/\.[^.]+$/, '') || 'Imported route').slice(0, 120);
+	const name = (given || file.name.replace(/\.[^.]+$/, '') || 'Imported route').slice(
+		0,
+		FIELD_LIMITS.routeName.max
+	);
 	// Reading every structure is chemistry: it runs on the pool, and a refused file answers 422
 	// (`invalid_import`, or `structure_too_large` naming the record) with nothing stored.
 	const document = await runChemistry(kind === 'json' ? 'importJson' : 'importSdf', { text, name });
