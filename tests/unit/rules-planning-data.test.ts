@@ -1,40 +1,16 @@
 import { describe, expect, it } from 'vitest';
-import conditions from '../../rules/conditions.json';
-import preferences from '../../rules/preferences.json';
-import protectingGroups from '../../rules/protecting-groups.json';
-import reactivity from '../../rules/reactivity.json';
-import reagents from '../../rules/reagents.json';
 import { perceptionRules } from '../../src/lib/chem/patterns';
-import {
-	loadRuleTable,
-	parseRuleFiles,
-	RuleTableError,
-	type InstallMethod,
-	type RawRuleFiles
-} from '../../src/lib/rules';
+import { loadRuleTable, type InstallMethod, type RawRuleFiles } from '../../src/lib/rules';
 import { checkStep, type StepToCheck } from '../../src/lib/rules/check';
 import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
 import { preferenceRank } from '../../src/lib/rules/preferences';
+import { good, problemsOf } from '../factories/rule-files';
 
 // The data the planner ranks and installs by (issue 12): preferences, install recipes with their
 // selectivity, PG drawbacks and reagent concerns. Each fact's source is named beside its check.
 
 const table = loadRuleTable();
 const protects = new Map(perceptionRules().protectingGroups.map((pg) => [pg.id, pg.protects]));
-const good = (): RawRuleFiles =>
-	structuredClone({ conditions, reagents, reactivity, protectingGroups, preferences });
-
-function problemsOf(raw: RawRuleFiles): readonly string[] {
-	try {
-		parseRuleFiles(raw);
-	} catch (error) {
-		if (error instanceof RuleTableError) {
-			return error.problems;
-		}
-		throw error;
-	}
-	throw new Error('expected the broken copy to fail');
-}
 
 type RawPg = { id: string; install: { methods: Partial<InstallMethod>[] }; drawbacks?: unknown[] };
 const rawPgs = (raw: RawRuleFiles) => raw.protectingGroups as RawPg[];
