@@ -2,6 +2,7 @@
 // Creates a team with its first lead (for a database started with ORTHOGON_DEMO=0).
 import { createInterface } from 'node:readline/promises';
 import { parseArgs } from 'node:util';
+import { MIN_PASSWORD_LENGTH } from '../src/lib/schemas/password';
 import { loadDotEnv, resolveEnvironment } from './environment.js';
 
 const { values } = parseArgs({
@@ -24,11 +25,11 @@ const teamName = values.team ?? (await ask.question('Team name: '));
 const password =
 	values.password ??
 	process.env.ORTHOGON_PASSWORD ??
-	(await ask.question('Password (10+ characters): '));
+	(await ask.question(`Password (${MIN_PASSWORD_LENGTH}+ characters): `));
 ask.close();
 
-if (password.length < 10) {
-	console.error('The password needs at least 10 characters.');
+if (password.length < MIN_PASSWORD_LENGTH) {
+	console.error(`The password needs at least ${MIN_PASSWORD_LENGTH} characters.`);
 	process.exit(1);
 }
 const { team, user } = await createTeamWithLead({ teamName, email, name, password });
