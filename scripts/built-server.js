@@ -3,8 +3,7 @@
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
-import path from 'node:path';
-import { resolveEnvironment } from './environment.js';
+import { databaseFile, demoScenario, resolveEnvironment } from './environment.js';
 
 /** A TCP port nobody listens on right now, chosen by the OS. */
 export function freePort() {
@@ -32,7 +31,7 @@ export async function startBuiltServer({ dataDir, port, env = {}, quiet = true }
 	const resolved = resolveEnvironment({
 		...process.env,
 		ORTHOGON_DATA_DIR: dataDir,
-		DATABASE_URL: `sqlite:${path.join(dataDir, 'orthogon.db')}`,
+		DATABASE_URL: `sqlite:${databaseFile(dataDir)}`,
 		HOST: '127.0.0.1',
 		PORT: String(port),
 		ORIGIN: origin,
@@ -87,7 +86,7 @@ export async function startBuiltServer({ dataDir, port, env = {}, quiet = true }
 }
 
 /** Signs in as a demo person through the credentials callback; returns the Cookie header value. */
-export async function signInCookie(origin, email, password = 'orthogon-demo') {
+export async function signInCookie(origin, email, password = demoScenario().password) {
 	const response = await fetch(`${origin}/auth/callback/credentials`, {
 		method: 'POST',
 		redirect: 'manual',

@@ -8,6 +8,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { buildIfStale } from './build-if-stale.js';
 import { freePort, signInCookie, startBuiltServer } from './built-server.js';
+import { demoSignIn } from './environment.js';
 
 const SECONDS = Number(process.env.LOADTEST_SECONDS ?? 60);
 const CONNECTIONS = 50;
@@ -111,7 +112,7 @@ const stop = () => server.stop();
 process.on('SIGINT', () => void stop().then(() => process.exit(130)));
 try {
 	const { origin } = server;
-	const cookie = await signInCookie(origin, 'chemist@example.com');
+	const cookie = await signInCookie(origin, demoSignIn('chemist').email);
 	const { projects } = await (
 		await fetch(`${origin}/api/projects`, { headers: { cookie } })
 	).json();

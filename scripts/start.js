@@ -2,9 +2,8 @@
 // `npm start`: build when needed, then serve. The server migrates the database and seeds the
 // demo scenario itself at start-up (hooks.server.ts `init`), so every way of starting it agrees.
 import { spawn } from 'node:child_process';
-import fs from 'node:fs';
 import { buildIfStale } from './build-if-stale.js';
-import { loadDotEnv, resolveEnvironment } from './environment.js';
+import { demoScenario, loadDotEnv, resolveEnvironment } from './environment.js';
 
 const args = new Set(process.argv.slice(2));
 buildIfStale({ force: args.has('--rebuild') });
@@ -42,7 +41,7 @@ async function announceWhenUp(origin, port) {
 	}
 	const lines = [``, `Orthogon is running at ${origin}`];
 	if (demo) {
-		const scenario = JSON.parse(fs.readFileSync('src/lib/server/db/demo-scenario.json', 'utf8'));
+		const scenario = demoScenario();
 		lines.push(`Demo sign-ins (password "${scenario.password}"):`);
 		for (const team of scenario.teams) {
 			for (const person of team.people) {

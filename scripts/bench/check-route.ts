@@ -6,7 +6,7 @@
 import { clearPerceptionCache } from '../../src/lib/chem';
 import { checkStep, clearTransformationCache, type StepToCheck } from '../../src/lib/rules/check';
 import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
-import { routeOG2031 } from './route-og2031';
+import { routeOG2031 } from '../../tests/factories/route-og2031';
 
 const REAGENTS: Record<string, string> = {
 	A02: 'TBSCl, imidazole, DMF',

@@ -3,7 +3,7 @@
 // every PG pattern) over the same 30 intermediates. RDKit only counts matches; we do more.
 
 import { clearPerceptionCache, perceiveText, perceptionRules } from '../../src/lib/chem';
-import { routeOG2031 } from './route-og2031';
+import { routeOG2031 } from '../../tests/factories/route-og2031';
 
 const ROUNDS = 25;
 const median = (values: number[]) =>

@@ -1,5 +1,5 @@
-// The strategy planner on the routes of plan-routes.ts. Cold = the first plan in a fresh process;
-// first sight = a route the warm server has never seen (every cache emptied); warm = the median of
+// The strategy planner on the routes of tests/factories/plan-routes.ts (the tests share them).
+// Cold = the first plan in a fresh process; first sight = a route the warm server has never seen (every cache emptied); warm = the median of
 // later runs, as when a chemist asks again after an edit elsewhere. Aims (issue 12): the 10-group
 // stress route ≤ 250 ms at first sight and ≤ 50 ms warm; every textbook route ≤ 100 ms at first
 // sight, which is what planning an ordinary route costs. Protected intermediates are drawn by
@@ -10,7 +10,7 @@ import { clearPerceptionCache } from '../../src/lib/chem';
 import { clearTransformationCache } from '../../src/lib/rules/check';
 import { clearPlanCaches } from '../../src/lib/rules/plan';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
-import { STRESS_ROUTE, TEXTBOOK_ROUTES } from './plan-routes';
+import { STRESS_ROUTE, TEXTBOOK_ROUTES } from '../../tests/factories/plan-routes';
 
 const AIM_STRESS_FIRST_SIGHT_MS = 250;
 const AIM_STRESS_WARM_MS = 50;
@@ -50,7 +50,7 @@ console.log(
 	`plan (10 sensitive instances): cold ${cold.ms.toFixed(0)} ms, first sight ${fresh.toFixed(0)} ms (${verdict(fresh, AIM_STRESS_FIRST_SIGHT_MS)}), warm ${warm.toFixed(0)} ms (${verdict(warm, AIM_STRESS_WARM_MS)}), ${cold.plans} plans masking ${cold.needs} groups`
 );
 
-// Each textbook route at first sight, the median of three, in the order of plan-routes.ts. As for
+// Each textbook route at first sight, the median of three, in the order of TEXTBOOK_ROUTES. As for
 // the stress route, the process has planned such routes before (the code is compiled), so each is
 // planned once before the caches are emptied and it is timed.
 for (const doc of TEXTBOOK_ROUTES) {

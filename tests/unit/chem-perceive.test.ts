@@ -20,7 +20,7 @@ import protectingGroupsJson from '../../rules/protecting-groups.json';
 import { referenceMolecules } from '../reference/molecules';
 import { PROTECTING_GROUP_IDS } from '../../src/lib/rules/ids';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
-import { routeOG2031 } from '../../scripts/bench/route-og2031';
+import { routeOG2031 } from '../factories/route-og2031';
 import { OXYGEN_PG_IDS } from '../factories/pg-ids';
 
 const of = (smiles: string) => perceive(readStructure(smiles).molecule);

@@ -11,7 +11,7 @@ import { perceptionRules } from '../../src/lib/chem/patterns';
 import { atomTable, looseQuery, mayMatch } from '../../src/lib/chem/prefilter';
 import { referenceMolecules } from '../reference/molecules';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
-import { routeOG2031 } from '../../scripts/bench/route-og2031';
+import { routeOG2031 } from '../factories/route-og2031';
 
 const structures = [
 	...referenceMolecules.map((m) => m.smiles),

@@ -20,7 +20,7 @@ import { findMatches, searchTarget } from '../../src/lib/chem/match';
 import { withoutProtectingGroup } from '../../src/lib/chem/deprotect';
 import { referenceMolecules } from '../reference/molecules';
 import { aromaticityDisagreements } from '../reference/aromaticity-cases';
-import { routeOG2031 } from '../../scripts/bench/route-og2031';
+import { routeOG2031 } from '../factories/route-og2031';
 
 /** Charges, explicit and heavy hydrogens, salts, Kekulé input, fused heteroaromatics: the corners. */
 const CORNERS = [

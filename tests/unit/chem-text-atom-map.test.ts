@@ -3,7 +3,7 @@ import { mapAtoms } from '../../src/lib/chem/atom-map';
 import { sharedMolecule } from '../../src/lib/chem/molecule-cache';
 import { mapAtomsByText } from '../../src/lib/chem/text-atom-map';
 import { freeUnits } from '../../src/lib/rules/plan/track';
-import { STRESS_ROUTE, TEXTBOOK_ROUTES } from '../../scripts/bench/plan-routes';
+import { STRESS_ROUTE, TEXTBOOK_ROUTES } from '../factories/plan-routes';
 
 // A step's atom map read off the text its two SMILES share must pair the free groups as the
 // maximum common substructure (MCS) does, and must refuse when the shared text is not a common

@@ -1,8 +1,7 @@
 import { Molecule } from 'openchemlib';
 import { afterAll, describe, expect, it, vi } from 'vitest';
 import type { RouteDocument } from '../../src/lib/route/document';
-import { line } from '../factories/plan-routes';
-import { STRESS_ROUTE, TEXTBOOK_ROUTES } from '../../scripts/bench/plan-routes';
+import { line, STRESS_ROUTE, TEXTBOOK_ROUTES } from '../factories/plan-routes';
 
 // The planner's fast paths must not change any answer: drawing protected intermediates by editing
 // the SMILES (chem/smiles-splice.ts) instead of the Reactor, and mapping a step's atoms through the

@@ -1,34 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import conditions from '../../rules/conditions.json';
-import protectingGroups from '../../rules/protecting-groups.json';
-import preferences from '../../rules/preferences.json';
-import reactivity from '../../rules/reactivity.json';
-import reagents from '../../rules/reagents.json';
 import {
 	buildRuleTable,
 	formatPath,
 	loadRuleTable,
 	parseRuleFiles,
-	RuleTableError,
-	type RawRuleFiles,
 	type RuleOverridesInput
 } from '../../src/lib/rules';
-
-const good = (): RawRuleFiles =>
-	structuredClone({ conditions, reagents, reactivity, protectingGroups, preferences });
-
-/** The problems a broken copy of the files produces. */
-function problemsOf(raw: RawRuleFiles): readonly string[] {
-	try {
-		parseRuleFiles(raw);
-	} catch (error) {
-		if (error instanceof RuleTableError) {
-			return error.problems;
-		}
-		throw error;
-	}
-	throw new Error('expected the broken copy to fail');
-}
+import { good, problemsOf } from '../factories/rule-files';
 
 describe('rule-table loader: error messages name file, path and reason', () => {
 	it('accepts the bundled files', () => {

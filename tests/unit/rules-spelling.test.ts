@@ -1,10 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import conditions from '../../rules/conditions.json';
-import protectingGroups from '../../rules/protecting-groups.json';
-import preferences from '../../rules/preferences.json';
-import reactivity from '../../rules/reactivity.json';
 import reagents from '../../rules/reagents.json';
-import { parseRuleFiles, RuleTableError, type RawRuleFiles } from '../../src/lib/rules';
+import { parseRuleFiles, RuleTableError } from '../../src/lib/rules';
 import { standsAlone } from '../../src/lib/rules/reagent-text';
 import {
 	formulaFits,
@@ -12,6 +8,7 @@ import {
 	readsAsFormula,
 	spellingKey
 } from '../../src/lib/rules/spelling';
+import { good } from '../factories/rule-files';
 
 // Element symbols and their case are IUPAC's; which shorthand chemists write is common practice.
 describe('spelling: what a reagent spelling is', () => {
@@ -66,9 +63,6 @@ describe('spelling: a bare metal stands alone only beside amounts and forms', ()
 });
 
 describe('rule-table loader: formulas that differ only in case are two spellings', () => {
-	const good = (): RawRuleFiles =>
-		structuredClone({ conditions, reagents, reactivity, protectingGroups, preferences });
-
 	it('loads the bundled files, which list both CoCl2 and COCl2', () => {
 		const names = (reagents as { name: string; synonyms: string[] }[])
 			.filter((r) => [r.name, ...r.synonyms].some((s) => s.toLowerCase() === 'cocl2'))

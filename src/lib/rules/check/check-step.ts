@@ -4,7 +4,8 @@
 import { isStructureError } from '../../chem/errors';
 import { readStructure } from '../../chem/parse';
 import { transformation, type Site } from './transformation';
-import { protectingGroupMessage, freeGroupMessage, type Bringer, type Origin } from './messages';
+import { conditionOrigins } from './condition-origins';
+import { protectingGroupMessage, freeGroupMessage } from './messages';
 import {
 	StepStructureError,
 	UnknownConditionError,
@@ -30,27 +31,8 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 		? rules.classify(step.reagents)
 		: { conditions: [], matched: [], hazards: [], unknown: [] };
 	const reagentClasses = classified.matched.map(readingOf);
-	const conditions = [...new Set([...explicit, ...classified.conditions])];
-
-	const origins = new Map<string, Origin>();
-	for (const id of conditions) {
-		const bringers = new Map<string, Bringer>();
-		for (const m of classified.matched.filter((m) => m.conditions.includes(id))) {
-			if (!bringers.has(m.reagent)) {
-				bringers.set(m.reagent, {
-					reagent: m.reagent,
-					context: m.context && { reagent: m.context.reagent, why: m.context.why }
-				});
-			}
-		}
-		// An explicit class that a named reagent also brings is judged by that reagent (TBSCl,
-		// imidazole tagged `base-amine` is imidazole's base-amine): only a class no reagent brings
-		// stands for the whole class.
-		origins.set(id, {
-			reagents: [...bringers.values()],
-			explicit: explicit.includes(id) && bringers.size === 0
-		});
-	}
+	const origins = new Map(conditionOrigins(explicit, classified).map((o) => [o.id, o]));
+	const conditions = [...origins.keys()];
 
 	const substrates = Array.isArray(step.substrate) ? step.substrate : [step.substrate];
 	const change = readTransformation(step.id, substrates, step.product);

@@ -4,6 +4,7 @@
 
 import type { RouteDocument, RouteIntermediate, RouteStep } from '../../route/document';
 import { stepLabeller } from '../../route/step-names';
+import { conditionOrigins } from '../check/condition-origins';
 import type { CheckRules } from '../check/types';
 
 /**
@@ -97,18 +98,11 @@ export function stepConditions(
 	reagents: string | undefined,
 	explicit: string[] = []
 ): StepCondition[] {
+	const known = explicit.filter((id) => rules.conditionIds.includes(id));
 	const classified = reagents?.trim() ? rules.classify(reagents) : { conditions: [], matched: [] };
-	const ids = [
-		...new Set([
-			...explicit.filter((id) => rules.conditionIds.includes(id)),
-			...classified.conditions
-		])
-	];
-	return ids.map((id) => {
-		const reagents = [
-			...new Set(classified.matched.filter((m) => m.conditions.includes(id)).map((m) => m.reagent))
-		];
-		// As in the check: a class some reagent brings is judged by its reagents, even if also set explicitly.
-		return { id, reagents, explicit: explicit.includes(id) && reagents.length === 0 };
-	});
+	return conditionOrigins(known, classified).map((o) => ({
+		id: o.id,
+		reagents: o.reagents.map((b) => b.reagent),
+		explicit: o.explicit
+	}));
 }
