@@ -102,6 +102,17 @@ describe('placeErrors puts each refusal where the chemist can act on it', () => 
 		expect(placed.general).toEqual([]);
 	});
 
+	it('on the row the engine names in its details (a 422 from POST /api/quantities)', () => {
+		const placed = placeErrors(
+			{
+				message: 'Give a density for this liquid.',
+				details: { material: 'mystery oil', field: 'density' }
+			},
+			rows
+		);
+		expect([...placed.rows]).toEqual([[1, ['Give a density for this liquid.']]]);
+	});
+
 	it('on the row whose name the message quotes, or above the table when it names none', () => {
 		const named = placeErrors({ message: 'No density is known for “mystery oil”.' }, rows);
 		expect([...named.rows]).toEqual([[1, ['No density is known for “mystery oil”.']]]);

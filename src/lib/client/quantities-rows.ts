@@ -67,7 +67,7 @@ type Issue = { path?: unknown; message?: unknown };
 
 /**
  * A refusal of `POST /api/quantities` placed where the chemist can act on it: on the row its
- * details point to (`materials.2.volume`), on the row whose name the message quotes, on the
+ * details point to (`materials.2.volume`) or name (`{ material }`), on the row whose name the message quotes, on the
  * water-removal card, or above the table when it names nothing.
  */
 export function placeErrors(
@@ -90,7 +90,13 @@ export function placeErrors(
 		}
 	}
 	if (issues.length === 0) {
-		const named = rows.findIndex((row) => failure.message.includes(`“${row.name}”`));
+		// The engine's refusals (422) name their material in `details.material`.
+		const material = (failure.details as { material?: unknown } | undefined)?.material;
+		const byDetails = rows.findIndex((row) => row.name === material);
+		const named =
+			byDetails >= 0
+				? byDetails
+				: rows.findIndex((row) => failure.message.includes(`“${row.name}”`));
 		const nameHit =
 			named >= 0 ? named : rows.findIndex((row) => failure.message.includes(row.name));
 		if (nameHit >= 0) {
