@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { STRUCTURE_LIMITS } from '../chem/limits';
+import { FIELD_LIMITS } from '../schemas/limits';
 import { text } from '../schemas/text';
 
 // The quantities of a step: what the chemist weighs out, and the water a condensation must give up
@@ -18,7 +19,7 @@ const positive = (what: string) =>
 
 /** One material as the chemist gives it: one amount (mass, volume, amount or equiv) and what is known. */
 export const materialInput = z.object({
-	name: text().trim().min(1, 'Name the material.').max(200),
+	name: text().trim().min(1, 'Name the material.').max(FIELD_LIMITS.materialName.max),
 	role: z.enum(MATERIAL_ROLES),
 	/** SMILES or molfile, or the id of an intermediate of the route (resolved before computing). */
 	structure: text().max(STRUCTURE_LIMITS.maxTextBytes).optional(),

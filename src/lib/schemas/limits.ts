@@ -13,6 +13,7 @@ export const FIELD_LIMITS = {
 	intermediateLabel: { max: 120 },
 	stepReagents: { max: 2000 },
 	stepNotes: { max: 10_000 },
+	materialName: { max: 200 },
 	personName: { max: 120 },
 	teamName: { max: 120 },
 	tokenLabel: { min: 2, max: 80 },

@@ -6,6 +6,7 @@
 import type { Analysis, ConditionLabel, RouteClient, RuleLabels } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
+import { FIELD_LIMITS, withSuffix } from '$lib/schemas/limits';
 import { Autosave } from './autosave.svelte';
 import { ClashCheck } from './clash-check.svelte';
 import * as ops from './document-ops';
@@ -192,7 +193,7 @@ export class RouteEditor {
 	/** After a conflict: store the local document as a new route; returns its id. */
 	async keepMineAsCopy(): Promise<string | null> {
 		const mine = this.doc;
-		const name = `${mine.name.slice(0, 108)} (my copy)`;
+		const name = withSuffix(mine.name, ' (my copy)', FIELD_LIMITS.routeName.max);
 		const id = await this.client.create(this.projectId, { ...mine, name });
 		if (id) {
 			this.autosave.markSaved(mine);

@@ -4,6 +4,7 @@ import type { RequestHandler } from './$types';
 import { apiHandler, readJson } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
 import { STRUCTURE_LIMITS } from '$lib/chem/limits';
+import { FIELD_LIMITS } from '$lib/schemas/limits';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import type { CheckAnswer } from '$lib/rules/check/types';
 
@@ -16,7 +17,7 @@ const checkBody = z.object({
 				substrate: z.string().max(MAX_STRUCTURE),
 				product: z.string().max(MAX_STRUCTURE),
 				conditions: z.array(z.string().max(64)).max(30).optional(),
-				reagents: z.string().max(2000).optional()
+				reagents: z.string().max(FIELD_LIMITS.stepReagents.max).optional()
 			})
 		)
 		.min(1, 'Send at least one step.')
