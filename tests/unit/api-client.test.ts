@@ -90,5 +90,3 @@ describe('a step the server could not check', () => {
 		expect(verdictOf(byStep.get('s2')).tone).toBe('fine');
 	});
 });
-
-describe('the rule labels', () => {});
