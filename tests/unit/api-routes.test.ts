@@ -2,6 +2,7 @@ import type { RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as routeList from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
 import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
+import * as exportRoute from '../../src/routes/api/routes/[routeId=uuid]/export/+server';
 import { ActivityEvent, Intermediate } from '../../src/lib/server/db';
 import type { Project } from '../../src/lib/server/db';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
@@ -104,6 +105,38 @@ describe('route API', () => {
 		expect(got.body.name).toBe('Route one, revised');
 		expect(got.body.version).toBe(2);
 		expect(await Intermediate.count({ where: { routeId } })).toBe(4);
+	});
+
+	it('keeps a step’s quantities and trap log through a save, the GET and the JSON export', async () => {
+		const withQuantities = doc('Route one, weighed');
+		const step = {
+			...withQuantities.steps[0]!,
+			quantities: [
+				{ name: 'keto ester', role: 'limiting' as const, structure: 'a', mass: 20 },
+				{ name: 'ethylene glycol', role: 'reagent' as const, volume: 12 },
+				{ name: 'toluene', role: 'solvent' as const, volume: 75 }
+			],
+			waterRemoval: {
+				solvent: 'toluene',
+				trapCapacity: 10,
+				log: [
+					{ minutes: 0, volume: 0 },
+					{ minutes: 60, volume: 2.1 }
+				]
+			}
+		};
+		const document = { ...withQuantities, steps: [step] };
+		const got0 = await call(oneRoute.GET, 'lead', { routeId });
+		const saved = await call(oneRoute.PUT, 'lead', { routeId }, 'PUT', {
+			version: got0.body.version,
+			document
+		});
+		expect(saved.status).toBe(200);
+		const got = await call(oneRoute.GET, 'viewer', { routeId });
+		expect(got.body.document.steps[0]).toEqual(step);
+		const exported = await call(exportRoute.GET, 'viewer', { routeId });
+		expect(JSON.stringify(exported.body)).toContain('"trapCapacity":10');
+		expect(JSON.stringify(exported.body)).toContain('"name":"ethylene glycol"');
 	});
 
 	it('refuses reviewers and viewers with 403 and other teams with 404, on every endpoint', async () => {
