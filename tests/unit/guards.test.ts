@@ -12,7 +12,16 @@ import { Membership } from '../../src/lib/server/db';
 import { load as layoutLoad } from '../../src/routes/+layout.server';
 import { load as projectPageLoad } from '../../src/routes/projects/[projectId=uuid]/+page.server';
 import { createRoute } from '../../src/lib/server/services/routes';
-import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+import { actions as teamActions } from '../../src/routes/teams/[teamId=uuid]/+page.server';
+import {
+	fakeEvent,
+	freshDatabase,
+	join,
+	makeProject,
+	makeTeam,
+	makeTeamWithEveryRole,
+	makeUser
+} from '../factories';
 
 type Fixture = Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
 let f: Fixture;
@@ -177,6 +186,28 @@ describe('one membership query per guarded request', () => {
 		});
 		expect(queries).toBe(1);
 		expect(layout).toMatchObject({ teams: [{ id: f.team.id, role: 'chemist' }] });
+	});
+
+	it('shows a role the caller changed in a team action to the layout rendered after it', async () => {
+		const team = await makeTeam();
+		const [stepsDown, staysLead] = [await makeUser(), await makeUser()];
+		const mine = await join(stepsDown, team.id, 'lead');
+		await join(staysLead, team.id, 'lead');
+		const request = new Request(`http://localhost/teams/${team.id}?/changeRole`, {
+			method: 'POST',
+			body: new URLSearchParams({ membershipId: mine.id, role: 'viewer' })
+		});
+		const event = {
+			...fakeEvent({ user: stepsDown, path: `/teams/${team.id}` }),
+			request,
+			params: { teamId: team.id }
+		};
+		expect(
+			await teamActions.changeRole(event as Parameters<typeof teamActions.changeRole>[0])
+		).toBe(null);
+		expect(await layoutLoad(event as Parameters<typeof layoutLoad>[0])).toMatchObject({
+			teams: [{ id: team.id, role: 'viewer' }]
+		});
 	});
 
 	it('never carries the memberships to the next request, and re-reads them after a change', async () => {
