@@ -202,9 +202,8 @@ describe('one membership query per guarded request', () => {
 			request,
 			params: { teamId: team.id }
 		};
-		expect(
-			await teamActions.changeRole(event as Parameters<typeof teamActions.changeRole>[0])
-		).toBe(null);
+		const changeRole = teamActions.changeRole!;
+		expect(await changeRole(event as Parameters<typeof changeRole>[0])).toBe(null);
 		expect(await layoutLoad(event as Parameters<typeof layoutLoad>[0])).toMatchObject({
 			teams: [{ id: team.id, role: 'viewer' }]
 		});
