@@ -1,4 +1,4 @@
-import type { SessionUser } from '$lib/types';
+import type { SessionUser, TeamOfUser } from '$lib/types';
 
 declare global {
 	namespace App {
@@ -14,6 +14,11 @@ declare global {
 			via: 'session' | 'token' | null;
 			/** The server-side session behind a cookie sign-in (auth/sessions.ts); null for tokens. */
 			sessionId: string | null;
+			/**
+			 * The caller's teams and roles, loaded on first use and shared by everything that reads
+			 * them during this request (auth/memberships.ts); never carried to another request.
+			 */
+			memberships?: { userId: string; teams: Promise<TeamOfUser[]> };
 		}
 		interface PageData {
 			user?: SessionUser | null;

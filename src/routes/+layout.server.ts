@@ -1,7 +1,9 @@
 import type { LayoutServerLoad } from './$types';
-import { teamsOf } from '$lib/server/services/teams';
+import { teamsOfCaller } from '$lib/server/auth/memberships';
 
-export const load: LayoutServerLoad = async ({ locals }) => {
-	const user = locals.user;
-	return { user, teams: user ? await teamsOf(user.id) : [] };
+// The teams come from the request's membership memo, so the page's guard (run alongside this
+// load) reuses the same query instead of reading the memberships a second time.
+export const load: LayoutServerLoad = async (event) => {
+	const user = event.locals.user;
+	return { user, teams: user ? await teamsOfCaller(event, user.id) : [] };
 };

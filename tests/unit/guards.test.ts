@@ -1,5 +1,5 @@
 import { isHttpError, isRedirect } from '@sveltejs/kit';
-import { beforeAll, describe, expect, it, vi } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { ACTIONS, can, ROLES } from '../../src/lib/policy';
 import {
 	requireProjectAction,
@@ -7,9 +7,21 @@ import {
 	requireTeamAction,
 	requireUser
 } from '../../src/lib/server/auth/guards';
+import { forgetCallerMemberships, teamsOfCaller } from '../../src/lib/server/auth/memberships';
 import { Membership } from '../../src/lib/server/db';
+import { load as layoutLoad } from '../../src/routes/+layout.server';
+import { load as projectPageLoad } from '../../src/routes/projects/[projectId=uuid]/+page.server';
 import { createRoute } from '../../src/lib/server/services/routes';
-import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+import { actions as teamActions } from '../../src/routes/teams/[teamId=uuid]/+page.server';
+import {
+	fakeEvent,
+	freshDatabase,
+	join,
+	makeProject,
+	makeTeam,
+	makeTeamWithEveryRole,
+	makeUser
+} from '../factories';
 
 type Fixture = Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
 let f: Fixture;
@@ -66,15 +78,17 @@ describe('requireTeamAction: every role × every action', () => {
 		}
 	});
 
-	it('reads the role from the database on every call, so a role change applies at once', async () => {
-		const { Membership } = await import('../../src/lib/server/db');
-		const event = fakeEvent({ user: f.people.viewer });
-		expect(await outcome(() => requireTeamAction(event, f.team.id, 'project.create'))).toBe('403');
+	it('reads the role from the database on every request, so a role change applies at once', async () => {
+		// A fresh event is a fresh request: nothing read for one request may serve the next.
+		const request = () => fakeEvent({ user: f.people.viewer });
+		expect(await outcome(() => requireTeamAction(request(), f.team.id, 'project.create'))).toBe(
+			'403'
+		);
 		await Membership.update(
 			{ role: 'chemist' },
 			{ where: { userId: f.people.viewer.id, teamId: f.team.id } }
 		);
-		expect(await outcome(() => requireTeamAction(event, f.team.id, 'project.create'))).toBe(
+		expect(await outcome(() => requireTeamAction(request(), f.team.id, 'project.create'))).toBe(
 			'allowed'
 		);
 		await Membership.update(
@@ -118,13 +132,20 @@ describe('requireProjectAction', () => {
 });
 
 describe('one membership query per guarded request', () => {
+	/** Reads of memberships by user id, counted by Sequelize's find hook (one per SELECT). */
 	const membershipQueries = async (run: () => Promise<unknown>) => {
-		const spy = vi.spyOn(Membership, 'findOne');
+		let count = 0;
+		Membership.addHook('beforeFind', 'countMembershipReads', (options) => {
+			const where = options.where as Record<string, unknown> | undefined;
+			if (where && 'userId' in where) {
+				count += 1;
+			}
+		});
 		try {
 			await outcome(run);
-			return spy.mock.calls.length;
+			return count;
 		} finally {
-			spy.mockRestore();
+			Membership.removeHook('beforeFind', 'countMembershipReads');
 		}
 	};
 
@@ -136,19 +157,68 @@ describe('one membership query per guarded request', () => {
 			steps: []
 		});
 		for (const person of [f.people.chemist, f.people.viewer, f.people.outsider]) {
-			const event = fakeEvent({ user: person });
+			const request = () => fakeEvent({ user: person });
 			expect(
-				await membershipQueries(() => requireProjectAction(event, project.id, 'route.edit')),
+				await membershipQueries(() => requireProjectAction(request(), project.id, 'route.edit')),
 				`project, ${person.name}`
 			).toBe(1);
 			expect(
-				await membershipQueries(() => requireRouteAction(event, route.id, 'route.edit')),
+				await membershipQueries(() => requireRouteAction(request(), route.id, 'route.edit')),
 				`route, ${person.name}`
 			).toBe(1);
 			expect(
-				await membershipQueries(() => requireTeamAction(event, f.team.id, 'route.edit')),
+				await membershipQueries(() => requireTeamAction(request(), f.team.id, 'route.edit')),
 				`team, ${person.name}`
 			).toBe(1);
 		}
+	});
+
+	it('shares one read between the root layout and the page’s guard, run side by side as SvelteKit does', async () => {
+		const project = await makeProject(f.team.id, 'Layout and page');
+		const event = fakeEvent({ user: f.people.chemist, path: `/projects/${project.id}` });
+		(event as { params: Record<string, string> }).params = { projectId: project.id };
+		let layout: unknown;
+		const queries = await membershipQueries(async () => {
+			[layout] = await Promise.all([
+				layoutLoad(event as Parameters<typeof layoutLoad>[0]),
+				projectPageLoad(event as Parameters<typeof projectPageLoad>[0])
+			]);
+		});
+		expect(queries).toBe(1);
+		expect(layout).toMatchObject({ teams: [{ id: f.team.id, role: 'chemist' }] });
+	});
+
+	it('shows a role the caller changed in a team action to the layout rendered after it', async () => {
+		const team = await makeTeam();
+		const [stepsDown, staysLead] = [await makeUser(), await makeUser()];
+		const mine = await join(stepsDown, team.id, 'lead');
+		await join(staysLead, team.id, 'lead');
+		const request = new Request(`http://localhost/teams/${team.id}?/changeRole`, {
+			method: 'POST',
+			body: new URLSearchParams({ membershipId: mine.id, role: 'viewer' })
+		});
+		const event = {
+			...fakeEvent({ user: stepsDown, path: `/teams/${team.id}` }),
+			request,
+			params: { teamId: team.id }
+		};
+		const changeRole = teamActions.changeRole!;
+		expect(await changeRole(event as Parameters<typeof changeRole>[0])).toBe(null);
+		expect(await layoutLoad(event as Parameters<typeof layoutLoad>[0])).toMatchObject({
+			teams: [{ id: team.id, role: 'viewer' }]
+		});
+	});
+
+	it('never carries the memberships to the next request, and re-reads them after a change', async () => {
+		const first = fakeEvent({ user: f.people.chemist });
+		expect(await membershipQueries(() => requireTeamAction(first, f.team.id, 'route.edit'))).toBe(
+			1
+		);
+		const second = fakeEvent({ user: f.people.chemist });
+		expect(await membershipQueries(() => requireTeamAction(second, f.team.id, 'route.edit'))).toBe(
+			1
+		);
+		forgetCallerMemberships(second);
+		expect(await membershipQueries(() => teamsOfCaller(second, f.people.chemist.id))).toBe(1);
 	});
 });

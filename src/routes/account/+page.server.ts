@@ -9,16 +9,16 @@ import {
 	revokeApiToken
 } from '$lib/server/auth/api-tokens';
 import { requirePasswordSession, requireUser } from '$lib/server/auth/guards';
+import { teamsOfCaller } from '$lib/server/auth/memberships';
 import { endOtherSessions } from '$lib/server/auth/sessions';
 import { changeOwnPassword } from '$lib/server/services/users';
-import { teamsOf } from '$lib/server/services/teams';
 import { changePasswordDefaults, changePasswordSchema, createTokenSchema } from './schema';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireUser(event);
 	const [tokens, teams, tokenForm, passwordForm] = await Promise.all([
 		listApiTokens(user.id),
-		teamsOf(user.id),
+		teamsOfCaller(event, user.id),
 		superValidate(zod4(createTokenSchema)),
 		superValidate(changePasswordDefaults, zod4(changePasswordSchema), { errors: false })
 	]);

@@ -5,8 +5,8 @@ import type { Actions, PageServerLoad } from './$types';
 import { paths } from '$lib/paths';
 import { can } from '$lib/policy';
 import { requireTeamAction, requireUser } from '$lib/server/auth/guards';
+import { teamsOfCaller } from '$lib/server/auth/memberships';
 import { createProject, listProjectsFor } from '$lib/server/services/projects';
-import { teamsOf } from '$lib/server/services/teams';
 import { createProjectSchema } from './schema';
 
 export const load: PageServerLoad = async (event) => {
@@ -14,7 +14,7 @@ export const load: PageServerLoad = async (event) => {
 	const showArchived = event.url.searchParams.get('archived') === '1';
 	const [projects, teams] = await Promise.all([
 		listProjectsFor(user.id, { includeArchived: showArchived }),
-		teamsOf(user.id)
+		teamsOfCaller(event, user.id)
 	]);
 	const creatableTeams = teams.filter((t) => can(t.role, 'project.create'));
 	const form = await superValidate({ teamId: creatableTeams[0]?.id }, zod4(createProjectSchema), {

@@ -1,8 +1,9 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { can, ROLE_LABELS, type Action, type Role } from '../../policy';
 import { paths } from '../../paths';
-import { dbReady, Membership, Project, Route } from '../db';
+import { dbReady, Project, Route } from '../db';
 import type { SessionUser } from './credentials';
+import { callerRoleIn } from './memberships';
 
 // Every page load, form action and API handler passes through these. The rules:
 // no identity → sign-in page (pages) or 401 (API); not a member of the team → 404, so other
@@ -45,13 +46,6 @@ export function requirePasswordSession(event: GuardEvent): SessionUser {
 	return user;
 }
 
-/** The user's role in a team, read from the database on every call (never from the session). */
-export async function roleIn(userId: string, teamId: string): Promise<Role | null> {
-	await dbReady();
-	const membership = await Membership.findOne({ where: { userId, teamId } });
-	return membership?.role ?? null;
-}
-
 export function notFound(what = 'That'): never {
 	error(404, { code: 'not_found', message: `${what} does not exist, or is not shared with you.` });
 }
@@ -70,15 +64,22 @@ const ACTION_PHRASES: Record<Action, string> = {
 
 /** Passes when the user is in the team with a role that grants the action. */
 export async function requireTeamAction(event: GuardEvent, teamId: string, action: Action) {
-	return authorize(requireUser(event), teamId, action, 'That team');
+	return authorize(event, requireUser(event), teamId, action, 'That team');
 }
 
 /**
- * The one membership query of a guarded request: no role → 404 naming `what` (the team, or the
- * project or route reached through it), a role without the grant → 403.
+ * Checks the role from the caller's memberships, read once per request and shared with the
+ * layout (auth/memberships.ts), never from the session: no role → 404 naming `what` (the team,
+ * or the project or route reached through it), a role without the grant → 403.
  */
-async function authorize(user: SessionUser, teamId: string, action: Action, what: string) {
-	const role = await roleIn(user.id, teamId);
+async function authorize(
+	event: GuardEvent,
+	user: SessionUser,
+	teamId: string,
+	action: Action,
+	what: string
+): Promise<{ user: SessionUser; role: Role }> {
+	const role = await callerRoleIn(event, user.id, teamId);
 	if (!role) {
 		notFound(what);
 	}
@@ -102,7 +103,7 @@ export async function requireProjectAction(event: GuardEvent, projectId: string,
 	if (!project) {
 		notFound('That project');
 	}
-	const { role } = await authorize(user, project.teamId, action, 'That project');
+	const { role } = await authorize(event, user, project.teamId, action, 'That project');
 	return { user, role, project };
 }
 
@@ -114,6 +115,6 @@ export async function requireRouteAction(event: GuardEvent, routeId: string, act
 	if (!route?.project) {
 		notFound('That route');
 	}
-	const { role } = await authorize(user, route.project.teamId, action, 'That route');
+	const { role } = await authorize(event, user, route.project.teamId, action, 'That route');
 	return { user, role, route, project: route.project };
 }

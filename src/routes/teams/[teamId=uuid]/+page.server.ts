@@ -5,6 +5,7 @@ import type { Actions, PageServerLoad } from './$types';
 import { can } from '$lib/policy';
 import { paths } from '$lib/paths';
 import { requireTeamAction } from '$lib/server/auth/guards';
+import { forgetCallerMemberships } from '$lib/server/auth/memberships';
 import { recentActivity } from '$lib/server/services/activity';
 import {
 	addMember,
@@ -36,10 +37,15 @@ export const load: PageServerLoad = async (event) => {
 	};
 };
 
-/** Runs a team rule change and turns a broken rule into a form error the page shows. */
-async function keepingRules(run: () => Promise<void>) {
+/**
+ * Runs a team rule change and turns a broken rule into a form error the page shows. The caller's
+ * memberships read by the guard are dropped: the change may be their own role, and the page and
+ * layout rendered after the action must show it.
+ */
+async function keepingRules(event: { locals: App.Locals }, run: () => Promise<void>) {
 	try {
 		await run();
+		forgetCallerMemberships(event);
 		return null;
 	} catch (caught) {
 		if (caught instanceof TeamRuleError) {
@@ -80,7 +86,7 @@ export const actions: Actions = {
 		if (!parsed.success) {
 			return fail(400, { problem: 'Choose a role.' });
 		}
-		return keepingRules(() =>
+		return keepingRules(event, () =>
 			changeRole(user, event.params.teamId, parsed.data.membershipId, parsed.data.role)
 		);
 	},
@@ -90,6 +96,8 @@ export const actions: Actions = {
 		if (!parsed.success) {
 			return fail(400, { problem: 'That member was not found.' });
 		}
-		return keepingRules(() => removeMember(user, event.params.teamId, parsed.data.membershipId));
+		return keepingRules(event, () =>
+			removeMember(user, event.params.teamId, parsed.data.membershipId)
+		);
 	}
 };
