@@ -5,7 +5,9 @@
 
 import type { Analysis } from '$lib/chem/analyze';
 import type { GroupPattern } from '$lib/chem/patterns';
+import type { QuantitiesAnswer } from '$lib/quantities/contract';
 import type { RouteDocument } from '$lib/route/document';
+import type { Azeotrope } from '$lib/rules/azeotropes';
 import type { CheckAnswer, Clash, StepCheck } from '$lib/rules/check/types';
 import type { CheckedPlanAnswer } from '$lib/rules/plan';
 import type { StabilityRating } from '$lib/rules/ids';
@@ -19,6 +21,10 @@ import type { RouteSummary } from '$lib/server/services/routes';
 export type AnalyzeAnswer = Analysis;
 /** `POST /api/check` and `GET /api/routes/{id}/check`. */
 export type { CheckAnswer, Clash, StepCheck };
+/** `POST /api/quantities` (src/lib/quantities/contract.ts). */
+export type { QuantitiesAnswer };
+/** `GET /api/azeotropes`: the rows of rules/azeotropes.json. */
+export type AzeotropesAnswer = { azeotropes: readonly Azeotrope[] };
 /** `POST /api/plan` and `POST /api/routes/{id}/plan`. */
 export type PlanAnswer = CheckedPlanAnswer;
 

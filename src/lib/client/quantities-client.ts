@@ -1,15 +1,12 @@
 // The browser's calls for the quantities table and the water-removal card (issue 14's contract).
 
-import type { QuantitiesAnswer, QuantitiesRequest, WaterLayer } from '$lib/quantities/contract';
+import type { AzeotropesAnswer, QuantitiesAnswer } from '$lib/api/answers';
+import type { QuantitiesRequest } from '$lib/quantities/contract';
+import type { Azeotrope } from '$lib/rules/azeotropes';
 import { callApi, jsonBody, type ApiResult } from './api';
 
-/** A solvent the trap can use, as `GET /api/azeotropes` lists it (the fields the picker needs). */
-export type AzeotropeOption = {
-	id: string;
-	name: string;
-	boilingPoint?: number;
-	waterLayer?: WaterLayer;
-};
+/** A solvent the trap can use, as `GET /api/azeotropes` lists it. */
+export type AzeotropeOption = Azeotrope;
 
 export type AzeotropeList = AzeotropeOption[] | { unavailable: string };
 
@@ -27,31 +24,10 @@ export class QuantitiesClient {
 
 	/** The solvents, or why there are none to pick (never an empty list passed off as the answer). */
 	async azeotropes(): Promise<AzeotropeList> {
-		const result = await callApi<{ azeotropes?: unknown }>('/api/azeotropes', {}, this.fetcher);
+		const result = await callApi<AzeotropesAnswer>('/api/azeotropes', {}, this.fetcher);
 		if (!result.ok) {
-			return {
-				unavailable:
-					result.status === 404
-						? 'The solvent list is not available on this server yet.'
-						: `The solvent list could not be loaded: ${result.message}`
-			};
+			return { unavailable: `The solvent list could not be loaded: ${result.message}` };
 		}
-		const rows = Array.isArray(result.data.azeotropes) ? result.data.azeotropes : [];
-		return rows.flatMap((row: Record<string, unknown>) => {
-			const id = typeof row.id === 'string' ? row.id : row.solvent;
-			if (typeof id !== 'string') {
-				return [];
-			}
-			return [
-				{
-					id,
-					name: typeof row.name === 'string' ? row.name : id,
-					...(typeof row.boilingPoint === 'number' ? { boilingPoint: row.boilingPoint } : {}),
-					...(row.waterLayer === 'lower' || row.waterLayer === 'upper'
-						? { waterLayer: row.waterLayer }
-						: {})
-				}
-			];
-		});
+		return [...result.data.azeotropes];
 	}
 }
