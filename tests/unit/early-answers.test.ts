@@ -102,6 +102,27 @@ describe('early answers on a keep-alive connection', () => {
 		await new Promise<void>((resolve) => cloneServer.close(() => resolve()));
 	});
 
+	it('reads a small refused body to its end, so the client gets the answer and keeps the connection', async () => {
+		const refuse: Handle = (input) =>
+			closeAfterUnreadBody({
+				...input,
+				resolve: async () =>
+					Response.json({ error: { code: 'cross-site', message: 'No.' } }, { status: 403 })
+			});
+		const refuseServer = serve(refuse);
+		await new Promise<void>((resolve) => refuseServer.listen(0, '127.0.0.1', resolve));
+		const refusePort = (refuseServer.address() as AddressInfo).port;
+		const agent = new Agent({ keepAlive: true, maxSockets: 1 });
+		const refused = await send(refusePort, agent, 'POST', Buffer.alloc(2048, 0x20));
+		expect(refused).toEqual({ status: 403, connection: 'keep-alive' });
+		// A large refused body is not read: the connection closes instead.
+		const large = await send(refusePort, agent, 'POST', Buffer.alloc(512 * 1024, 0x20));
+		expect(large).toEqual({ status: 403, connection: 'close' });
+		expect((await send(refusePort, agent, 'GET')).status).toBe(403);
+		agent.destroy();
+		await new Promise<void>((resolve) => refuseServer.close(() => resolve()));
+	});
+
 	it('keeps the connection open when nothing was left unread', async () => {
 		const agent = new Agent({ keepAlive: true, maxSockets: 1 });
 		expect(await send(port, agent, 'GET')).toEqual({ status: 200, connection: 'keep-alive' });
