@@ -12,9 +12,8 @@ import type { CheckAnswer, Clash, StepCheck } from '$lib/rules/check/types';
 import type { CheckedPlanAnswer } from '$lib/rules/plan';
 import type { StabilityRating } from '$lib/rules/ids';
 import type { Condition, ProtectingGroupConditions } from '$lib/rules/schemas';
-// Erased at build time (types only): the status vocabulary is the database model's, the list
-// row the routes service's.
-import type { RouteStatus } from '$lib/server/db/models/route';
+import type { OutboxStatus, ReviewEventAction, RouteStatus } from '$lib/review/contract';
+// Erased at build time (types only): the list row is the routes service's.
 import type { RouteSummary } from '$lib/server/services/routes';
 
 /** `POST /api/analyze`. */
@@ -35,6 +34,8 @@ export type RouteAnswer = {
 	name: string;
 	status: RouteStatus;
 	version: number;
+	/** The version the latest approval was given to; absent until the route is first approved. */
+	approvedVersion?: number;
 	document: RouteDocument;
 };
 
@@ -66,3 +67,64 @@ export type RulesAnswer = {
 	})[];
 	groups: readonly GroupPattern[];
 };
+
+/** A person as the review answers name them. */
+export type PersonRef = { id: string; name: string };
+
+/** One comment in `GET /api/routes/{id}/comments`; dates are ISO 8601 strings. */
+export type CommentAnswer = {
+	id: string;
+	/** The step's id in the route document; null for a comment on the whole route. */
+	stepId: string | null;
+	replyTo: string | null;
+	/** Null only when the author's account no longer exists. */
+	author: PersonRef | null;
+	/** The Markdown as written. */
+	body: string;
+	/** The body rendered to HTML and sanitised (no script, event handlers or javascript: links). */
+	html: string;
+	resolved: boolean;
+	createdAt: string;
+	/** When the author last changed the body; null if never. */
+	editedAt: string | null;
+};
+
+/** `GET /api/routes/{id}/comments`, oldest first. */
+export type CommentsAnswer = { comments: CommentAnswer[] };
+
+/** `POST /api/routes/{id}/comments` → 201. */
+export type CreatedCommentAnswer = { id: string };
+
+/** `PATCH /api/comments/{id}`: the comment as it now stands. */
+export type UpdatedCommentAnswer = CommentAnswer;
+
+/** `POST /api/routes/{id}/review`. */
+export type ReviewAnswer = { status: RouteStatus; version: number };
+
+/** One line of a route's review history (route page, report). */
+export type ReviewHistoryEntry = {
+	id: string;
+	action: ReviewEventAction;
+	actor: PersonRef | null;
+	/** The people asked to review (`request` only). */
+	reviewers: PersonRef[];
+	note: string | null;
+	version: number;
+	createdAt: string;
+};
+
+/** One message in `GET /api/outbox`; dates are ISO 8601 strings. */
+export type OutboxMessageAnswer = {
+	id: string;
+	to: string;
+	subject: string;
+	text: string;
+	status: OutboxStatus;
+	attempts: number;
+	lastError: string | null;
+	createdAt: string;
+	sentAt: string | null;
+};
+
+/** `GET /api/outbox` (leads): the messages of the caller's teams, newest first. */
+export type OutboxAnswer = { messages: OutboxMessageAnswer[] };

@@ -9,3 +9,6 @@ export type ApiErrorBody = { error: { code: string; message: string; details?: u
  */
 export const VERSION_CONFLICT = 'version_conflict';
 export type VersionConflictDetails = { currentVersion: number };
+
+/** 409 for a review action that does not fit the route's status (`POST /api/routes/{id}/review`). */
+export const INVALID_TRANSITION = 'invalid_transition';

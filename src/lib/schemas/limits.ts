@@ -17,6 +17,8 @@ export const FIELD_LIMITS = {
 	personName: { max: 120 },
 	teamName: { max: 120 },
 	tokenLabel: { min: 2, max: 80 },
+	commentBody: { min: 1, max: 10_000 },
+	reviewNote: { max: 2000 },
 	/** bcrypt reads only the first 72 bytes; a longer password would be cut without a word. */
 	password: { min: 10, maxBytes: 72 }
 } as const;

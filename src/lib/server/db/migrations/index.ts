@@ -3,6 +3,7 @@ import * as foundation from './0001-foundation';
 import * as routes from './0002-routes';
 import * as plannedRoutes from './0003-planned-routes';
 import * as sessionsAndSignInLimits from './0004-sessions-and-sign-in-limits';
+import * as reviewAndMail from './0005-review-and-mail';
 
 export type Migration = {
 	name: string;
@@ -18,5 +19,6 @@ export const migrations: Migration[] = [
 	{ name: '0001-foundation', ...foundation },
 	{ name: '0002-routes', ...routes },
 	{ name: '0003-planned-routes', ...plannedRoutes },
-	{ name: '0004-sessions-and-sign-in-limits', ...sessionsAndSignInLimits }
+	{ name: '0004-sessions-and-sign-in-limits', ...sessionsAndSignInLimits },
+	{ name: '0005-review-and-mail', ...reviewAndMail }
 ];

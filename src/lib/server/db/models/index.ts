@@ -1,10 +1,15 @@
 import type { Sequelize } from 'sequelize';
 import { ActivityEvent } from './activity-event';
 import { ApiToken } from './api-token';
+import { Comment } from './comment';
 import { Intermediate } from './intermediate';
+import { MailPreference } from './mail-preference';
 import { Membership } from './membership';
+import { OutboxMessage } from './outbox-message';
 import { PlannedRoute } from './planned-route';
 import { Project } from './project';
+import { ReceivedMail } from './received-mail';
+import { ReviewEvent } from './review-event';
 import { Route } from './route';
 import { Session } from './session';
 import { SetPasswordLink } from './set-password-link';
@@ -15,10 +20,15 @@ import { User } from './user';
 export {
 	ActivityEvent,
 	ApiToken,
+	Comment,
 	Intermediate,
+	MailPreference,
 	Membership,
+	OutboxMessage,
 	PlannedRoute,
 	Project,
+	ReceivedMail,
+	ReviewEvent,
 	Route,
 	Session,
 	SetPasswordLink,
@@ -42,7 +52,12 @@ export function initModels(sequelize: Sequelize) {
 		Intermediate,
 		Step,
 		PlannedRoute,
-		Session
+		Session,
+		Comment,
+		ReviewEvent,
+		OutboxMessage,
+		ReceivedMail,
+		MailPreference
 	]) {
 		model.initModel(sequelize);
 	}
@@ -58,4 +73,6 @@ export function initModels(sequelize: Sequelize) {
 	PlannedRoute.belongsTo(Route, { as: 'route', foreignKey: 'routeId' });
 	PlannedRoute.belongsTo(Route, { as: 'plannedFrom', foreignKey: 'plannedFromId' });
 	Session.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+	Comment.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+	ReviewEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
 }

@@ -11,9 +11,9 @@ import type { Intermediate } from './intermediate';
 import type { Project } from './project';
 import type { Step } from './step';
 import { FIELD_LIMITS } from '../../../schemas/limits';
+import { ROUTE_STATUSES, type RouteStatus } from '../../../review/contract';
 
-export const ROUTE_STATUSES = ['draft', 'in-review', 'changes-requested', 'approved'] as const;
-export type RouteStatus = (typeof ROUTE_STATUSES)[number];
+export { ROUTE_STATUSES, type RouteStatus };
 
 export class Route extends Model<InferAttributes<Route>, InferCreationAttributes<Route>> {
 	declare id: CreationOptional<string>;
