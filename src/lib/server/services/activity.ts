@@ -7,6 +7,7 @@ export type ActivityInput = {
 	kind: string;
 	summary: string;
 	projectId?: string | null;
+	routeId?: string | null;
 	details?: Record<string, unknown>;
 };
 
@@ -18,7 +19,7 @@ export async function recordActivity(input: ActivityInput, transaction?: Transac
 			kind: input.kind,
 			summary: input.summary,
 			projectId: input.projectId ?? null,
-			routeId: null,
+			routeId: input.routeId ?? null,
 			details: input.details ?? null
 		},
 		{ transaction }
