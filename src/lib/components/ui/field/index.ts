@@ -4,3 +4,4 @@ export { default as TextField } from './TextField.svelte';
 export { default as TextArea } from './TextArea.svelte';
 export { default as SelectField } from './SelectField.svelte';
 export { default as CheckboxField } from './CheckboxField.svelte';
+export { default as NumberField } from './NumberField.svelte';
