@@ -7,9 +7,10 @@ import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import * as review from '../../src/routes/api/routes/[routeId=uuid]/review/+server';
 import { ReviewEvent, Route, type Project } from '../../src/lib/server/db';
 import type { RouteStatus } from '../../src/lib/review/contract';
-import { reviewHistory } from '../../src/lib/server/services/review';
+import { approvedVersionOf, reviewHistory } from '../../src/lib/server/services/review';
 import { takeReviewAction } from '../../src/lib/server/services/review-actions';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+import { approvalsAgainstSaves, parallelVerdicts } from '../factories/review-races';
 
 let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
 let project: Project;
@@ -291,6 +292,58 @@ describe('two reviewers at once', () => {
 		const refused = settled.find((s) => s.status === 'rejected') as PromiseRejectedResult;
 		expect(refused.reason).toMatchObject({ status: 409, code: 'invalid_transition' });
 		expect(await ReviewEvent.count({ where: { routeId } })).toBe(1);
+	});
+});
+
+describe('approvals racing saves', () => {
+	for (const withVersion of [true, false]) {
+		it(`never leaves a route approved at a version nobody approved (${withVersion ? 'with' : 'without'} version)`, async () => {
+			const outcomes = await approvalsAgainstSaves(f.people, project, 6, withVersion);
+			for (const outcome of outcomes) {
+				expect(outcome.version).toBe(2);
+				if (outcome.status === 'approved') {
+					expect(outcome.approvedVersion).toBe(2);
+				} else {
+					expect(['draft', 'in-review']).toContain(outcome.status);
+				}
+			}
+		});
+	}
+
+	it('lets exactly one of ten verdicts from stale copies through', async () => {
+		const { passed, refusals, events } = await parallelVerdicts(f.people, project, 10);
+		expect(passed).toBe(1);
+		expect(refusals).toEqual(Array(9).fill('invalid_transition'));
+		expect(events).toBe(1);
+	});
+
+	it('answers version_conflict when a save lands between reading the route and approving it', async () => {
+		const routeId = await routeIn('in-review');
+		const seen = await stored(routeId);
+		await call(oneRoute.PUT, 'chemist', { routeId }, 'PUT', { version: 1, document: doc() });
+		const late = takeReviewAction(f.people.reviewer, 'reviewer', seen, project, {
+			action: 'approve',
+			version: 1
+		});
+		await expect(late).rejects.toMatchObject({
+			status: 409,
+			code: 'version_conflict',
+			details: { currentVersion: 2 }
+		});
+		expect((await stored(routeId)).status).toBe('in-review');
+	});
+});
+
+describe('an approval without a version', () => {
+	it('records the version stored when it lands, not the one its copy of the route had', async () => {
+		const routeId = await routeIn('in-review');
+		const seen = await stored(routeId);
+		await call(oneRoute.PUT, 'chemist', { routeId }, 'PUT', { version: 1, document: doc() });
+		const answer = await takeReviewAction(f.people.reviewer, 'reviewer', seen, project, {
+			action: 'approve'
+		});
+		expect(answer).toEqual({ status: 'approved', version: 2 });
+		expect(await approvedVersionOf(routeId)).toBe(2);
 	});
 });
 
