@@ -5,7 +5,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import * as routeList from '../../src/routes/api/projects/[projectId=uuid]/routes/+server';
 import * as oneRoute from '../../src/routes/api/routes/[routeId=uuid]/+server';
 import * as review from '../../src/routes/api/routes/[routeId=uuid]/review/+server';
-import { ReviewEvent, Route, type Project } from '../../src/lib/server/db';
+import { ActivityEvent, ReviewEvent, Route, type Project } from '../../src/lib/server/db';
 import type { RouteStatus } from '../../src/lib/review/contract';
 import { approvedVersionOf, reviewHistory } from '../../src/lib/server/services/review';
 import { takeReviewAction } from '../../src/lib/server/services/review-actions';
@@ -338,12 +338,17 @@ describe('an approval without a version', () => {
 	it('records the version stored when it lands, not the one its copy of the route had', async () => {
 		const routeId = await routeIn('in-review');
 		const seen = await stored(routeId);
-		await call(oneRoute.PUT, 'chemist', { routeId }, 'PUT', { version: 1, document: doc() });
+		await call(oneRoute.PUT, 'chemist', { routeId }, 'PUT', {
+			version: 1,
+			document: doc('Renamed meanwhile')
+		});
 		const answer = await takeReviewAction(f.people.reviewer, 'reviewer', seen, project, {
 			action: 'approve'
 		});
 		expect(answer).toEqual({ status: 'approved', version: 2 });
 		expect(await approvedVersionOf(routeId)).toBe(2);
+		const line = await ActivityEvent.findOne({ where: { routeId, kind: 'review.approved' } });
+		expect(line!.summary).toBe('Reviewer approved the route “Renamed meanwhile” (version 2).');
 	});
 });
 

@@ -72,14 +72,15 @@ function versionConflict(currentVersion: number, action: ReviewAction): ApiFailu
 
 /**
  * Moves the status when it is still one the action may start from (and, when the client sent
- * one, the version is still the one it saw); otherwise says which of the two changed.
+ * one, the version is still the one it saw); otherwise says which of the two changed. Returns
+ * the route as stored after the move.
  */
 async function claimTransition(
 	route: Route,
 	action: ReviewAction,
 	expectedVersion: number | undefined,
 	transaction: Transaction
-): Promise<number> {
+): Promise<Pick<Route, 'id' | 'name' | 'createdById' | 'version'>> {
 	const { from, to } = REVIEW_TRANSITIONS[action];
 	const [moved] = await Route.update(
 		{ status: to },
@@ -93,7 +94,10 @@ async function claimTransition(
 		}
 	);
 	// Read after the UPDATE: it holds the row, so no save can slip in before the commit.
-	const now = await Route.findByPk(route.id, { attributes: ['status', 'version'], transaction });
+	const now = await Route.findByPk(route.id, {
+		attributes: ['id', 'name', 'createdById', 'status', 'version'],
+		transaction
+	});
 	if (!now) {
 		throw new ApiFailure(404, 'not_found', 'That route does not exist, or is not shared with you.');
 	}
@@ -103,7 +107,7 @@ async function claimTransition(
 		}
 		throw versionConflict(now.version, action);
 	}
-	return now.version;
+	return now;
 }
 
 /**
@@ -138,7 +142,9 @@ export async function takeReviewAction(
 	}
 	await dbReady();
 	return Route.sequelize!.transaction(async (transaction) => {
-		const version = await claimTransition(route, action, body.version, transaction);
+		// The route as it stands once the status moved: a save may have renamed it meanwhile.
+		const current = await claimTransition(route, action, body.version, transaction);
+		const { version } = current;
 		await ReviewEvent.create(
 			{
 				routeId: route.id,
@@ -160,7 +166,7 @@ export async function takeReviewAction(
 				summary: activitySummary({
 					action,
 					actor,
-					routeName: route.name,
+					routeName: current.name,
 					version,
 					note,
 					reviewers
@@ -173,7 +179,7 @@ export async function takeReviewAction(
 			},
 			transaction
 		);
-		const context = { action, actor, route, project, version, note, reviewers };
+		const context = { action, actor, route: current, project, version, note, reviewers };
 		await queueMail(await reviewMailDrafts(context, transaction), transaction);
 		return { status: transition.to, version };
 	});

@@ -15,7 +15,7 @@ type Recipient = { id: string; name: string; email: string };
 export type ReviewMailContext = {
 	action: ReviewAction;
 	actor: SessionUser;
-	route: Route;
+	route: Pick<Route, 'id' | 'name' | 'createdById'>;
 	project: Project;
 	/** The route's version the action was taken on. */
 	version: number;
