@@ -58,6 +58,9 @@ const EXPECTED: Record<string, Expectation> = {
 	'GET /api/routes/[routeId=uuid]/export': apiRead,
 	'POST /api/routes/[routeId=uuid]/plan': apiRead,
 	'POST /api/routes/[routeId=uuid]/plan/[rank=rank]/save': apiEdit,
+	// Every member reaches the service; which role may take which action (the body says) is
+	// tested action by action in api-review.test.ts.
+	'POST /api/routes/[routeId=uuid]/review': apiRead,
 	'action createToken /account': pageAnyone,
 	'action revokeToken /account': pageAnyone,
 	'action changePassword /account': pageAnyone,

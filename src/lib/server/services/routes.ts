@@ -5,6 +5,7 @@ import type { SessionUser } from '../../types';
 import { dbReady, Intermediate, PlannedRoute, Project, Route, Step } from '../db';
 import { assertRouteWithinLimits } from '../route-limits';
 import { recordActivity } from './activity';
+import { endApproval } from './review-actions';
 
 export type RouteSummary = {
 	id: string;
@@ -226,7 +227,8 @@ export async function routeDocumentAt(route: Route, version: number): Promise<Ro
 
 /**
  * Replaces the route's content when `expectedVersion` is still current; otherwise writes
- * nothing and throws VersionConflict. Returns the new version.
+ * nothing and throws VersionConflict. Returns the new version. An approved route goes back to
+ * draft in the same transaction; a route in review keeps its status.
  */
 export async function saveRoute(
 	actor: SessionUser,
@@ -259,6 +261,7 @@ export async function saveRoute(
 			},
 			transaction
 		);
+		await endApproval(actor, route, doc.name, expectedVersion, teamId, transaction);
 		return expectedVersion + 1;
 	});
 }

@@ -6,14 +6,29 @@ import { VERSION_CONFLICT, type VersionConflictDetails } from '$lib/api/errors';
 import { apiError, apiHandler, readJson } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
 import { routeDocumentOr422 } from '$lib/server/route-api';
+import { approvedVersionOf } from '$lib/server/services/review';
 import { routeDocument, saveRoute, VersionConflict } from '$lib/server/services/routes';
 
-/** `GET /api/routes/{id}` → `{ id, projectId, name, status, version, document }`. */
+/**
+ * `GET /api/routes/{id}` → `{ id, projectId, name, status, version, approvedVersion?, document }`;
+ * `approvedVersion` once the route has ever been approved (it stays after an edit ends the approval).
+ */
 export const GET: RequestHandler = apiHandler(async (event) => {
 	const { route } = await requireRouteAction(event, event.params.routeId, 'project.read');
-	const document = await routeDocument(route);
+	const [document, approvedVersion] = await Promise.all([
+		routeDocument(route),
+		approvedVersionOf(route.id)
+	]);
 	const { id, projectId, name, status, version } = route;
-	return json({ id, projectId, name, status, version, document } satisfies RouteAnswer);
+	return json({
+		id,
+		projectId,
+		name,
+		status,
+		version,
+		...(approvedVersion === null ? {} : { approvedVersion }),
+		document
+	} satisfies RouteAnswer);
 });
 
 const saveBody = z.object({ version: z.number().int().positive(), document: z.unknown() });
