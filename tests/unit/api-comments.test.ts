@@ -68,11 +68,15 @@ describe('comments API: who may list and add', () => {
 		expect(await Comment.count({ where: { routeId: route.id } })).toBe(3);
 	});
 
-	it('refuses an empty body with 400 and writes nothing', async () => {
+	it('refuses an empty body, or one with a NUL, with 400 and writes nothing', async () => {
 		const before = await Comment.count();
 		const empty = await post('chemist', { body: '   ' });
 		expect(empty.status).toBe(400);
 		expect(empty.body.error.code).toBe('invalid_body');
+		// PostgreSQL refuses NUL in text; the body must be refused before it gets there.
+		const nul = await post('chemist', { body: 'TBS\u0000Cl' });
+		expect(nul.status).toBe(400);
+		expect(JSON.stringify(nul.body.error.details)).toContain('control characters');
 		expect(await Comment.count()).toBe(before);
 	});
 });
