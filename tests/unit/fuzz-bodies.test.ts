@@ -2,6 +2,7 @@ import { isActionFailure, isHttpError, isRedirect, type RequestEvent } from '@sv
 import { beforeAll, describe, expect, it } from 'vitest';
 import { requireFormBodies } from '../../src/lib/server/hooks/form-bodies';
 import { Project } from '../../src/lib/server/db';
+import { addComment } from '../../src/lib/server/services/comment-writes';
 import { createRoute } from '../../src/lib/server/services/routes';
 import { freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 import { concrete, discoverEndpoints, routeModule, type Endpoint } from '../factories/route-tree';
@@ -53,6 +54,12 @@ const JSON_BODIES: Body[] = [
 		name: 'save with NUL',
 		contentType: 'application/json',
 		body: JSON.stringify({ version: 1, document: NUL_DOCUMENT }),
+		nul: true
+	},
+	{
+		name: 'comment with NUL',
+		contentType: 'application/json',
+		body: JSON.stringify({ body: 'TBS\u0000 then PCC', resolved: true }),
 		nul: true
 	},
 	{
@@ -186,9 +193,11 @@ async function send(endpoint: Endpoint, body: Body): Promise<Verdict> {
 		intermediates: [],
 		steps: []
 	});
+	const comment = await addComment(f.people.lead, route, project, { body: 'Fuzz' });
 	const { params, path } = concrete(endpoint.route, {
 		projectId: project.id,
 		routeId: route.id,
+		commentId: comment.id,
 		teamId: f.team.id,
 		rank: '1'
 	});

@@ -7,6 +7,7 @@ import {
 	routeModule,
 	type Endpoint as Entry
 } from '../factories/route-tree';
+import { addComment } from '../../src/lib/server/services/comment-writes';
 import { createRoute } from '../../src/lib/server/services/routes';
 
 // Every endpoint method and form action in the route tree, run as every kind of caller. The list
@@ -31,6 +32,7 @@ const row = (
 const apiAnyone = row('ok', 'ok', 'ok', 'ok', 'ok', '401');
 const apiRead = row('ok', 'ok', 'ok', 'ok', '404', '401');
 const apiEdit = row('ok', 'ok', '403', '403', '404', '401');
+const apiComment = row('ok', 'ok', 'ok', '403', '404', '401');
 // Pages: the sign-in page instead of 401.
 const pageAnyone = row('ok', 'ok', 'ok', 'ok', 'ok', 'sign-in');
 const pageEdit = row('ok', 'ok', '403', '403', '404', 'sign-in');
@@ -61,6 +63,9 @@ const EXPECTED: Record<string, Expectation> = {
 	// Every member reaches the service; which role may take which action (the body says) is
 	// tested action by action in api-review.test.ts.
 	'POST /api/routes/[routeId=uuid]/review': apiRead,
+	'GET /api/routes/[routeId=uuid]/comments': apiRead,
+	'POST /api/routes/[routeId=uuid]/comments': apiComment,
+	'PATCH /api/comments/[commentId=uuid]': apiComment,
 	'action createToken /account': pageAnyone,
 	'action revokeToken /account': pageAnyone,
 	'action changePassword /account': pageAnyone,
@@ -122,9 +127,11 @@ async function call(entry: Entry, caller: Caller): Promise<Outcome> {
 		intermediates: [],
 		steps: []
 	});
+	const comment = await addComment(f.people.chemist, route, project, { body: 'Role table' });
 	const ids: Record<string, string> = {
 		projectId: project.id,
 		routeId: route.id,
+		commentId: comment.id,
 		teamId: f.team.id,
 		rank: '1',
 		token: 'x'

@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import type { Action } from '../policy';
 import { FIELD_LIMITS } from '../schemas/limits';
+import { text } from '../schemas/text';
 
 export const ROUTE_STATUSES = ['draft', 'in-review', 'changes-requested', 'approved'] as const;
 export type RouteStatus = (typeof ROUTE_STATUSES)[number];
@@ -49,8 +50,8 @@ export const REVIEWER_GRANT: Action = 'route.review';
 export const OUTBOX_STATUSES = ['queued', 'sending', 'sent', 'failed'] as const;
 export type OutboxStatus = (typeof OUTBOX_STATUSES)[number];
 
-const commentBody = z
-	.string()
+// From text(), so a NUL is refused with a message rather than stored (PostgreSQL would 500).
+const commentBody = text()
 	.trim()
 	.min(1, 'Write something first.')
 	.max(FIELD_LIMITS.commentBody.max, `At most ${FIELD_LIMITS.commentBody.max} characters.`);

@@ -1,7 +1,7 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { can, ROLE_LABELS, type Action, type Role } from '../../policy';
 import { paths } from '../../paths';
-import { dbReady, Project, Route } from '../db';
+import { Comment, dbReady, Project, Route, User } from '../db';
 import type { SessionUser } from './credentials';
 import { callerRoleIn } from './memberships';
 
@@ -117,4 +117,24 @@ export async function requireRouteAction(event: GuardEvent, routeId: string, act
 	}
 	const { role } = await authorize(event, user, route.project.teamId, action, 'That route');
 	return { user, role, route, project: route.project };
+}
+
+/**
+ * Loads a comment with its route and project, and checks the action in the project's team: a
+ * comment is reached through its route, so another team's comment is a 404 like its route.
+ */
+export async function requireCommentAction(event: GuardEvent, commentId: string, action: Action) {
+	const user = requireUser(event);
+	await dbReady();
+	const comment = await Comment.findByPk(commentId, {
+		include: [{ model: User, as: 'author', attributes: ['id', 'name'] }]
+	});
+	const route = comment
+		? await Route.findByPk(comment.routeId, { include: [{ model: Project, as: 'project' }] })
+		: null;
+	if (!comment || !route?.project) {
+		notFound('That comment');
+	}
+	const { role } = await authorize(event, user, route.project.teamId, action, 'That comment');
+	return { user, role, comment, route, project: route.project };
 }
