@@ -43,10 +43,12 @@ describe('mail settings', () => {
 	});
 
 	it('refuse a bad value and name the setting', () => {
-		expect(() => mailConfigFromEnv({ SMTP_FAKE_PORT: 'twenty' })).toThrow(/fakePort/);
+		expect(() => mailConfigFromEnv({ SMTP_FAKE_PORT: 'twenty' })).toThrow(/SMTP_FAKE_PORT: /);
 		expect(() => mailConfigFromEnv({ SMTP_URL: 'relay.lab.example' })).toThrow(/SMTP_URL/);
 		// A send that can outlast its claim could be claimed and sent again by another server.
-		expect(() => mailConfigFromEnv({ MAIL_SEND_TIMEOUT_SECONDS: '40' })).toThrow(/half the claim/);
+		expect(() => mailConfigFromEnv({ MAIL_SEND_TIMEOUT_SECONDS: '40' })).toThrow(
+			/MAIL_SEND_TIMEOUT_SECONDS: .*half the claim/
+		);
 	});
 
 	it('back off base, twice, four times … up to the cap', () => {

@@ -64,33 +64,38 @@ export function mailConfig(overrides: Partial<MailConfig> = {}): MailConfig {
 	return mailConfigSchema.parse({ ...DEFAULT_MAIL_CONFIG, ...overrides });
 }
 
-const seconds = (value: string | undefined) =>
-	value === undefined || value.trim() === '' ? undefined : Number(value) * 1000;
-const setting = (value: string | undefined) =>
-	value === undefined || value.trim() === '' ? undefined : value.trim();
+/** Which environment variable sets each field, and whether it is given in seconds. */
+const ENV_SETTINGS: Record<keyof MailConfig, { name: string; seconds?: true } | null> = {
+	smtpUrl: { name: 'SMTP_URL' },
+	fakePort: { name: 'SMTP_FAKE_PORT' },
+	from: { name: 'MAIL_FROM' },
+	maxAttempts: { name: 'MAIL_MAX_ATTEMPTS' },
+	backoffBaseMs: { name: 'MAIL_BACKOFF_SECONDS', seconds: true },
+	backoffCapMs: { name: 'MAIL_BACKOFF_CAP_SECONDS', seconds: true },
+	claimLeaseMs: { name: 'MAIL_CLAIM_LEASE_SECONDS', seconds: true },
+	pollIntervalMs: { name: 'MAIL_POLL_SECONDS', seconds: true },
+	sendTimeoutMs: { name: 'MAIL_SEND_TIMEOUT_SECONDS', seconds: true },
+	batchSize: null
+};
 
 /**
- * The settings from the environment: SMTP_URL, SMTP_FAKE_PORT, MAIL_FROM, MAIL_MAX_ATTEMPTS,
- * MAIL_BACKOFF_SECONDS, MAIL_BACKOFF_CAP_SECONDS, MAIL_CLAIM_LEASE_SECONDS, MAIL_POLL_SECONDS,
- * MAIL_SEND_TIMEOUT_SECONDS. A bad value throws with the setting's name, so a typo stops the start
- * instead of quietly changing how mail behaves.
+ * The settings from the environment (see ENV_SETTINGS; README "Mail"). A bad value throws with
+ * the variable's name, so a typo stops the start instead of quietly changing how mail behaves.
  */
 export function mailConfigFromEnv(env: NodeJS.ProcessEnv = process.env): MailConfig {
-	const given = {
-		smtpUrl: setting(env.SMTP_URL) ?? null,
-		fakePort: setting(env.SMTP_FAKE_PORT),
-		from: setting(env.MAIL_FROM),
-		maxAttempts: setting(env.MAIL_MAX_ATTEMPTS),
-		backoffBaseMs: seconds(env.MAIL_BACKOFF_SECONDS),
-		backoffCapMs: seconds(env.MAIL_BACKOFF_CAP_SECONDS),
-		claimLeaseMs: seconds(env.MAIL_CLAIM_LEASE_SECONDS),
-		pollIntervalMs: seconds(env.MAIL_POLL_SECONDS),
-		sendTimeoutMs: seconds(env.MAIL_SEND_TIMEOUT_SECONDS)
-	};
-	const defined = Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined));
-	const parsed = mailConfigSchema.safeParse({ ...DEFAULT_MAIL_CONFIG, ...defined });
+	const given: Record<string, unknown> = {};
+	for (const [field, setting] of Object.entries(ENV_SETTINGS)) {
+		const raw = setting ? env[setting.name]?.trim() : undefined;
+		if (raw) {
+			given[field] = setting?.seconds ? Number(raw) * 1000 : raw;
+		}
+	}
+	const parsed = mailConfigSchema.safeParse({ ...DEFAULT_MAIL_CONFIG, ...given });
 	if (!parsed.success) {
-		const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
+		const problems = parsed.error.issues.map((issue) => {
+			const field = issue.path[0] as keyof MailConfig;
+			return `${ENV_SETTINGS[field]?.name ?? field}: ${issue.message}`;
+		});
 		throw new Error(`The mail settings are not valid: ${problems.join('; ')}`);
 	}
 	return parsed.data;
