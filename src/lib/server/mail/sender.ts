@@ -4,7 +4,7 @@ import nodemailer, { type Transporter } from 'nodemailer';
 import { Op } from 'sequelize';
 import { dbReady, OutboxMessage } from '../db';
 import { backoffMs, smtpTarget, type MailConfig } from './config';
-import { mailQueued } from './outbox';
+import { mailQueued, outboxMessageId } from './outbox';
 
 /** What one round did, for tests and logs. */
 export type DeliveryRound = { sent: number; retried: number; failed: number; lostClaims: number };
@@ -151,7 +151,7 @@ export class MailSender {
 				subject: message.subject,
 				text: message.text,
 				// The same id on every try, so a receiver can tell a retry from a second message.
-				messageId: `<${message.id}@orthogon>`
+				messageId: outboxMessageId(message.id)
 			});
 		} catch (caught) {
 			await this.#recordFailure(message, caught, round);

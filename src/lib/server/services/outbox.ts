@@ -1,6 +1,7 @@
 import { Op } from 'sequelize';
 import type { OutboxMessageAnswer } from '../../api/answers';
-import { dbReady, Membership, OutboxMessage, ReceivedMail, User } from '../db';
+import { dbReady, OutboxMessage, ReceivedMail } from '../db';
+import { outboxMessageId } from '../mail/outbox';
 
 /** The most messages one outbox answer holds (newest first); the answer says when there are more. */
 export const OUTBOX_LIST_LIMIT = 500;
@@ -44,36 +45,25 @@ export type ReceivedMailRow = {
 };
 
 /**
- * What the local mail catcher received for the teams' members, newest first. The catcher keeps
- * the To header as written, so a member matches when their address appears in it.
+ * What the local mail catcher received of these outbox messages, newest first, matched by the
+ * Message-ID the sender sets. Matching by recipient instead would show a lead the mails another
+ * team sent to a person who belongs to both teams.
  */
-export async function receivedByMembersOf(teamIds: string[]): Promise<Listed<ReceivedMailRow>> {
-	await dbReady();
-	const members = await Membership.findAll({
-		where: { teamId: { [Op.in]: teamIds } },
-		include: [{ model: User, as: 'user', attributes: ['email'] }]
-	});
-	const emails = [...new Set(members.flatMap((m) => (m.user ? [m.user.email] : [])))];
-	if (emails.length === 0) {
-		return { items: [], more: false };
+export async function receivedOf(outboxIds: string[]): Promise<ReceivedMailRow[]> {
+	if (outboxIds.length === 0) {
+		return [];
 	}
+	await dbReady();
 	const rows = await ReceivedMail.findAll({
-		// LIKE reads `_` and `%` as wildcards (and SQLite has no default escape), so it only narrows
-		// the rows; the exact match is made below.
-		where: { [Op.or]: emails.map((email) => ({ to: { [Op.like]: `%${email}%` } })) },
-		order: [['receivedAt', 'DESC']],
-		limit: OUTBOX_LIST_LIMIT + 1
+		where: { messageId: { [Op.in]: outboxIds.map(outboxMessageId) } },
+		order: [['receivedAt', 'DESC']]
 	});
-	const addressed = rows.filter((row) => emails.some((email) => row.to.includes(email)));
-	return {
-		items: addressed.slice(0, OUTBOX_LIST_LIMIT).map((row) => ({
-			id: row.id,
-			from: row.from,
-			to: row.to,
-			subject: row.subject,
-			text: row.text,
-			receivedAt: row.receivedAt.toISOString()
-		})),
-		more: rows.length > OUTBOX_LIST_LIMIT
-	};
+	return rows.map((row) => ({
+		id: row.id,
+		from: row.from,
+		to: row.to,
+		subject: row.subject,
+		text: row.text,
+		receivedAt: row.receivedAt.toISOString()
+	}));
 }
