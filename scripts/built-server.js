@@ -35,6 +35,8 @@ export async function startBuiltServer({ dataDir, port, env = {}, quiet = true }
 		HOST: '127.0.0.1',
 		PORT: String(port),
 		ORIGIN: origin,
+		// The server's local mail catcher gets a free port of its own, never a dev server's 2525.
+		SMTP_FAKE_PORT: String(await freePort()),
 		...env
 	});
 	const child = spawn(process.execPath, ['build/index.js'], {

@@ -12,6 +12,10 @@ import bcrypt from 'bcryptjs';
 import pg from 'pg';
 
 const PORTS = [4301, 4302];
+// Both servers are given one mail catcher port: the first to start listens there, the second
+// finds it taken, and its sender delivers to the first one's catcher (same host).
+const SMTP_FAKE_PORT = PORTS[0] + 1000;
+const MAILS = 12;
 // Both servers sit behind one address, as behind a proxy: the same ORIGIN and AUTH_SECRET.
 const ORIGIN = 'http://orthogon.test';
 const AUTH_SECRET = 'two-server-test-secret-not-for-production-0123456789';
@@ -41,6 +45,7 @@ export async function runTwoServerTest(postgresUrl, log = console.log) {
 		await addPerson(databaseUrl);
 		await checkSessions(check);
 		await checkSignInLimits(check);
+		await checkMail(check, databaseUrl);
 	} catch (caught) {
 		check(
 			'the two-server test ran to the end',
@@ -130,6 +135,63 @@ async function checkSignInLimits(check) {
 	);
 }
 
+/**
+ * Mail queued on the shared database is delivered by both servers' senders between them, each
+ * message exactly once, to the one catcher that got the port.
+ */
+async function checkMail(check, databaseUrl) {
+	const ids = await withClient(databaseUrl, async (client) => {
+		const team = randomUUID();
+		await client.query(
+			'INSERT INTO teams (id, name, "createdAt", "updatedAt") VALUES ($1, $2, now(), now())',
+			[team, 'Two-server mail']
+		);
+		const made = [];
+		for (let i = 0; i < MAILS; i++) {
+			const id = randomUUID();
+			made.push(id);
+			await client.query(
+				`INSERT INTO outbox_messages (id, "teamId", "to", subject, text, status, attempts, "nextAttemptAt", "createdAt", "updatedAt")
+				 VALUES ($1, $2, $3, $4, 'Sent by whichever server claims it.', 'queued', 0, now(), now(), now())`,
+				[id, team, `reader${i}@lab.example`, `Two-server mail ${i}`]
+			);
+		}
+		return made;
+	});
+	const deadline = Date.now() + 30_000;
+	let sent = 0;
+	while (Date.now() < deadline) {
+		sent = await withClient(databaseUrl, async (client) => {
+			const { rows } = await client.query(
+				`SELECT count(*)::int AS n FROM outbox_messages WHERE id = ANY($1) AND status = 'sent'`,
+				[ids]
+			);
+			return rows[0].n;
+		});
+		if (sent === MAILS) {
+			break;
+		}
+		await new Promise((r) => setTimeout(r, 250));
+	}
+	check(
+		`the two servers' senders deliver all ${MAILS} queued mails`,
+		sent === MAILS,
+		`${sent} sent`
+	);
+	const received = await withClient(databaseUrl, async (client) => {
+		const { rows } = await client.query(
+			`SELECT "messageId", count(*)::int AS n FROM received_mails WHERE "messageId" = ANY($1) GROUP BY "messageId"`,
+			[ids.map((id) => `<${id}@orthogon>`)]
+		);
+		return rows;
+	});
+	check(
+		'the one catcher received each of them exactly once',
+		received.length === MAILS && received.every((r) => r.n === 1),
+		JSON.stringify(received)
+	);
+}
+
 function signIn(base, password) {
 	return post(
 		base,
@@ -176,7 +238,9 @@ function startServer(port, databaseUrl, dataDir) {
 		AUTH_SECRET,
 		DATABASE_URL: databaseUrl,
 		ORTHOGON_DATA_DIR: dataDir,
-		ORTHOGON_DEMO: '0'
+		ORTHOGON_DEMO: '0',
+		SMTP_FAKE_PORT: String(SMTP_FAKE_PORT),
+		SMTP_URL: ''
 	};
 	const child = spawn(process.execPath, ['build/index.js'], {
 		env,

@@ -13,12 +13,19 @@ import { guardPages } from '$lib/server/hooks/guard-pages';
 import { identify } from '$lib/server/hooks/identify';
 import { securityHeaders } from '$lib/server/hooks/security-headers';
 import { limitScriptedSignIn } from '$lib/server/hooks/sign-in-limit';
+import { startMail, stopMail } from '$lib/server/mail/start';
 
 export const init: ServerInit = async () => {
 	await dbReady();
 	if (process.env.ORTHOGON_DEMO !== '0') {
 		await seedDemoIfEmpty();
 	}
+	// The outbox sender and (without SMTP_URL) the local mail catcher run beside every app server;
+	// adapter-node announces a graceful stop with this event, after the HTTP server has closed.
+	const mail = await startMail();
+	process.once('sveltekit:shutdown', () => {
+		void stopMail(mail);
+	});
 };
 
 // One handle per concern, in the order a request meets them; each lives in $lib/server/hooks.

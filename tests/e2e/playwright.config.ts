@@ -51,6 +51,9 @@ export default defineConfig({
 			PORT: String(PORT),
 			ORIGIN: `http://localhost:${PORT}`,
 			ORTHOGON_DATA_DIR: dataDir,
+			// The local mail catcher's port follows the e2e port, so it never meets a dev server's
+			// 2525 (nor vite's 5173, which PORT + 1000 would be).
+			SMTP_FAKE_PORT: String(PORT + 2000),
 			// Every test signs in from 127.0.0.1; the per-address limit has its own unit test.
 			ORTHOGON_SIGNIN_LIMIT_PER_ADDRESS: '1000',
 			AUTH_SECRET: 'e2e-only-secret-not-for-production-use-0123456789'

@@ -66,9 +66,12 @@ const EXPECTED: Record<string, Expectation> = {
 	'GET /api/routes/[routeId=uuid]/comments': apiRead,
 	'POST /api/routes/[routeId=uuid]/comments': apiComment,
 	'PATCH /api/comments/[commentId=uuid]': apiComment,
+	// Leads only, of any team: the outsider leads the other team and reads that team's outbox.
+	'GET /api/outbox': row('ok', '403', '403', '403', 'ok', '401'),
 	'action createToken /account': pageAnyone,
 	'action revokeToken /account': pageAnyone,
 	'action changePassword /account': pageAnyone,
+	'action mailChoices /account': pageAnyone,
 	'action create /projects': row('ok', 'ok', '403', '403', '404', 'sign-in'),
 	'action update /projects/[projectId=uuid]': pageEdit,
 	'action archive /projects/[projectId=uuid]': pageEdit,

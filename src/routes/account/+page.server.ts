@@ -11,17 +11,27 @@ import {
 import { requirePasswordSession, requireUser } from '$lib/server/auth/guards';
 import { teamsOfCaller } from '$lib/server/auth/memberships';
 import { endOtherSessions } from '$lib/server/auth/sessions';
+import { commentMailsOn, setCommentMails } from '$lib/server/services/mail-preferences';
 import { changeOwnPassword } from '$lib/server/services/users';
-import { changePasswordDefaults, changePasswordSchema, createTokenSchema } from './schema';
+import {
+	changePasswordDefaults,
+	changePasswordSchema,
+	createTokenSchema,
+	mailChoicesSchema
+} from './schema';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireUser(event);
-	const [tokens, teams, tokenForm, passwordForm] = await Promise.all([
+	const [tokens, teams, tokenForm, passwordForm, commentMails] = await Promise.all([
 		listApiTokens(user.id),
 		teamsOfCaller(event, user.id),
 		superValidate(zod4(createTokenSchema)),
-		superValidate(changePasswordDefaults, zod4(changePasswordSchema), { errors: false })
+		superValidate(changePasswordDefaults, zod4(changePasswordSchema), { errors: false }),
+		commentMailsOn(user.id)
 	]);
+	const mailForm = await superValidate({ commentMails }, zod4(mailChoicesSchema), {
+		errors: false
+	});
 	return {
 		tokens: tokens.map((t) => ({
 			id: t.id,
@@ -32,7 +42,8 @@ export const load: PageServerLoad = async (event) => {
 		})),
 		teams,
 		tokenForm,
-		passwordForm
+		passwordForm,
+		mailForm
 	};
 };
 
@@ -54,6 +65,15 @@ export const actions: Actions = {
 			return fail(404, { problem: 'That token is already revoked.' });
 		}
 		return { revoked: true };
+	},
+	mailChoices: async (event) => {
+		const user = requireUser(event);
+		const form = await superValidate(event.request, zod4(mailChoicesSchema));
+		if (!form.valid) {
+			return fail(400, { mailForm: form });
+		}
+		await setCommentMails(user.id, form.data.commentMails);
+		return message(form, `Saved: comment mails are ${form.data.commentMails ? 'on' : 'off'}.`);
 	},
 	changePassword: async (event) => {
 		const user = requirePasswordSession(event);

@@ -30,3 +30,7 @@ export const changePasswordSchema = z
 // Ticked at first: a password is usually changed because it may have leaked, and a token made by
 // whoever had it would otherwise keep working. Unticked, scripts keep running.
 export const changePasswordDefaults = { current: '', next: '', confirm: '', revokeTokens: true };
+
+// An unticked checkbox sends nothing, so absent means "off" when the form is posted; the page
+// fills in the person's current choice.
+export const mailChoicesSchema = z.object({ commentMails: z.boolean().default(false) });

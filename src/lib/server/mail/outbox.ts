@@ -13,6 +13,14 @@ export type MailDraft = { teamId: string; to: string; subject: string; text: str
 export const mailQueued = new EventEmitter();
 
 /**
+ * The Message-ID the sender gives an outbox message, the same on every try, so a receiver can
+ * tell a retry from a new mail and the Outbox page can find the local catcher's copy.
+ */
+export function outboxMessageId(outboxId: string): string {
+	return `<${outboxId}@orthogon>`;
+}
+
+/**
  * Writes the messages to the outbox inside the caller's transaction, so the change and its mails
  * commit together or not at all. Nothing is sent here: the request never waits for a mail server.
  */
