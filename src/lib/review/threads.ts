@@ -1,0 +1,69 @@
+// Comments arranged as conversations: each thread is a top-level comment with every reply under
+// it (replies to replies included), oldest first, and threads are sorted to the step they belong to.
+// Pure: the review copy and the route page can both read it.
+
+import type { CommentAnswer } from '../api/answers';
+
+export type CommentThread = { root: CommentAnswer; replies: CommentAnswer[] };
+
+export type SortedThreads = {
+	/** Threads on each step that is still in the route, by step id. */
+	byStep: Map<string, CommentThread[]>;
+	/** Threads on the route as a whole. */
+	route: CommentThread[];
+	/** Threads on steps the route no longer has: kept, never dropped without a word. */
+	onRemovedSteps: CommentThread[];
+};
+
+/**
+ * Threads of `comments` (oldest first, as `listComments` gives them), e.g. a, b replying to a and
+ * c replying to b → one thread `{ root: a, replies: [b, c] }`. A reply whose parent is missing
+ * starts a thread of its own, and a loop of replies ends at the first comment met twice.
+ */
+export function commentThreads(comments: readonly CommentAnswer[]): CommentThread[] {
+	const byId = new Map(comments.map((comment) => [comment.id, comment]));
+	const rootOf = (comment: CommentAnswer): CommentAnswer => {
+		const seen = new Set<string>();
+		let current = comment;
+		while (current.replyTo && !seen.has(current.id)) {
+			seen.add(current.id);
+			const parent = byId.get(current.replyTo);
+			if (!parent) {
+				break;
+			}
+			current = parent;
+		}
+		return current;
+	};
+	const threads = new Map<string, CommentThread>();
+	for (const comment of comments) {
+		const root = rootOf(comment);
+		const thread = threads.get(root.id) ?? { root, replies: [] };
+		threads.set(root.id, thread);
+		if (comment !== root) {
+			thread.replies.push(comment);
+		}
+	}
+	// In the order each conversation began: a root comes before its replies.
+	return [...threads.values()];
+}
+
+/** Threads sorted to the steps of a route (by the thread's first comment), the route's own, and the rest. */
+export function sortThreads(
+	comments: readonly CommentAnswer[],
+	stepIds: Iterable<string>
+): SortedThreads {
+	const steps = new Set(stepIds);
+	const sorted: SortedThreads = { byStep: new Map(), route: [], onRemovedSteps: [] };
+	for (const thread of commentThreads(comments)) {
+		const stepId = thread.root.stepId;
+		if (stepId === null) {
+			sorted.route.push(thread);
+		} else if (steps.has(stepId)) {
+			sorted.byStep.set(stepId, [...(sorted.byStep.get(stepId) ?? []), thread]);
+		} else {
+			sorted.onRemovedSteps.push(thread);
+		}
+	}
+	return sorted;
+}
