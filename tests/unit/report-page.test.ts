@@ -2,6 +2,7 @@ import { isHttpError, type RequestEvent } from '@sveltejs/kit';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { load } from '../../src/routes/routes/[routeId=uuid]/report/+page.server';
 import type { RouteDocument } from '../../src/lib/route/document';
+import type { ReviewCopy } from '../../src/lib/server/services/review-copy';
 import { createRoute, saveRoute } from '../../src/lib/server/services/routes';
 import { Comment, ReviewEvent, Route } from '../../src/lib/server/db';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
@@ -51,7 +52,10 @@ const document: RouteDocument = {
 let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
 let routeId = '';
 type Who = keyof typeof f.people;
-type Copy = Exclude<Awaited<ReturnType<typeof load>>, void>;
+type Copy = ReviewCopy & {
+	route: { name: string; statusLabel: string; version: number };
+	project: { name: string };
+};
 
 async function open(who: Who, id = routeId) {
 	const event = fakeEvent({ user: f.people[who], path: `/routes/${id}/report` }) as RequestEvent & {
