@@ -17,35 +17,25 @@ export type SortedThreads = {
 
 /**
  * Threads of `comments` (oldest first, as `listComments` gives them), e.g. a, b replying to a and
- * c replying to b → one thread `{ root: a, replies: [b, c] }`. A reply whose parent is missing
- * starts a thread of its own, and a loop of replies ends at the first comment met twice.
+ * c replying to b → one thread `{ root: a, replies: [b, c] }`. A reply joins its parent's thread
+ * when the parent came before it; otherwise (a parent that is gone, or stored data that loops) it
+ * begins a thread of its own, so every comment is printed exactly once.
  */
 export function commentThreads(comments: readonly CommentAnswer[]): CommentThread[] {
-	const byId = new Map(comments.map((comment) => [comment.id, comment]));
-	const rootOf = (comment: CommentAnswer): CommentAnswer => {
-		const seen = new Set<string>();
-		let current = comment;
-		while (current.replyTo && !seen.has(current.id)) {
-			seen.add(current.id);
-			const parent = byId.get(current.replyTo);
-			if (!parent) {
-				break;
-			}
-			current = parent;
-		}
-		return current;
-	};
-	const threads = new Map<string, CommentThread>();
+	const threadOf = new Map<string, CommentThread>();
+	const threads: CommentThread[] = [];
 	for (const comment of comments) {
-		const root = rootOf(comment);
-		const thread = threads.get(root.id) ?? { root, replies: [] };
-		threads.set(root.id, thread);
-		if (comment !== root) {
-			thread.replies.push(comment);
+		const parentThread = comment.replyTo ? threadOf.get(comment.replyTo) : undefined;
+		if (parentThread) {
+			parentThread.replies.push(comment);
+			threadOf.set(comment.id, parentThread);
+		} else {
+			const thread = { root: comment, replies: [] };
+			threads.push(thread);
+			threadOf.set(comment.id, thread);
 		}
 	}
-	// In the order each conversation began: a root comes before its replies.
-	return [...threads.values()];
+	return threads;
 }
 
 /** Threads sorted to the steps of a route (by the thread's first comment), the route's own, and the rest. */
