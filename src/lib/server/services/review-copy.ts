@@ -8,7 +8,6 @@ import type { StepCheck } from '../../rules/check/types';
 import { approvalOf, type Approval } from '../../review/history';
 import { sortThreads, type CommentThread } from '../../review/threads';
 import { ApiFailure } from '../api';
-import { chemPoolConfig } from '../chem-pool/config';
 import { runChemistry } from '../chem-pool/pool';
 import type { Route } from '../db';
 import { routeMapLabels } from '../route-map-labels';
@@ -61,22 +60,24 @@ export type ReviewCopy = {
 };
 
 /** A chemistry call's answer, or the message of its refusal or time-out. */
-async function attempt<T>(run: () => Promise<T>): Promise<T | { failed: string }> {
+type Failed = { failed: string; code: string };
+
+async function attempt<T>(run: () => Promise<T>): Promise<T | Failed> {
 	try {
 		return await run();
 	} catch (caught) {
 		if (caught instanceof ApiFailure) {
-			return { failed: caught.message };
+			return { failed: caught.message, code: caught.code };
 		}
 		throw caught;
 	}
 }
-const failed = (value: unknown): value is { failed: string } =>
+const failed = (value: unknown): value is Failed =>
 	typeof value === 'object' && value !== null && 'failed' in value;
 
 function molecules(
 	document: RouteDocument,
-	drawings: Record<string, Analysis> | { failed: string }
+	drawings: Record<string, Analysis> | Failed
 ): Record<string, CopyMolecule> {
 	return Object.fromEntries(
 		document.intermediates.map((node, index) => {
@@ -137,6 +138,18 @@ async function stepQuantities(
 	});
 }
 
+// The pool's own time-out message ends "nothing was checked", which is about its own request: said
+// of the drawings on a copy whose check did run, it would mislead.
+const DRAWING_FAILURES: Record<string, string> = {
+	chemistry_timeout: 'drawing the structures took longer than the chemistry time limit',
+	chemistry_busy: 'the chemistry workers were busy'
+};
+
+function drawingsNote({ failed, code }: Failed): string {
+	const why = DRAWING_FAILURES[code] ?? failed.replace(/\.$/, '');
+	return `Drawings are not available: ${why}. Each structure is printed as text; reload the page to try again.`;
+}
+
 function conditionsOf(step: RouteStep, check: StepCheck | null) {
 	const labels = new Map<string, string>(
 		routeMapLabels().conditions.map(({ id, label }) => [id, label])
@@ -153,12 +166,12 @@ function conditionsOf(step: RouteStep, check: StepCheck | null) {
 export async function reviewCopy(route: Route, document: RouteDocument): Promise<ReviewCopy> {
 	const ordered = stepOrder(document);
 	const [drawings, checks, quantities, comments, history, approvedVersion] = await Promise.all([
+		// The general chemistry budget, not the route page's shorter one: a copy made to be printed
+		// waits for its drawings rather than print without them.
 		attempt(() =>
-			runChemistry(
-				'drawRoute',
-				{ structures: document.intermediates.map((node) => node.structure) },
-				{ budgetMs: chemPoolConfig().pageBudgetMs }
-			)
+			runChemistry('drawRoute', {
+				structures: document.intermediates.map((node) => node.structure)
+			})
 		),
 		attempt(() => runChemistry('checkRoute', { document })),
 		stepQuantities(document, ordered),
@@ -191,7 +204,7 @@ export async function reviewCopy(route: Route, document: RouteDocument): Promise
 		molecules: molecules(document, drawings),
 		steps,
 		checkNote: failed(checks) ? `Not checked: ${checks.failed}` : null,
-		drawingsNote: failed(drawings) ? `Drawings are not available: ${drawings.failed}` : null,
+		drawingsNote: failed(drawings) ? drawingsNote(drawings) : null,
 		routeThreads: threads.route,
 		threadsOnRemovedSteps: threads.onRemovedSteps,
 		history,
