@@ -59,9 +59,9 @@ export type ReviewCopy = {
 	comments: number;
 };
 
-/** A chemistry call's answer, or the message of its refusal or time-out. */
 type Failed = { failed: string; code: string };
 
+/** A chemistry call's answer, or the message and code of its refusal or time-out. */
 async function attempt<T>(run: () => Promise<T>): Promise<T | Failed> {
 	try {
 		return await run();
