@@ -5,6 +5,10 @@ import type { ComputedMaterial } from './materials';
 import { OVER_THEORY_PERCENT } from './units';
 import type { WaterRemoval } from './water-removal';
 
+/** Beside a step's reagent hazards (step panel, review copy): the hazard notes are not an SDS. */
+export const REAGENT_SDS_CAUTION =
+	'Check the safety data sheet (SDS) of every reagent and follow your institution’s safety rules before you run this step.';
+
 function layerWords(removal: WaterRemoval): string {
 	return removal.azeotrope.waterLayer === 'lower'
 		? `the water is the lower layer under ${removal.azeotrope.name.toLowerCase()}`

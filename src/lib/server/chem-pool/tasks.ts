@@ -4,10 +4,11 @@
 import { analyzeStructure, type Analysis, type AnalyzeOptions } from '../../chem/analyze';
 import type { StepToCheck } from '../../rules/check/types';
 import { computeQuantities } from '../../quantities/compute';
-import type { QuantitiesRequest } from '../../quantities/contract';
+import type { QuantitiesAnswer, QuantitiesRequest } from '../../quantities/contract';
 import type { RouteDocument } from '../../route/document';
 import { routeFromJson, routeFromSdf, routeToSdf } from '../route-sdf';
 import { checkRouteDocument, checkSteps } from '../services/check';
+import { refusalOf } from './refusals';
 import { planRouteDocument } from '../services/plan';
 
 export const chemistryTasks = {
@@ -21,6 +22,19 @@ export const chemistryTasks = {
 	exportSdf: ({ document }: { document: RouteDocument }) => routeToSdf(document),
 	/** What to weigh out and the water a trap should collect (issue 14). */
 	quantities: ({ request }: { request: QuantitiesRequest }) => computeQuantities(request),
+	/** Several steps' quantities in one call (the review copy); a refused step carries its message. */
+	quantitiesOfSteps: ({ requests }: { requests: QuantitiesRequest[] }) =>
+		requests.map((request): QuantitiesAnswer | { refused: string } => {
+			try {
+				return computeQuantities(request);
+			} catch (caught) {
+				const refusal = refusalOf(caught);
+				if (!refusal) {
+					throw caught;
+				}
+				return { refused: refusal.message };
+			}
+		}),
 	/** Drawings of a route's intermediates; an unreadable one is left out (its node asks itself). */
 	drawRoute: ({ structures }: { structures: string[] }) => {
 		const analyses: Record<string, Analysis> = {};

@@ -10,9 +10,11 @@ import {
 	createRoute,
 	duplicateRoute,
 	listRoutes,
-	setRouteArchived
+	setRouteArchived,
+	type RouteSummary
 } from '$lib/server/services/routes';
 import { recentActivity } from '$lib/server/services/activity';
+import { openCommentCounts } from '$lib/server/services/comments';
 import {
 	getProjectSummary,
 	setProjectArchived,
@@ -30,7 +32,7 @@ export const load: PageServerLoad = async (event) => {
 	const [summary, activity, routes] = await Promise.all([
 		getProjectSummary(project.id),
 		recentActivity({ teamId: project.teamId, projectId: project.id }, 15),
-		listRoutes(project.id, { includeArchived: showArchived })
+		listRoutes(project.id, { includeArchived: showArchived }).then(withOpenComments)
 	]);
 	const [form, routeForm] = await Promise.all([
 		superValidate(
@@ -112,6 +114,12 @@ export const actions: Actions = {
 		await setRouteArchived(user, route, false, project.teamId);
 	}
 };
+
+/** Each route with its number of unresolved comments (0 when it has none). */
+async function withOpenComments(routes: RouteSummary[]) {
+	const open = await openCommentCounts(routes.map((route) => route.id));
+	return routes.map((route) => ({ ...route, openComments: open[route.id] ?? 0 }));
+}
 
 /** The route a row action names, refused unless it belongs to this page's project. */
 async function routeOfThisProject(event: RequestEvent<{ projectId: string }>) {

@@ -8,6 +8,7 @@ import {
 	renderComponent,
 	rowSortingFeature,
 	sortFn_alphanumeric,
+	sortFn_basic,
 	sortFn_datetime,
 	tableFeatures,
 	type ColumnDef
@@ -23,6 +24,8 @@ export type RouteRow = {
 	version: number;
 	updatedAt: Date;
 	archived: boolean;
+	/** Unresolved comments on the route and its steps. */
+	openComments: number;
 };
 
 export const routeTableFeatures = tableFeatures({
@@ -30,16 +33,9 @@ export const routeTableFeatures = tableFeatures({
 	columnFilteringFeature,
 	sortedRowModel: createSortedRowModel(),
 	filteredRowModel: createFilteredRowModel(),
-	sortFns: { alphanumeric: sortFn_alphanumeric, datetime: sortFn_datetime },
+	sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, datetime: sortFn_datetime },
 	filterFns: { equalsString: filterFn_equalsString }
 });
-
-export const STATUS_LABELS: Record<string, string> = {
-	draft: 'Draft',
-	'in-review': 'In review',
-	'changes-requested': 'Changes requested',
-	approved: 'Approved'
-};
 
 export function routeColumns(canEdit: boolean): ColumnDef<typeof routeTableFeatures, RouteRow>[] {
 	const columns: ColumnDef<typeof routeTableFeatures, RouteRow>[] = [
@@ -60,6 +56,7 @@ export function routeColumns(canEdit: boolean): ColumnDef<typeof routeTableFeatu
 				})
 		},
 		{ accessorKey: 'version', header: 'Version' },
+		{ accessorKey: 'openComments', header: 'Open comments', sortFn: 'basic' },
 		{
 			accessorKey: 'updatedAt',
 			// Not "Last saved": the project's rename form has a "Save" button, and names are matched by substring.
