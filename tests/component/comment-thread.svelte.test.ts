@@ -165,4 +165,23 @@ describe('CommentThread: what a step’s comments show', () => {
 		expect(screen.queryAllByRole('button')).toEqual([]);
 		expect(screen.getByText(/as a viewer you cannot write them/)).toBeTruthy();
 	});
+
+	it('keeps comments on a step deleted since in sight, under the route’s, without a reply form', () => {
+		const api = fakeReviewApi([
+			comment({ stepId: 's9', html: '<p>About a deleted step</p>' }),
+			comment({ stepId: null, html: '<p>About the route</p>' })
+		]);
+		const { review } = makeReview(api);
+		renderWithReview(review, CommentsSection, {
+			stepId: null,
+			heading: 'Comments on the route',
+			stepIds: new Set(['s1'])
+		});
+		expect(screen.getByRole('heading', { name: 'On steps no longer in the route' })).toBeTruthy();
+		const gone = screen.getByText('About a deleted step').closest('article')!;
+		expect(within(gone).queryByRole('button', { name: 'Reply' })).toBeNull();
+		expect(within(gone).getByRole('button', { name: 'Resolve' })).toBeTruthy();
+		const route = screen.getByText('About the route').closest('article')!;
+		expect(within(route).getByRole('button', { name: 'Reply' })).toBeTruthy();
+	});
 });

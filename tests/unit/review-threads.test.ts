@@ -4,7 +4,8 @@ import { approvalText, historyLine, namesList } from '../../src/lib/components/r
 import {
 	openCommentsLabel,
 	openCountsByStep,
-	threadsOf
+	threadsOf,
+	threadsOnGoneSteps
 } from '../../src/lib/components/review/threads';
 
 let n = 0;
@@ -31,6 +32,13 @@ describe('comment threads', () => {
 		const all = [root, reply, replyToReply, other, onRoute];
 		expect(threadsOf(all, 's1')).toEqual([{ root, replies: [reply, replyToReply] }]);
 		expect(threadsOf(all, null)).toEqual([{ root: onRoute, replies: [] }]);
+	});
+
+	it('finds the threads on steps the route no longer has, and only those', () => {
+		const gone = c({ stepId: 'deleted' });
+		const reply = c({ replyTo: gone.id });
+		const all = [gone, reply, c({ stepId: 's1' }), c({ stepId: null })];
+		expect(threadsOnGoneSteps(all, new Set(['s1']))).toEqual([{ root: gone, replies: [reply] }]);
 	});
 
 	it('keeps a reply whose parent is gone as a thread of its own, and survives a reply loop', () => {

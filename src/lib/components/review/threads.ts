@@ -21,13 +21,16 @@ function rootOf(comment: CommentAnswer, byId: Map<string, CommentAnswer>): Comme
 	return current;
 }
 
-/** The threads of one step (`stepId`) or of the route itself (`null`), oldest first. */
-export function threadsOf(comments: readonly CommentAnswer[], stepId: string | null): Thread[] {
+/** Threads whose first comment is where `keep` says, oldest first. */
+function threadsWhere(
+	comments: readonly CommentAnswer[],
+	keep: (stepId: string | null) => boolean
+): Thread[] {
 	const byId = new Map(comments.map((comment) => [comment.id, comment]));
 	const threads = new Map<string, Thread>();
 	for (const comment of comments) {
 		const root = rootOf(comment, byId);
-		if (root.stepId !== stepId) {
+		if (!keep(root.stepId)) {
 			continue;
 		}
 		const thread = threads.get(root.id) ?? { root, replies: [] };
@@ -37,6 +40,19 @@ export function threadsOf(comments: readonly CommentAnswer[], stepId: string | n
 		}
 	}
 	return [...threads.values()];
+}
+
+/** The threads of one step (`stepId`) or of the route itself (`null`), oldest first. */
+export function threadsOf(comments: readonly CommentAnswer[], stepId: string | null): Thread[] {
+	return threadsWhere(comments, (on) => on === stepId);
+}
+
+/** Threads on steps the route no longer has (deleted since): shown, not lost. */
+export function threadsOnGoneSteps(
+	comments: readonly CommentAnswer[],
+	stepIds: ReadonlySet<string>
+): Thread[] {
+	return threadsWhere(comments, (on) => on !== null && !stepIds.has(on));
 }
 
 /**
