@@ -8,6 +8,8 @@ import { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
 import type { ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
 import { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
+import type { ReviewState } from '$lib/components/review/review-state.svelte';
+import { fakeReviewApi, makeReview } from './review-fixture';
 import WithRouteEditor from './WithRouteEditor.svelte';
 
 export const routeDoc: RouteDocument = {
@@ -67,15 +69,17 @@ export async function makeEditor({
 	return { editor, client };
 }
 
-/** Renders `component` with `props` under `editor` in context. */
+/** Renders `component` with `props` under `editor` (and a review state: none by default) in context. */
 export function renderWithEditor<Props extends Record<string, unknown>>(
 	editor: RouteEditor,
 	component: Component<Props>,
-	props: Props
+	props: Props,
+	review: ReviewState = makeReview(fakeReviewApi([])).review
 ) {
 	return render(WithRouteEditor, {
 		props: {
 			editor,
+			review,
 			component: component as unknown as Component<Record<string, unknown>>,
 			props
 		}

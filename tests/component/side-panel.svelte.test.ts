@@ -1,9 +1,10 @@
-import { fireEvent, screen } from '@testing-library/svelte';
+import { fireEvent, screen, waitFor } from '@testing-library/svelte';
 import { flushSync } from 'svelte';
 import { describe, expect, it } from 'vitest';
 import SidePanel from '$lib/components/route-map/SidePanel.svelte';
 import type { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
 import { makeEditor, renderWithEditor } from './route-editor-fixture';
+import { comment, fakeReviewApi, makeReview } from './review-fixture';
 
 const show = (editor: RouteEditor) => renderWithEditor(editor, SidePanel, {});
 const heading = () => screen.getAllByRole('heading', { level: 2 })[0]?.textContent;
@@ -50,5 +51,32 @@ describe('SidePanel: the route name', () => {
 		editor.undo();
 		flushSync();
 		expect(field.value).toBe('OG-2031');
+	});
+});
+
+describe('SidePanel: the comment threads (issue 15)', () => {
+	it('shows the route’s thread, then the selected step’s, and lets a reviewer comment on a read-only map', async () => {
+		const api = fakeReviewApi([
+			comment({ stepId: null, html: '<p>On the whole route</p>' }),
+			comment({ stepId: 's1', html: '<p>On the Grignard step</p>' })
+		]);
+		const { review } = makeReview(api); // a reviewer: may comment
+		const { editor } = await makeEditor({ canEdit: false });
+		renderWithEditor(editor, SidePanel, {}, review);
+		expect(screen.getByRole('heading', { name: 'Comments on the route' })).toBeTruthy();
+		expect(screen.getByText('On the whole route')).toBeTruthy();
+		expect(screen.queryByText('On the Grignard step')).toBeNull();
+
+		editor.select({ kind: 'step', id: 's1' });
+		flushSync();
+		expect(screen.getByRole('heading', { name: 'Comments on this step' })).toBeTruthy();
+		expect(screen.getByText('On the Grignard step')).toBeTruthy();
+		expect(screen.queryByText('On the whole route')).toBeNull();
+		await fireEvent.input(screen.getByLabelText('Comment on this step'), {
+			target: { value: 'Dry THF?' }
+		});
+		await fireEvent.click(screen.getByRole('button', { name: 'Post comment' }));
+		await waitFor(() => expect(screen.getByText('Dry THF?')).toBeTruthy());
+		expect(api.sent[0]?.body).toEqual({ body: 'Dry THF?', stepId: 's1' });
 	});
 });

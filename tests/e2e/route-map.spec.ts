@@ -155,7 +155,9 @@ test('a reviewer sees the same map read-only', async ({ page, browser }) => {
 
 	await page.getByTestId('step-label').getByRole('button', { name: 'MeMgBr, THF' }).click();
 	await expect(page.getByRole('heading', { name: /^Step:/ })).toBeVisible();
-	await expect(page.getByRole('textbox')).toHaveCount(0);
+	// The one field a reviewer gets is the step's comment (issue 15): nothing of the route itself.
+	await expect(page.getByRole('textbox')).toHaveCount(1);
+	await expect(page.getByRole('textbox', { name: 'Comment on this step' })).toBeVisible();
 	await page.keyboard.press('Delete');
 	await expect(page.getByTestId('intermediate-node')).toHaveCount(2);
 	expect(

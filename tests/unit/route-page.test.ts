@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { load } from '../../src/routes/routes/[routeId=uuid]/+page.server';
 import { readFileSync } from 'node:fs';
 import { createRoute } from '../../src/lib/server/services/routes';
-import { Intermediate, Route, type Project } from '../../src/lib/server/db';
+import { Comment, Intermediate, ReviewEvent, Route, type Project } from '../../src/lib/server/db';
 import { fakeEvent, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 let f: Awaited<ReturnType<typeof makeTeamWithEveryRole>>;
@@ -124,5 +124,74 @@ describe('the route map labels sent with the page load (instead of two downloads
 		expect(labels.protectingGroups.get('TBS')).toMatch(/silyl/i);
 		// Only the names: none of the ratings, descriptions or patterns the rule table holds.
 		expect(Object.keys(labels.conditions[0]!).sort()).toEqual(['id', 'label']);
+	});
+});
+
+describe('the review data sent with the page load (issue 15)', () => {
+	it('brings the comments, the history, the approved version and who may review, with each role’s rights', async () => {
+		const route = await createRoute(f.people.chemist, project, {
+			name: 'Reviewed route',
+			intermediates: [
+				{ id: 'a', structure: 'OCCO' },
+				{ id: 'b', structure: 'OCCOC' }
+			],
+			steps: [{ id: 's1', from: ['a'], to: 'b' }]
+		});
+		const question = await Comment.create({
+			routeId: route.id,
+			stepKey: 's1',
+			replyToId: null,
+			authorId: f.people.reviewer.id,
+			body: 'Why **NaH** here?',
+			editedAt: null
+		});
+		await ReviewEvent.create({
+			routeId: route.id,
+			actorId: f.people.chemist.id,
+			action: 'request',
+			reviewerIds: [f.people.reviewer.id],
+			note: null,
+			version: 1
+		});
+		await ReviewEvent.create({
+			routeId: route.id,
+			actorId: f.people.reviewer.id,
+			action: 'approve',
+			reviewerIds: null,
+			note: 'Fine.',
+			version: 1
+		});
+		for (const [who, rights] of [
+			['lead', { canComment: true, canReview: true, canRequest: true }],
+			['chemist', { canComment: true, canReview: false, canRequest: true }],
+			['reviewer', { canComment: true, canReview: true, canRequest: false }],
+			['viewer', { canComment: false, canReview: false, canRequest: false }]
+		] as const) {
+			const data = await open(who, route.id);
+			expect({
+				canComment: data.canComment,
+				canReview: data.canReview,
+				canRequest: data.canRequest
+			}).toEqual(rights);
+			expect(data.userId).toBe(f.people[who].id);
+			const comments = data.comments as { id: string; stepId: string; html: string }[];
+			expect(comments.map((c) => [c.id, c.stepId])).toEqual([[question.id, 's1']]);
+			expect(comments[0]!.html).toContain('<strong>NaH</strong>');
+			const history = data.history as { action: string; reviewers: { name: string }[] }[];
+			expect(history.map((h) => h.action)).toEqual(['request', 'approve']);
+			expect(history[0]!.reviewers.map((r) => r.name)).toEqual(['Reviewer']);
+			expect(data.approvedVersion).toBe(1);
+			// Those whose role may review (lead, reviewer), with the e-mail the request names them by.
+			const reviewers = data.reviewers as { name: string; email: string }[];
+			expect(reviewers.map((r) => r.name)).toEqual(['Lead', 'Reviewer']);
+			expect(reviewers.every((r) => r.email.includes('@'))).toBe(true);
+		}
+	});
+
+	it('says a route that was never approved has no approved version, and has no comments yet', async () => {
+		const data = await open('viewer');
+		expect(data.approvedVersion).toBeNull();
+		expect(data.comments).toEqual([]);
+		expect(data.history).toEqual([]);
 	});
 });

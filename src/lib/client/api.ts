@@ -60,7 +60,7 @@ export async function callApi<T>(
 	};
 }
 
-export const jsonBody = (method: 'POST' | 'PUT', body: unknown): RequestInit => ({
+export const jsonBody = (method: 'POST' | 'PUT' | 'PATCH', body: unknown): RequestInit => ({
 	method,
 	body: JSON.stringify(body)
 });

@@ -6,15 +6,24 @@ import { requireRouteAction } from '$lib/server/auth/guards';
 import { chemPoolConfig } from '$lib/server/chem-pool/config';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeMapLabels } from '$lib/server/route-map-labels';
+import { listComments } from '$lib/server/services/comments';
+import { approvedVersionOf, reviewCandidates, reviewHistory } from '$lib/server/services/review';
 import { routeDocument, routeLinks } from '$lib/server/services/routes';
 
 export const load: PageServerLoad = async (event) => {
-	const { route, project, role } = await requireRouteAction(
+	const { user, route, project, role } = await requireRouteAction(
 		event,
 		event.params.routeId,
 		'project.read'
 	);
-	const [document, links] = await Promise.all([routeDocument(route), routeLinks(route)]);
+	const [document, links, comments, history, approvedVersion, reviewers] = await Promise.all([
+		routeDocument(route),
+		routeLinks(route),
+		listComments(route.id),
+		reviewHistory(route.id),
+		approvedVersionOf(route.id),
+		reviewCandidates(project.teamId)
+	]);
 	// Depictions come with the page, so a reload shows the drawings without a request per node.
 	// They are drawn on the chemistry pool within the page budget; when it runs out (or the pool
 	// is busy) the page comes without them and each node asks /api/analyze itself, showing that
@@ -46,6 +55,16 @@ export const load: PageServerLoad = async (event) => {
 		labels: routeMapLabels(),
 		links,
 		role,
-		canEdit: can(role, 'route.edit')
+		canEdit: can(role, 'route.edit'),
+		// Review (issue 15): the threads, the history and who may be asked. The page only hides
+		// what a role cannot use; the API enforces it.
+		comments,
+		history,
+		approvedVersion,
+		reviewers,
+		userId: user.id,
+		canComment: can(role, 'route.comment'),
+		canReview: can(role, 'route.review'),
+		canRequest: can(role, 'route.edit')
 	};
 };
