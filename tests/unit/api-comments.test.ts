@@ -3,6 +3,7 @@ import * as routeComments from '../../src/routes/api/routes/[routeId=uuid]/comme
 import * as oneComment from '../../src/routes/api/comments/[commentId=uuid]/+server';
 import { Comment, type Route } from '../../src/lib/server/db';
 import { createRoute } from '../../src/lib/server/services/routes';
+import { openCommentCounts } from '../../src/lib/server/services/comments';
 import { callApi, freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
 
 // The comment endpoints against the issue 15 contract: `POST /api/routes/{id}/comments` (lead,
@@ -201,5 +202,23 @@ describe('comments API: editing, resolving, reopening', () => {
 		const answer = await patch('chemist', commentId, {});
 		expect(answer.status).toBe(400);
 		expect(answer.body.error.code).toBe('invalid_body');
+	});
+});
+
+describe('open comments per route (the project table) follow the route page rule', () => {
+	it('counts unresolved comments of threads whose first comment is unresolved', async () => {
+		const project = await makeProject(f.team.id, 'Counting project');
+		const counted = await createRoute(f.people.chemist, project, document('Counted route'));
+		const open = (await post('reviewer', { body: 'Why TBS?', stepId: 's1' }, counted.id)).body.id;
+		await post('chemist', { body: 'It survives PCC.', replyTo: open }, counted.id);
+		const closed = (await post('reviewer', { body: 'Typo in s2', stepId: 's2' }, counted.id)).body
+			.id;
+		await post('chemist', { body: 'Fixed.', replyTo: closed }, counted.id);
+		expect((await patch('reviewer', closed, { resolved: true })).status).toBe(200);
+		// Two open on s1; the s2 thread is resolved at its first comment, so its reply folds away
+		// with it on the route page and is not counted here either.
+		const quiet = await createRoute(f.people.chemist, project, document('Quiet route'));
+		const counts = await openCommentCounts([counted.id, quiet.id]);
+		expect(counts).toEqual({ [counted.id]: 2 });
 	});
 });

@@ -63,6 +63,12 @@ const JSON_BODIES: Body[] = [
 		nul: true
 	},
 	{
+		name: 'review request with a NUL in its note',
+		contentType: 'application/json',
+		body: JSON.stringify({ action: 'request', reviewers: [], note: 'See s2\u0000' }),
+		nul: true
+	},
+	{
 		name: 'project with NUL',
 		contentType: 'application/json',
 		body: JSON.stringify({ name: 'Kitti\u0000wake', description: '\u0000', teamId: '' }),

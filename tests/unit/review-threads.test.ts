@@ -1,12 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import type { CommentAnswer, ReviewHistoryEntry } from '../../src/lib/api/answers';
-import { approvalText, historyLine, namesList } from '../../src/lib/components/review/review-view';
+import { approvalText, historySentence, namesList } from '../../src/lib/review/history';
 import {
+	openCommentTotal,
 	openCommentsLabel,
 	openCountsByStep,
 	threadsOf,
 	threadsOnGoneSteps
-} from '../../src/lib/components/review/threads';
+} from '../../src/lib/review/threads';
 
 let n = 0;
 const c = (over: Partial<CommentAnswer>): CommentAnswer => ({
@@ -62,6 +63,8 @@ describe('comment threads', () => {
 			c({ stepId: null })
 		];
 		expect(Object.fromEntries(openCountsByStep(comments))).toEqual({ s1: 2, s2: 1 });
+		// The route's total (the project table's column) adds the route's own thread.
+		expect(openCommentTotal(comments)).toBe(4);
 		expect(openCommentsLabel(1)).toBe('1 open comment');
 		expect(openCommentsLabel(2)).toBe('2 open comments');
 	});
@@ -89,10 +92,12 @@ describe('review words', () => {
 
 	it('says who asked whom, and who asked without naming anyone', () => {
 		const asked = e({ action: 'request', reviewers: [{ id: 'u2', name: 'Bo Lind' }] });
-		expect(historyLine(asked)).toBe('Ines Ferro asked Bo Lind to review');
-		expect(historyLine(e({ action: 'request' }))).toBe('Ines Ferro asked for a review');
-		expect(historyLine(e({ action: 'withdraw', actor: null }))).toBe(
-			'A former member withdrew the review request'
+		expect(historySentence(asked)).toBe('Ines Ferro asked Bo Lind to review version 4.');
+		expect(historySentence(e({ action: 'request' }))).toBe(
+			'Ines Ferro asked for a review of version 4.'
+		);
+		expect(historySentence(e({ action: 'withdraw', actor: null }))).toBe(
+			'A former member withdrew the review request (version 4).'
 		);
 	});
 

@@ -76,8 +76,7 @@ export type CommentPatchBody = z.infer<typeof commentPatchBody>;
 export const reviewBody = z.object({
 	action: z.enum(REVIEW_ACTIONS),
 	reviewers: z.array(z.email()).max(50).optional(),
-	note: z
-		.string()
+	note: text()
 		.trim()
 		.max(FIELD_LIMITS.reviewNote.max, `At most ${FIELD_LIMITS.reviewNote.max} characters.`)
 		.optional(),

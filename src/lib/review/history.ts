@@ -2,18 +2,22 @@
 // route page and the printed copy say the same thing.
 
 import type { PersonRef, ReviewHistoryEntry } from '../api/answers';
-import type { ReviewEventAction } from './contract';
+import type { ReviewEventAction, RouteStatus } from './contract';
 
 const nameOf = (person: PersonRef | null) => person?.name ?? 'A former member';
 
-function names(people: readonly PersonRef[]): string {
+/** "Ada", "Ada and Bo", "Ada, Bo and Cy"; '' for nobody. */
+export function namesList(people: readonly PersonRef[]): string {
 	const all = people.map((person) => person.name);
-	return all.length > 1 ? `${all.slice(0, -1).join(', ')} and ${all.at(-1)}` : (all[0] ?? 'nobody');
+	return all.length > 1 ? `${all.slice(0, -1).join(', ')} and ${all.at(-1)}` : (all[0] ?? '');
 }
 
 // A Record over the contract's actions, so a new action fails the type check here.
 const SENTENCES: Record<ReviewEventAction, (entry: ReviewHistoryEntry) => string> = {
-	request: (e) => `${nameOf(e.actor)} asked ${names(e.reviewers)} to review version ${e.version}.`,
+	request: (e) =>
+		e.reviewers.length
+			? `${nameOf(e.actor)} asked ${namesList(e.reviewers)} to review version ${e.version}.`
+			: `${nameOf(e.actor)} asked for a review of version ${e.version}.`,
 	approve: (e) => `${nameOf(e.actor)} approved version ${e.version}.`,
 	'request-changes': (e) => `${nameOf(e.actor)} asked for changes to version ${e.version}.`,
 	withdraw: (e) => `${nameOf(e.actor)} withdrew the review request (version ${e.version}).`,
@@ -56,6 +60,34 @@ export function approvalOf(
 	};
 }
 
+// What became of a route that was approved and then edited (only an edit leaves `approved`).
+const SINCE_APPROVAL: Record<Exclude<RouteStatus, 'approved'>, string> = {
+	draft: 'is back in draft',
+	'in-review': 'is in review again',
+	'changes-requested': 'has had changes asked for'
+};
+
+/**
+ * The approval in one sentence, or null for a route never approved: "Approved at version 4 by
+ * Ines Ferro", or "Version 4 was approved; the route has changed since (now version 6) and is back
+ * in draft".
+ */
+export function approvalText(review: {
+	status: RouteStatus;
+	version: number;
+	approvedVersion: number | null;
+	history: readonly ReviewHistoryEntry[];
+}): string | null {
+	const approval = approvalOf(review.approvedVersion, review.history, review.version);
+	if (!approval) {
+		return null;
+	}
+	if (review.status === 'approved') {
+		return `Approved at version ${approval.version}${approval.by ? ` by ${approval.by.name}` : ''}`;
+	}
+	return `Version ${approval.version} was approved; the route has changed since (now version ${review.version}) and ${SINCE_APPROVAL[review.status]}`;
+}
+
 const PRINTED = new Intl.DateTimeFormat('en-GB', {
 	dateStyle: 'medium',
 	timeStyle: 'short',
@@ -63,9 +95,11 @@ const PRINTED = new Intl.DateTimeFormat('en-GB', {
 });
 
 /**
- * An ISO date as the copy prints it, in UTC so server and browser render the same text, e.g.
+ * An ISO date as Orthogon prints it (the copy, the route page, the outbox; a dash for none), in UTC so server and browser render the same text, e.g.
  * '2026-12-04T05:07:00.000Z' → '4 Dec 2026, 05:07 UTC'.
  */
-export function printedDate(iso: string): string {
-	return `${PRINTED.format(new Date(iso))} UTC`;
+export function printedDate(iso: string): string;
+export function printedDate(iso: string | null): string;
+export function printedDate(iso: string | null): string {
+	return iso ? `${PRINTED.format(new Date(iso))} UTC` : '—';
 }

@@ -1,16 +1,7 @@
 import type { OutboxStatus } from '$lib/review/contract';
 
-// Both the server render and the browser use UTC, so the page hydrates without a mismatch.
-const FORMAT = new Intl.DateTimeFormat('en-GB', {
-	dateStyle: 'medium',
-	timeStyle: 'short',
-	timeZone: 'UTC'
-});
-
-/** An ISO date as `4 Dec 2026, 05:00 UTC`; a dash for none. */
-export function when(iso: string | null): string {
-	return iso ? `${FORMAT.format(new Date(iso))} UTC` : '—';
-}
+// Dates as the rest of Orthogon prints them (UTC, so the server render and the browser agree).
+export { printedDate as when } from '$lib/review/history';
 
 export const STATUS_TEXT: Record<OutboxStatus, string> = {
 	queued: 'Queued',

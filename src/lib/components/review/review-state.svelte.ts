@@ -9,7 +9,12 @@ import type { ApiFailure } from '$lib/client/api';
 import type { ReviewClient } from '$lib/client/review-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
 import { ROUTE_STATUS_LABELS, type ReviewAction, type ReviewBody } from '$lib/review/contract';
-import { openCountsByStep, threadsOf, threadsOnGoneSteps, type Thread } from './threads';
+import {
+	openCountsByStep,
+	threadsOf,
+	threadsOnGoneSteps,
+	type CommentThread
+} from '$lib/review/threads';
 
 export type ReviewInit = {
 	routeId: string;
@@ -54,12 +59,12 @@ export class ReviewState {
 	}
 
 	/** The threads of a step, or of the route itself (`null`). */
-	threads(stepId: string | null): Thread[] {
+	threads(stepId: string | null): CommentThread[] {
 		return threadsOf(this.#comments, stepId);
 	}
 
 	/** Threads on steps no longer among `stepIds` (the route's steps now). */
-	threadsOnGoneSteps(stepIds: ReadonlySet<string>): Thread[] {
+	threadsOnGoneSteps(stepIds: ReadonlySet<string>): CommentThread[] {
 		return threadsOnGoneSteps(this.#comments, stepIds);
 	}
 

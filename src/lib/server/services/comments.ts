@@ -1,7 +1,8 @@
-import { Op, fn, col } from 'sequelize';
+import { Op } from 'sequelize';
 import type { CommentAnswer } from '../../api/answers';
 import { Comment, dbReady, User } from '../db';
 import { renderMarkdown } from '../markdown';
+import { openCommentTotal, type Threaded } from '../../review/threads';
 
 // Reading comments. Writing them (with the mails they cause) is in comment-writes.ts.
 
@@ -34,18 +35,38 @@ export async function listComments(routeId: string): Promise<CommentAnswer[]> {
 	return comments.map(commentAnswer);
 }
 
-/** Open (unresolved) comments per route, e.g. `{ [routeId]: 3 }`; routes without any are absent. */
+type CommentRow = Pick<Comment, 'id' | 'routeId' | 'stepKey' | 'replyToId' | 'resolved'>;
+
+/**
+ * Open comments per route by the route page's rule (`openComments`: not resolved, in a thread not
+ * resolved), e.g. `{ [routeId]: 3 }`; routes with no comments are absent.
+ */
 export async function openCommentCounts(routeIds: string[]): Promise<Record<string, number>> {
 	if (routeIds.length === 0) {
 		return {};
 	}
 	await dbReady();
+	// The rule needs each thread's first comment, so the rows are counted here, not by COUNT(*).
 	const rows = (await Comment.findAll({
-		attributes: ['routeId', [fn('COUNT', col('id')), 'open']],
-		where: { routeId: { [Op.in]: routeIds }, resolved: false },
-		group: ['routeId'],
+		attributes: ['id', 'routeId', 'stepKey', 'replyToId', 'resolved'],
+		where: { routeId: { [Op.in]: routeIds } },
+		order: [
+			['createdAt', 'ASC'],
+			['id', 'ASC']
+		],
 		raw: true
-	})) as unknown as { routeId: string; open: number | string }[];
-	// PostgreSQL returns COUNT as a string (bigint); SQLite as a number.
-	return Object.fromEntries(rows.map((row) => [row.routeId, Number(row.open)]));
+	})) as unknown as CommentRow[];
+	const byRoute = new Map<string, Threaded[]>();
+	for (const row of rows) {
+		const comment = {
+			id: row.id,
+			stepId: row.stepKey,
+			replyTo: row.replyToId,
+			resolved: !!row.resolved
+		};
+		byRoute.set(row.routeId, [...(byRoute.get(row.routeId) ?? []), comment]);
+	}
+	return Object.fromEntries(
+		[...byRoute].map(([routeId, comments]) => [routeId, openCommentTotal(comments)])
+	);
 }

@@ -1,16 +1,12 @@
 import type { PersonRef } from '../../api/answers';
 import type { ReviewAction } from '../../review/contract';
+import { namesList } from '../../review/history';
 
 // The activity-feed sentences of review actions. A summary column holds 500 characters, and
 // a note may hold 2000, so the note is quoted only as far as it fits.
 
 /** The longest summary an activity event stores (the column's length). */
 export const SUMMARY_MAX = 500;
-
-function names(people: PersonRef[]): string {
-	const all = people.map((person) => person.name);
-	return all.length <= 1 ? (all[0] ?? '') : `${all.slice(0, -1).join(', ')} and ${all.at(-1)}`;
-}
 
 function clip(text: string, max: number): string {
 	return text.length <= max ? text : `${text.slice(0, Math.max(0, max - 1)).trimEnd()}…`;
@@ -46,7 +42,7 @@ export function activitySummary(input: SummaryInput): string {
 	const route = `the route “${routeName}” (version ${version})`;
 	switch (input.action) {
 		case 'request':
-			return withNote(`${actor.name} asked ${names(input.reviewers)} to review ${route}`, note);
+			return withNote(`${actor.name} asked ${namesList(input.reviewers)} to review ${route}`, note);
 		case 'approve':
 			return withNote(`${actor.name} approved ${route}`, note);
 		case 'request-changes':
