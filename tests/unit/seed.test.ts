@@ -1,7 +1,9 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { verifyCredentials } from '../../src/lib/server/auth/credentials';
 import { graphProblems } from '../../src/lib/route/document';
-import { Project, Route, User } from '../../src/lib/server/db';
+import { OutboxMessage, Project, Route, User } from '../../src/lib/server/db';
+import { listComments } from '../../src/lib/server/services/comments';
+import { reviewHistory } from '../../src/lib/server/services/review';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
 import { routeDocument } from '../../src/lib/server/services/routes';
 import { seedDemoIfEmpty } from '../../src/lib/server/db/seed-demo';
@@ -88,6 +90,25 @@ describe('demo scenario', () => {
 		]);
 		expect(step.waterRemoval).toMatchObject({ solvent: 'toluene', trapCapacity: 10 });
 		expect(step.waterRemoval!.log!.length).toBeGreaterThanOrEqual(4);
+	});
+
+	it('starts the amide coupling in review, with a question on its step and the chemist’s answer (issue 15)', async () => {
+		const route = await Route.findOne({ where: { name: 'OG-2044 amide coupling' } });
+		expect(route!.status).toBe('in-review');
+		const [asked] = await reviewHistory(route!.id);
+		expect(asked).toMatchObject({ action: 'request', actor: { name: 'Lena Marsh' } });
+		expect(asked!.reviewers.map((person) => person.name)).toEqual(['Priya Vance']);
+		const [question, answer] = await listComments(route!.id);
+		expect(question).toMatchObject({ stepId: 'couple', author: { name: 'Priya Vance' } });
+		expect(answer).toMatchObject({ replyTo: question!.id, author: { name: 'Tomas Ridley' } });
+		// Real mails, queued like any other: the request to Priya, the comment to the author.
+		const mails = await OutboxMessage.findAll({ attributes: ['to', 'subject'] });
+		expect(mails.map((mail) => [mail.to, mail.subject])).toEqual(
+			expect.arrayContaining([
+				['reviewer@example.com', 'Review requested: “OG-2044 amide coupling”'],
+				['lead@example.com', expect.stringMatching(/^New comment on “OG-2044 amide coupling”/)]
+			])
+		);
 	});
 
 	it('rejects a wrong password', async () => {

@@ -3,6 +3,25 @@ import { ROLES } from '../../policy';
 import { routeDocumentShape } from '../../route/document';
 import scenario from './demo-scenario.json';
 
+// A demo route may start in review: who asked whom, and the comments written since (each by
+// e-mail; `replyToPrevious` answers the comment before it).
+const demoReview = z.object({
+	requestedBy: z.email(),
+	reviewers: z.array(z.email()).min(1),
+	note: z.string().optional(),
+	comments: z
+		.array(
+			z.object({
+				by: z.email(),
+				stepId: z.string().optional(),
+				replyToPrevious: z.boolean().default(false),
+				body: z.string()
+			})
+		)
+		.default([])
+});
+export type DemoReview = z.infer<typeof demoReview>;
+
 // The JSON is the single source: the seed reads it here, `npm start` reads it to print sign-ins.
 const demoSchema = z.object({
 	password: z.string(),
@@ -14,7 +33,7 @@ const demoSchema = z.object({
 				z.object({
 					name: z.string(),
 					description: z.string(),
-					routes: z.array(routeDocumentShape).default([])
+					routes: z.array(routeDocumentShape.extend({ review: demoReview.optional() })).default([])
 				})
 			)
 		})

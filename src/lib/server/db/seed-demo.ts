@@ -1,9 +1,13 @@
 import type { RouteDocument } from '../../route/document';
 import { hashPassword } from '../auth/passwords';
 import { dbReady, Membership, Project, Team, User } from '.';
-import { DEMO_PASSWORD, DEMO_TEAMS } from './demo-scenario';
+import { DEMO_PASSWORD, DEMO_TEAMS, type DemoReview } from './demo-scenario';
 import { ActivityEvent } from './models';
 import { createRoute } from '../services/routes';
+import { takeReviewAction } from '../services/review-actions';
+import { addComment } from '../services/comment-writes';
+import type { Route } from './models';
+import type { SessionUser } from '../../types';
 
 /** Fills an empty database with the demo scenario; leaves any database with users alone. */
 export async function seedDemoIfEmpty(): Promise<boolean> {
@@ -13,7 +17,8 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
 	}
 	const passwordHash = await hashPassword(DEMO_PASSWORD);
 	// Routes go in through the route service (its own transaction) once the people exist.
-	const routes: { lead: User; project: Project; document: RouteDocument }[] = [];
+	const routes: { lead: User; project: Project; document: RouteDocument; review?: DemoReview }[] =
+		[];
 	await User.sequelize!.transaction(async (transaction) => {
 		for (const demoTeam of DEMO_TEAMS) {
 			const team = await Team.create({ name: demoTeam.name }, { transaction });
@@ -55,15 +60,57 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
 					{ transaction }
 				);
 				if (lead) {
-					for (const document of p.routes) {
-						routes.push({ lead, project, document });
+					for (const { review, ...document } of p.routes) {
+						routes.push({ lead, project, document, review });
 					}
 				}
 			}
 		}
 	});
-	for (const { lead, project, document } of routes) {
-		await createRoute({ id: lead.id, email: lead.email, name: lead.name }, project, document);
+	for (const { lead, project, document, review } of routes) {
+		const route = await createRoute(sessionUser(lead), project, document);
+		if (review) {
+			await startReview(route, project, review);
+		}
 	}
 	return true;
+}
+
+const sessionUser = (user: User): SessionUser => ({
+	id: user.id,
+	email: user.email,
+	name: user.name
+});
+
+/**
+ * Puts a demo route in review through the same services the API uses, so its history, activity
+ * lines and mails are the real thing.
+ */
+async function startReview(route: Route, project: Project, review: DemoReview) {
+	const member = async (email: string) => {
+		const user = await User.findOne({ where: { email } });
+		const membership = user
+			? await Membership.findOne({ where: { userId: user.id, teamId: project.teamId } })
+			: null;
+		if (!user || !membership) {
+			throw new Error(`Demo scenario: ${email} is not in the team of “${route.name}”.`);
+		}
+		return { user: sessionUser(user), role: membership.role };
+	};
+	const requester = await member(review.requestedBy);
+	await takeReviewAction(requester.user, requester.role, route, project, {
+		action: 'request',
+		reviewers: review.reviewers,
+		note: review.note
+	});
+	let previous: string | undefined;
+	for (const comment of review.comments) {
+		const { user } = await member(comment.by);
+		const written = await addComment(user, route, project, {
+			body: comment.body,
+			stepId: comment.stepId,
+			replyTo: comment.replyToPrevious ? previous : undefined
+		});
+		previous = written.id;
+	}
 }
