@@ -13,7 +13,7 @@ export const ROLE_LABELS: Record<Role, string> = {
 };
 
 export const ROLE_SUMMARIES: Record<Role, string> = {
-	lead: 'Runs the team: members, roles, library approvals, and all chemist work.',
+	lead: 'Runs the team: members, roles, library approvals, the team’s rule overrides, and all chemist work.',
 	chemist: 'Creates projects and routes, edits structures and steps, adds library entries.',
 	reviewer: 'Reads routes, comments on steps, approves or asks for changes.',
 	viewer: 'Reads everything the team shares.'
@@ -28,6 +28,7 @@ export const ACTIONS = [
 	'route.review',
 	'library.add',
 	'library.approve',
+	'rules.override',
 	'team.manage'
 ] as const;
 export type Action = (typeof ACTIONS)[number];

@@ -66,10 +66,12 @@ describe('migrations', () => {
 			'received_mails',
 			'review_events',
 			'routes',
+			'saved_conditions',
 			'sessions',
 			'set_password_links',
 			'sign_in_limits',
 			'steps',
+			'team_rule_overrides',
 			'teams',
 			'users'
 		]);

@@ -13,6 +13,7 @@ import type { CheckedPlanAnswer } from '$lib/rules/plan';
 import type { StabilityRating } from '$lib/rules/ids';
 import type { Condition, ProtectingGroupConditions } from '$lib/rules/schemas';
 import type { OutboxStatus, ReviewEventAction, RouteStatus } from '$lib/review/contract';
+import type { SavedConditionKind } from '$lib/library/contract';
 // Erased at build time (types only): the list row is the routes service's.
 import type { RouteSummary } from '$lib/server/services/routes';
 
@@ -128,3 +129,46 @@ export type OutboxMessageAnswer = {
 
 /** `GET /api/outbox` (leads): the messages of the caller's teams, newest first. */
 export type OutboxAnswer = { messages: OutboxMessageAnswer[] };
+
+/** One saved condition in `GET /api/library`; `conditions` are the classes its reagents bring. */
+export type SavedConditionAnswer = {
+	id: string;
+	teamId: string;
+	protectingGroup: string;
+	kind: SavedConditionKind;
+	reagents: string;
+	conditions: string[];
+	solvent: string | null;
+	temperature: string | null;
+	time: string | null;
+	scale: string | null;
+	yield: number | null;
+	reference: string | null;
+	notes: string | null;
+	author: PersonRef | null;
+	approved: boolean;
+	retired: boolean;
+	/** Steps in the team's routes that name this entry, counted when asked. */
+	uses: number;
+	createdAt: string;
+	updatedAt: string;
+};
+
+/** `GET /api/library`. */
+export type LibraryAnswer = { conditions: SavedConditionAnswer[] };
+
+/** One override in `GET /api/teams/{teamId}/rules`. */
+export type RuleOverrideAnswer = {
+	id: string;
+	subject: string;
+	condition: string;
+	reagent?: string;
+	rating: string;
+	reason: string;
+	source: string;
+	author: PersonRef | null;
+	createdAt: string;
+};
+
+/** `GET /api/teams/{teamId}/rules`. */
+export type TeamRulesAnswer = { overrides: RuleOverrideAnswer[] };

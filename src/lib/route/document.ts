@@ -37,7 +37,9 @@ export const stepSchema = z.object({
 	/** What is weighed out for the step (src/lib/quantities/contract.ts). */
 	quantities: z.array(materialInput).max(MAX_MATERIALS).optional(),
 	/** Water removal with an azeotrope and a trap, for a condensation; with its trap log. */
-	waterRemoval: waterRemovalInput.optional()
+	waterRemoval: waterRemovalInput.optional(),
+	/** The id of the team's saved condition (issue 16 library) this step follows. */
+	savedCondition: z.uuid().optional()
 });
 
 /** A route's name, as the route document, the new-route form and the API all take it. */

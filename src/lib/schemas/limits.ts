@@ -19,6 +19,12 @@ export const FIELD_LIMITS = {
 	tokenLabel: { min: 2, max: 80 },
 	commentBody: { min: 1, max: 10_000 },
 	reviewNote: { max: 2000 },
+	libraryReagents: { max: 2000 },
+	librarySolvent: { max: 200 },
+	/** Temperature, time and scale of a saved condition ("−78 °C", "2 h", "5 g"). */
+	libraryShortText: { max: 100 },
+	libraryReference: { max: 500 },
+	libraryNotes: { max: 4000 },
 	/** bcrypt reads only the first 72 bytes; a longer password would be cut without a word. */
 	password: { min: 10, maxBytes: 72 }
 } as const;

@@ -59,6 +59,7 @@ const ACTION_PHRASES: Record<Action, string> = {
 	'route.review': 'review routes',
 	'library.add': 'add to the condition library',
 	'library.approve': 'approve condition library entries',
+	'rules.override': 'change the team’s rule overrides',
 	'team.manage': 'manage the team'
 };
 

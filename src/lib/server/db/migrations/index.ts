@@ -4,6 +4,7 @@ import * as routes from './0002-routes';
 import * as plannedRoutes from './0003-planned-routes';
 import * as sessionsAndSignInLimits from './0004-sessions-and-sign-in-limits';
 import * as reviewAndMail from './0005-review-and-mail';
+import * as libraryAndTeamRules from './0006-library-and-team-rules';
 
 export type Migration = {
 	name: string;
@@ -20,5 +21,6 @@ export const migrations: Migration[] = [
 	{ name: '0002-routes', ...routes },
 	{ name: '0003-planned-routes', ...plannedRoutes },
 	{ name: '0004-sessions-and-sign-in-limits', ...sessionsAndSignInLimits },
-	{ name: '0005-review-and-mail', ...reviewAndMail }
+	{ name: '0005-review-and-mail', ...reviewAndMail },
+	{ name: '0006-library-and-team-rules', ...libraryAndTeamRules }
 ];

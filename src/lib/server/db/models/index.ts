@@ -11,10 +11,12 @@ import { Project } from './project';
 import { ReceivedMail } from './received-mail';
 import { ReviewEvent } from './review-event';
 import { Route } from './route';
+import { SavedCondition } from './saved-condition';
 import { Session } from './session';
 import { SetPasswordLink } from './set-password-link';
 import { Step } from './step';
 import { Team } from './team';
+import { TeamRuleOverride } from './team-rule-override';
 import { User } from './user';
 
 export {
@@ -30,10 +32,12 @@ export {
 	ReceivedMail,
 	ReviewEvent,
 	Route,
+	SavedCondition,
 	Session,
 	SetPasswordLink,
 	Step,
 	Team,
+	TeamRuleOverride,
 	User
 };
 export { ROUTE_STATUSES, type RouteStatus } from './route';
@@ -57,7 +61,9 @@ export function initModels(sequelize: Sequelize) {
 		ReviewEvent,
 		OutboxMessage,
 		ReceivedMail,
-		MailPreference
+		MailPreference,
+		SavedCondition,
+		TeamRuleOverride
 	]) {
 		model.initModel(sequelize);
 	}
@@ -75,4 +81,6 @@ export function initModels(sequelize: Sequelize) {
 	Session.belongsTo(User, { as: 'user', foreignKey: 'userId' });
 	Comment.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
 	ReviewEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
+	SavedCondition.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+	TeamRuleOverride.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
 }

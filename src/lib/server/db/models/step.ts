@@ -22,6 +22,8 @@ export class Step extends Model<InferAttributes<Step>, InferCreationAttributes<S
 	declare quantities: Record<string, unknown> | null;
 	declare intent: StepIntent | null;
 	declare ordinal: number;
+	/** The team's saved condition this step follows (issue 16); null when none. */
+	declare savedConditionId: CreationOptional<string | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -39,6 +41,7 @@ export class Step extends Model<InferAttributes<Step>, InferCreationAttributes<S
 				quantities: { type: DataTypes.JSON, allowNull: true },
 				intent: { type: DataTypes.STRING(16), allowNull: true },
 				ordinal: { type: DataTypes.INTEGER, allowNull: false },
+				savedConditionId: { type: DataTypes.UUID, allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},
