@@ -146,6 +146,8 @@ test('a chemist fills the acetal step’s quantities, logs the trap, and finds i
 	await expect(
 		reviewer.getByRole('button', { name: /Add material|Add reading|Remove/ })
 	).toHaveCount(0);
-	await expect(reviewer.getByRole('textbox')).toHaveCount(0);
+	// The one field a reviewer gets is the step's comment (issue 15); no amount, name or reading.
+	await expect(reviewer.getByRole('textbox')).toHaveCount(1);
+	await expect(reviewer.getByRole('textbox', { name: 'Comment on this step' })).toBeVisible();
 	await reviewer.context().close();
 });
