@@ -30,6 +30,14 @@ export function historySentence(entry: ReviewHistoryEntry): string {
 	return SENTENCES[entry.action](entry);
 }
 
+/**
+ * The approved version, read from a history already loaded (oldest first): the version of the
+ * latest `approve`, as `approvedVersionOf` reads it from the database; null if never approved.
+ */
+export function approvedVersionIn(history: readonly ReviewHistoryEntry[]): number | null {
+	return history.findLast((entry) => entry.action === 'approve')?.version ?? null;
+}
+
 export type Approval = {
 	version: number;
 	by: PersonRef | null;

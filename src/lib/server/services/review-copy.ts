@@ -5,14 +5,14 @@ import type { QuantitiesAnswer, QuantitiesRequest } from '../../quantities/contr
 import type { RouteDocument, RouteStep } from '../../route/document';
 import { stepOrder } from '../../route/step-names';
 import type { StepCheck } from '../../rules/check/types';
-import { approvalOf, type Approval } from '../../review/history';
+import { approvalOf, approvedVersionIn, type Approval } from '../../review/history';
 import { sortThreads, type CommentThread } from '../../review/threads';
 import { ApiFailure } from '../api';
 import { runChemistry } from '../chem-pool/pool';
 import type { Route } from '../db';
 import { routeMapLabels } from '../route-map-labels';
 import { listComments } from './comments';
-import { approvedVersionOf, reviewHistory } from './review';
+import { reviewHistory } from './review';
 
 // The printable review copy of a route (/routes/{id}/report): the stored route with what the map
 // shows for each step (drawings, the check, quantities, comments) gathered in one load. Whatever
@@ -165,7 +165,7 @@ function conditionsOf(step: RouteStep, check: StepCheck | null) {
 /** Everything the review copy prints for `route` (its stored document passed in). */
 export async function reviewCopy(route: Route, document: RouteDocument): Promise<ReviewCopy> {
 	const ordered = stepOrder(document);
-	const [drawings, checks, quantities, comments, history, approvedVersion] = await Promise.all([
+	const [drawings, checks, quantities, comments, history] = await Promise.all([
 		// The general chemistry budget, not the route page's shorter one: a copy made to be printed
 		// waits for its drawings rather than print without them.
 		attempt(() =>
@@ -176,8 +176,7 @@ export async function reviewCopy(route: Route, document: RouteDocument): Promise
 		attempt(() => runChemistry('checkRoute', { document })),
 		stepQuantities(document, ordered),
 		listComments(route.id),
-		reviewHistory(route.id),
-		approvedVersionOf(route.id)
+		reviewHistory(route.id)
 	]);
 	const checkById = failed(checks) ? new Map() : new Map(checks.map((c) => [c.id, c]));
 	const threads = sortThreads(
@@ -200,7 +199,7 @@ export async function reviewCopy(route: Route, document: RouteDocument): Promise
 		};
 	});
 	return {
-		approval: approvalOf(approvedVersion, history, route.version),
+		approval: approvalOf(approvedVersionIn(history), history, route.version),
 		molecules: molecules(document, drawings),
 		steps,
 		checkNote: failed(checks) ? `Not checked: ${checks.failed}` : null,

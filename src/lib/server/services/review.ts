@@ -25,7 +25,11 @@ export async function reviewHistory(routeId: string): Promise<ReviewHistoryEntry
 	await dbReady();
 	const events = await ReviewEvent.findAll({
 		where: { routeId },
-		order: [['createdAt', 'ASC']],
+		// The same tie-break as approvedVersionOf, so approvedVersionIn(history) agrees with it.
+		order: [
+			['createdAt', 'ASC'],
+			['version', 'ASC']
+		],
 		include: [{ model: User, as: 'actor', attributes: ['id', 'name'] }]
 	});
 	const reviewerIds = [...new Set(events.flatMap((event) => event.reviewerIds ?? []))];

@@ -7,7 +7,8 @@ import { chemPoolConfig } from '$lib/server/chem-pool/config';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeMapLabels } from '$lib/server/route-map-labels';
 import { listComments } from '$lib/server/services/comments';
-import { approvedVersionOf, reviewCandidates, reviewHistory } from '$lib/server/services/review';
+import { reviewCandidates, reviewHistory } from '$lib/server/services/review';
+import { approvedVersionIn } from '$lib/review/history';
 import { routeDocument, routeLinks } from '$lib/server/services/routes';
 
 export const load: PageServerLoad = async (event) => {
@@ -16,14 +17,14 @@ export const load: PageServerLoad = async (event) => {
 		event.params.routeId,
 		'project.read'
 	);
-	const [document, links, comments, history, approvedVersion, reviewers] = await Promise.all([
+	const [document, links, comments, history, reviewers] = await Promise.all([
 		routeDocument(route),
 		routeLinks(route),
 		listComments(route.id),
 		reviewHistory(route.id),
-		approvedVersionOf(route.id),
 		reviewCandidates(project.teamId)
 	]);
+	const approvedVersion = approvedVersionIn(history);
 	// Depictions come with the page, so a reload shows the drawings without a request per node.
 	// They are drawn on the chemistry pool within the page budget; when it runs out (or the pool
 	// is busy) the page comes without them and each node asks /api/analyze itself, showing that
