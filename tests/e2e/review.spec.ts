@@ -112,3 +112,32 @@ test('a route goes through review: request, comment, changes, reply, resolve, ap
 	await expect(copy).toContainText('a dioxolane goes on first');
 	await expect(page.getByTestId('report-approval')).toContainText('Priya Vance');
 });
+
+test('a viewer reads the demo review (comments, status, copy) with nothing to write or act on', async ({
+	browser
+}) => {
+	const viewer = await asUser(browser, 'viewer');
+	const projects: { id: string; name: string }[] = (
+		await (await viewer.request.get('/api/projects')).json()
+	).projects;
+	const petrel = projects.find((project) => project.name.startsWith('Petrel'))!;
+	const routes: { id: string; name: string }[] = (
+		await (await viewer.request.get(`/api/projects/${petrel.id}/routes`)).json()
+	).routes;
+	const demo = routes.find((route) => route.name === 'OG-2044 amide coupling');
+	expect(demo, 'the demo scenario puts the amide coupling in review').toBeTruthy();
+	await viewer.goto(`/routes/${demo!.id}`);
+	await expect(reviewBar(viewer).getByText('Status: In review')).toBeVisible();
+	await expect(reviewBar(viewer).getByRole('button')).toHaveCount(0);
+	await viewer.getByRole('button', { name: '2 open comments' }).click();
+	await expect(viewer.getByRole('article', { name: 'Comment by Priya Vance' })).toContainText(
+		'Both partners carry a free OH'
+	);
+	await expect(viewer.getByText('as a viewer you cannot write them')).toBeVisible();
+	await expect(viewer.getByRole('textbox')).toHaveCount(0);
+	await expect(viewer.getByRole('button', { name: /^(Reply|Resolve|Edit)$/ })).toHaveCount(0);
+	await viewer.goto(`/routes/${demo!.id}/report`);
+	await expect(viewer.getByTestId('review-copy')).toContainText('86 % amide');
+	expect((await viewer.goto('/outbox'))?.status()).toBe(403);
+	await viewer.context().close();
+});
