@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pgChanges, suggestionsFor } from '../../src/lib/library/suggestions';
+import { pgChanges, stepReagentsOf, suggestionsFor } from '../../src/lib/library/suggestions';
 import { libraryEntry } from '../factories/library-entries';
 
 describe('pgChanges: which protecting groups a step puts on or takes off', () => {
@@ -61,5 +61,16 @@ describe('suggestionsFor: the entries the step panel offers', () => {
 	it('offers nothing for a plain transformation', () => {
 		expect(suggestionsFor(tbsOn, [], 'transform')).toEqual([]);
 		expect(suggestionsFor(tbsOn, [], undefined)).toEqual([]);
+	});
+});
+
+describe('stepReagentsOf: what "Use this" writes into the step', () => {
+	it('joins the reagents with the solvent and temperature the classifier reads', () => {
+		const entry = { reagents: 'TBSOTf, 2,6-lutidine', solvent: 'CH2Cl2', temperature: '−78 °C' };
+		expect(stepReagentsOf(entry)).toBe('TBSOTf, 2,6-lutidine, CH2Cl2, −78 °C');
+	});
+
+	it('leaves out what the entry does not say', () => {
+		expect(stepReagentsOf({ reagents: 'TBAF', solvent: null, temperature: ' ' })).toBe('TBAF');
 	});
 });

@@ -6,6 +6,10 @@ import type { SavedConditionAnswer } from '../api/answers';
 import type { StepIntent } from '../route/document';
 import type { SavedConditionKind } from './contract';
 
+/** The team's entries as a page load read them, or why they could not be read (never just []). */
+export type TeamLibrary =
+	{ conditions: SavedConditionAnswer[]; error: null } | { conditions: []; error: string };
+
 /** A protecting group the step puts on (`install`) or takes off (`remove`). */
 export type PgChange = { protectingGroup: string; kind: SavedConditionKind };
 
@@ -59,4 +63,17 @@ export function suggestionsFor(
 				b.uses - a.uses ||
 				b.updatedAt.localeCompare(a.updatedAt)
 		);
+}
+
+/**
+ * The text "Use this" writes into the step's reagents: the reagents with the solvent and the
+ * temperature, which the classifier also reads, e.g. 'TBSOTf, 2,6-lutidine, CH2Cl2, −78 °C'.
+ */
+export function stepReagentsOf(
+	entry: Pick<SavedConditionAnswer, 'reagents' | 'solvent' | 'temperature'>
+) {
+	return [entry.reagents, entry.solvent, entry.temperature]
+		.map((part) => part?.trim())
+		.filter(Boolean)
+		.join(', ');
 }

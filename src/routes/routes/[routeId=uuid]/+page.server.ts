@@ -9,6 +9,7 @@ import { routeMapLabels } from '$lib/server/route-map-labels';
 import { listComments } from '$lib/server/services/comments';
 import { approvedVersionOf, reviewCandidates, reviewHistory } from '$lib/server/services/review';
 import { routeDocument, routeLinks } from '$lib/server/services/routes';
+import { readTeamLibrary } from '$lib/server/team-library';
 
 export const load: PageServerLoad = async (event) => {
 	const { user, route, project, role } = await requireRouteAction(
@@ -16,14 +17,17 @@ export const load: PageServerLoad = async (event) => {
 		event.params.routeId,
 		'project.read'
 	);
-	const [document, links, comments, history, approvedVersion, reviewers] = await Promise.all([
-		routeDocument(route),
-		routeLinks(route),
-		listComments(route.id),
-		reviewHistory(route.id),
-		approvedVersionOf(route.id),
-		reviewCandidates(project.teamId)
-	]);
+	const [document, links, comments, history, approvedVersion, reviewers, library] =
+		await Promise.all([
+			routeDocument(route),
+			routeLinks(route),
+			listComments(route.id),
+			reviewHistory(route.id),
+			approvedVersionOf(route.id),
+			reviewCandidates(project.teamId),
+			// The step panel's suggestions (issue 16): the team's saved conditions.
+			readTeamLibrary(event.fetch, project.teamId)
+		]);
 	// Depictions come with the page, so a reload shows the drawings without a request per node.
 	// They are drawn on the chemistry pool within the page budget; when it runs out (or the pool
 	// is busy) the page comes without them and each node asks /api/analyze itself, showing that
@@ -48,11 +52,12 @@ export const load: PageServerLoad = async (event) => {
 			version: route.version,
 			archived: route.archivedAt !== null
 		},
-		project: { id: project.id, name: project.name },
+		project: { id: project.id, name: project.name, teamId: project.teamId },
 		document,
 		analyses,
 		// The names the map shows for condition, group and protecting-group ids (no /api/rules call).
 		labels: routeMapLabels(),
+		library,
 		links,
 		role,
 		canEdit: can(role, 'route.edit'),
