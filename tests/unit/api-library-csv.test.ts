@@ -134,6 +134,30 @@ describe('library import', () => {
 		expect(await ActivityEvent.count({ where: { kind: 'library.imported' } })).toBe(imports);
 	});
 
+	it('refuses a NUL in a cell (naming row and column) and keeps one out of the file name', async () => {
+		const refused = await uploadLibraryCsv(
+			f.people.chemist,
+			f.team.id,
+			`${HEADER}\nTBS,install,TBSCl\u0000,,,,,,,`
+		);
+		expect(refused.status).toBe(422);
+		expect(refused.body.error.details.rows).toEqual([
+			{ row: 2, column: 'reagents', reason: expect.stringContaining('control characters') }
+		]);
+		const named = await uploadLibraryCsv(
+			f.people.chemist,
+			f.team.id,
+			`${HEADER}\nTBS,install,TBSCl,,,,,,,`,
+			'nul\u0000.csv'
+		);
+		expect(named.status).toBe(201);
+		const event = await ActivityEvent.findOne({
+			where: { kind: 'library.imported' },
+			order: [['createdAt', 'DESC']]
+		});
+		expect(event!.summary).toContain('“nul.csv”');
+	});
+
 	it('refuses a header with an unknown or missing column (row 1)', async () => {
 		const { status, body } = await uploadLibraryCsv(
 			f.people.chemist,

@@ -48,7 +48,9 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 		return tooLarge();
 	}
 	const answer = await importLibraryCsv(user, role, teamId, {
-		name: file.name.slice(0, 120),
+		// The name reaches the activity feed: control characters (a NUL) never get stored.
+		// eslint-disable-next-line no-control-regex -- removing control characters is the point
+		name: file.name.replace(/[\u0000-\u001F\u007F]/g, '').slice(0, 120) || 'library.csv',
 		text: await file.text()
 	});
 	return json(answer satisfies LibraryImportAnswer, { status: 201 });
