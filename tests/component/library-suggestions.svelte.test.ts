@@ -43,14 +43,13 @@ const conditions = [
 	libraryEntry({ reagents: 'TBAF', kind: 'remove', approved: true }),
 	libraryEntry({ reagents: 'BnBr, NaH', protectingGroup: 'Bn', approved: true })
 ];
-const library = { conditions, error: null };
 const step = () => protection.steps[0]!;
 const offered = () =>
 	screen.queryAllByTestId('suggestion').map((li) => li.querySelector('p')?.textContent);
 
 describe('StepPanel: saved conditions for a protection step', () => {
 	it('offers the TBS installs, approved first, then by uses, never retired ones', async () => {
-		const { editor } = await makeEditor({ document: protection, analyses, library });
+		const { editor } = await makeEditor({ document: protection, analyses, library: conditions });
 		renderWithEditor(editor, StepPanel, { step: step() });
 		expect(offered()).toEqual([
 			'TBSCl, Et3N, DMF, rt',
@@ -62,7 +61,7 @@ describe('StepPanel: saved conditions for a protection step', () => {
 	});
 
 	it('"Use this" writes the reagents and links the step to the entry, undoably', async () => {
-		const { editor } = await makeEditor({ document: protection, analyses, library });
+		const { editor } = await makeEditor({ document: protection, analyses, library: conditions });
 		renderWithEditor(editor, StepPanel, { step: step() });
 		await fireEvent.click(screen.getByRole('button', { name: 'Use this: TBSOTf, 2,6-lutidine' }));
 		expect(editor.doc.steps[0]).toMatchObject({
@@ -77,7 +76,7 @@ describe('StepPanel: saved conditions for a protection step', () => {
 
 	it('marks the entry a step already follows instead of offering it again', async () => {
 		const linked = { ...protection, steps: [{ ...step(), savedCondition: best.id }] };
-		const { editor } = await makeEditor({ document: linked, analyses, library });
+		const { editor } = await makeEditor({ document: linked, analyses, library: conditions });
 		renderWithEditor(editor, StepPanel, { step: linked.steps[0]! });
 		const item = within(screen.getAllByTestId('suggestion')[1]!);
 		expect(item.getByText('Used in this step')).toBeTruthy();
@@ -88,7 +87,7 @@ describe('StepPanel: saved conditions for a protection step', () => {
 		const { editor } = await makeEditor({
 			document: protection,
 			analyses,
-			library,
+			library: conditions,
 			canEdit: false
 		});
 		renderWithEditor(editor, StepPanel, { step: step() });
@@ -98,25 +97,19 @@ describe('StepPanel: saved conditions for a protection step', () => {
 
 	it('before the structures are read, a deprotection step gets the removal entries', async () => {
 		const deprotect = { ...protection, steps: [{ ...step(), intent: 'deprotect' as const }] };
-		const { editor } = await makeEditor({ document: deprotect, library });
+		const { editor } = await makeEditor({ document: deprotect, library: conditions });
 		renderWithEditor(editor, StepPanel, { step: deprotect.steps[0]! });
 		expect(offered()).toEqual(['TBAF, DMF, rt']);
 	});
 
 	it('a transformation that keeps its groups gets no library section', async () => {
 		const same = { [diol]: analysis(['TBS']), [silylEther]: analysis(['TBS']) };
-		const { editor } = await makeEditor({ document: protection, analyses: same, library });
+		const { editor } = await makeEditor({
+			document: protection,
+			analyses: same,
+			library: conditions
+		});
 		renderWithEditor(editor, StepPanel, { step: step() });
 		expect(screen.queryByText('From the team’s condition library')).toBeNull();
-	});
-
-	it('says so when the library could not be read, rather than showing nothing', async () => {
-		const failed = {
-			conditions: [] as [],
-			error: 'The condition library could not be read: busy.'
-		};
-		const { editor } = await makeEditor({ document: protection, analyses, library: failed });
-		renderWithEditor(editor, StepPanel, { step: step() });
-		expect(screen.getByText('The condition library could not be read: busy.')).toBeTruthy();
 	});
 });

@@ -6,7 +6,7 @@ import type { Component } from 'svelte';
 import { vi } from 'vitest';
 import { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
 import type { Analysis, ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
-import type { TeamLibrary } from '$lib/library/suggestions';
+import type { SavedConditionAnswer } from '$lib/api/answers';
 import { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
 import type { ReviewState } from '$lib/components/review/review-state.svelte';
@@ -39,7 +39,7 @@ type Options = {
 	labels?: ConditionLabel[] | null;
 	/** Analyses by structure, as the page load sends them. */
 	analyses?: Record<string, Analysis>;
-	library?: TeamLibrary;
+	library?: SavedConditionAnswer[];
 };
 
 /** The editor, with its check answer already in (when `checks` is given). */

@@ -6,10 +6,6 @@ import type { SavedConditionAnswer } from '../api/answers';
 import type { StepIntent } from '../route/document';
 import type { SavedConditionKind } from './contract';
 
-/** The team's entries as a page load read them, or why they could not be read (never just []). */
-export type TeamLibrary =
-	{ conditions: SavedConditionAnswer[]; error: null } | { conditions: []; error: string };
-
 /** A protecting group the step puts on (`install`) or takes off (`remove`). */
 export type PgChange = { protectingGroup: string; kind: SavedConditionKind };
 

@@ -7,7 +7,7 @@ import { can } from '$lib/policy';
 import { notFound, requireUser } from '$lib/server/auth/guards';
 import { teamsOfCaller } from '$lib/server/auth/memberships';
 import { routeMapLabels } from '$lib/server/route-map-labels';
-import { readTeamLibrary } from '$lib/server/team-library';
+import { listSavedConditions } from '$lib/server/services/library';
 import {
 	approveEntry,
 	deleteEntry,
@@ -32,8 +32,8 @@ export const load: PageServerLoad = async (event) => {
 	if (!team) {
 		return { teams, team: null, protectingGroups };
 	}
-	const [library, form] = await Promise.all([
-		readTeamLibrary(event.fetch, team.id),
+	const [conditions, form] = await Promise.all([
+		listSavedConditions([team.id], {}),
 		superValidate({ teamId: team.id }, zod4(libraryEntrySchema), { errors: false })
 	]);
 	return {
@@ -43,7 +43,7 @@ export const load: PageServerLoad = async (event) => {
 		// The page only hides what a role cannot use; the API decides every write.
 		canAdd: can(team.role, 'library.add'),
 		canApprove: can(team.role, 'library.approve'),
-		library,
+		conditions,
 		protectingGroups,
 		form
 	};

@@ -26,17 +26,10 @@ export const deleteEntry = (fetcher: Fetch, id: string) =>
 	callApi(paths.savedCondition(id), { method: 'DELETE' }, fetcher);
 
 /**
- * The form field a refusal names, from its details: a zod issue list (`[{ path: ['yield'] }]`)
- * or `{ field: 'yield' }`; null when it names none of the form's fields.
+ * The form field a 422 names (`details: { field }`, as every library write answers it), or null
+ * when it names none of the form's fields.
  */
 export function refusedField(details: unknown, fields: readonly string[]): string | null {
-	const candidates: unknown[] = [];
-	if (Array.isArray(details)) {
-		candidates.push(...details.map((issue) => (issue as { path?: unknown[] })?.path?.[0]));
-	} else if (details && typeof details === 'object') {
-		const { field, path } = details as { field?: unknown; path?: unknown[] };
-		candidates.push(field, path?.[0]);
-	}
-	const named = candidates.find((c): c is string => typeof c === 'string' && fields.includes(c));
-	return named ?? null;
+	const field = (details as { field?: unknown } | undefined)?.field;
+	return typeof field === 'string' && fields.includes(field) ? field : null;
 }

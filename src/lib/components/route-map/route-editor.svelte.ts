@@ -5,7 +5,7 @@
 
 import type { Analysis, ConditionLabel, RouteClient, RuleLabels } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
-import type { TeamLibrary } from '$lib/library/suggestions';
+import type { SavedConditionAnswer } from '$lib/api/answers';
 import type { RouteDocument } from '$lib/route/document';
 import { FIELD_LIMITS, withSuffix } from '$lib/schemas/limits';
 import { Autosave } from './autosave.svelte';
@@ -28,7 +28,7 @@ type Init = {
 	/** Names for rule-table ids, sent with the page load (so no download of the rule table). */
 	labels: RuleLabels & { conditions: ConditionLabel[] };
 	/** The team's condition library as the page load read it (the step panel's suggestions). */
-	library?: TeamLibrary;
+	library?: SavedConditionAnswer[];
 };
 
 export class RouteEditor {
@@ -41,7 +41,7 @@ export class RouteEditor {
 	readonly check: ClashCheck;
 	readonly ruleLabels: RuleLabels;
 	readonly conditionLabels: ConditionLabel[];
-	readonly library: TeamLibrary | null;
+	readonly library: SavedConditionAnswer[] | null;
 
 	constructor(
 		init: Init,

@@ -7,9 +7,9 @@ import { chemPoolConfig } from '$lib/server/chem-pool/config';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeMapLabels } from '$lib/server/route-map-labels';
 import { listComments } from '$lib/server/services/comments';
+import { listSavedConditions } from '$lib/server/services/library';
 import { approvedVersionOf, reviewCandidates, reviewHistory } from '$lib/server/services/review';
 import { routeDocument, routeLinks } from '$lib/server/services/routes';
-import { readTeamLibrary } from '$lib/server/team-library';
 
 export const load: PageServerLoad = async (event) => {
 	const { user, route, project, role } = await requireRouteAction(
@@ -26,7 +26,7 @@ export const load: PageServerLoad = async (event) => {
 			approvedVersionOf(route.id),
 			reviewCandidates(project.teamId),
 			// The step panel's suggestions (issue 16): the team's saved conditions.
-			readTeamLibrary(event.fetch, project.teamId)
+			listSavedConditions([project.teamId], {})
 		]);
 	// Depictions come with the page, so a reload shows the drawings without a request per node.
 	// They are drawn on the chemistry pool within the page budget; when it runs out (or the pool
