@@ -92,6 +92,24 @@ describe('the library page load', () => {
 		expect(isRedirect(anonymous)).toBe(true);
 	});
 
+	it('starts the form with blank fields as null, not undefined (a bound input refuses undefined)', async () => {
+		const data = (await read(f.people.chemist)) as PageData & {
+			form: { data: Record<string, unknown> };
+		};
+		for (const field of [
+			'solvent',
+			'temperature',
+			'time',
+			'scale',
+			'yield',
+			'reference',
+			'notes'
+		]) {
+			expect(data.form.data[field], field).toBeNull();
+		}
+		expect(data.form.data.teamId).toBe(f.team.id);
+	});
+
 	it('shows the team a person picks when they are in several', async () => {
 		const second = await makeTeam('Second bench');
 		await join(f.people.reviewer, second.id, 'chemist');

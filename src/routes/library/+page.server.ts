@@ -15,7 +15,7 @@ import {
 	saveEntry,
 	setEntryRetired
 } from './library-writes.server';
-import { entryIdSchema, libraryEntrySchema } from './schema';
+import { blankEntry, entryIdSchema, libraryEntrySchema } from './schema';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireUser(event);
@@ -34,7 +34,9 @@ export const load: PageServerLoad = async (event) => {
 	}
 	const [conditions, form] = await Promise.all([
 		listSavedConditions([team.id], {}),
-		superValidate({ teamId: team.id }, zod4(libraryEntrySchema), { errors: false })
+		superValidate({ ...blankEntry, teamId: team.id }, zod4(libraryEntrySchema), {
+			errors: false
+		})
 	]);
 	return {
 		teams,

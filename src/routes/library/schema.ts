@@ -22,3 +22,14 @@ export type LibraryEntryForm = z.output<typeof libraryEntrySchema>;
 
 /** The buttons of a row (approve, retire, restore, delete) name the entry they act on. */
 export const entryIdSchema = z.object({ id: z.uuid() });
+
+/**
+ * A new entry's optional fields, all null: a bound input needs a value, not undefined, and
+ * superforms leaves optional fields undefined. Derived from the schema, so a new optional field
+ * joins by itself.
+ */
+export const blankEntry = Object.fromEntries(
+	Object.entries(savedConditionFields.shape)
+		.filter(([, field]) => field.safeParse(undefined).success)
+		.map(([name]) => [name, null])
+) as Partial<LibraryEntryForm>;
