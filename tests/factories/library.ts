@@ -34,7 +34,7 @@ export async function uploadLibraryCsv(
 	teamId: string,
 	text: string | null,
 	name = 'library.csv'
-): Promise<{ status: number; body: unknown }> {
+) {
 	const form = new FormData();
 	if (text !== null) {
 		form.set('file', new File([text], name, { type: 'text/csv' }));

@@ -14,6 +14,8 @@ import {
 	makeTeamWithEveryRole
 } from '../factories';
 import { addEntry } from '../factories/library';
+import { uploadRouteFile } from '../factories/route-upload';
+import * as exportRoute from '../../src/routes/api/routes/[routeId=uuid]/export/+server';
 
 // A step's link to a saved condition (issue 16): the route document's `savedCondition` is stored
 // in steps.savedConditionId and read back; another team's entry is refused naming the step; and
@@ -109,6 +111,26 @@ describe('a step’s saved condition', () => {
 		expect((await createRoute(otherProject.id, doc('Theirs', theirs.id), 'outsider')).status).toBe(
 			201
 		);
+	});
+
+	it('is left out of a JSON export, so the file imports into another team’s project', async () => {
+		const entry = await addEntry(f.people.chemist, f.team.id);
+		const created = await createRoute(project.id, doc('Exported', entry.id));
+		const event = fakeEvent({ user: f.people.viewer, path: '/api/routes/x/export?format=json' });
+		Object.assign(event, { params: { routeId: created.body.id } });
+		const file = await (
+			(await (exportRoute.GET as unknown as (e: RequestEvent) => Promise<Response>)(
+				event
+			)) as Response
+		).text();
+		expect(JSON.parse(file).steps[0]).not.toHaveProperty('savedCondition');
+		const imported = await uploadRouteFile({
+			user: f.people.outsider,
+			projectId: otherProject.id,
+			name: 'exported.json',
+			text: file
+		});
+		expect(imported.status).toBe(201);
 	});
 });
 
