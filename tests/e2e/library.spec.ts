@@ -75,3 +75,34 @@ test('a chemist saves a condition, the lead approves it and uses it on another r
 	await chemist.goto('/library');
 	await expect(usesOf(chemist, reagents)).toHaveText('1');
 });
+
+test('an author edits an entry in the form, and a reviewer reads the library without buttons', async ({
+	browser
+}) => {
+	const reagents = unique('TBAF, AcOH');
+	const chemist = await asUser(browser, 'chemist');
+	await chemist.goto('/library');
+	const form = chemist.locator('form[action="?/save"]');
+	await form.getByLabel('Protecting group').selectOption('TBS');
+	await form.getByLabel('Kind').selectOption('remove');
+	await form.getByLabel('Reagents').fill(reagents);
+	await form.getByRole('button', { name: 'Save' }).click();
+	await expect(entryRow(chemist, reagents)).toBeVisible();
+
+	await entryRow(chemist, reagents)
+		.getByRole('button', { name: /^Edit the/ })
+		.click();
+	await expect(chemist.getByRole('heading', { name: 'Edit the saved condition' })).toBeVisible();
+	await expect(form.getByLabel('Reagents')).toHaveValue(reagents);
+	await form.getByLabel('Yield (%)').fill('91');
+	await form.getByRole('button', { name: 'Save changes' }).click();
+	await expect(entryRow(chemist, reagents)).toContainText('91 %');
+	await expect(chemist.getByRole('heading', { name: 'Save a condition' })).toBeVisible();
+
+	const reviewer = await asUser(browser, 'reviewer');
+	await reviewer.goto('/library');
+	await expect(reviewer.getByText('you can read the library but not change it')).toBeVisible();
+	await expect(entryRow(reviewer, reagents)).toBeVisible();
+	await expect(entryRow(reviewer, reagents).getByRole('button')).toHaveCount(0);
+	await expect(reviewer.locator('form[action="?/save"]')).toHaveCount(0);
+});

@@ -150,24 +150,36 @@ describe('the library page actions', () => {
 		expect(await SavedCondition.count({ where: { reagents: 'x' } })).toBe(0);
 	});
 
-	it("a reviewer's save is refused by the API with its message", async () => {
-		const answer = (await act('save', f.people.reviewer, fields({ reagents: 'y' }))) as {
-			status: number;
-			data: { form: { message?: string } };
-		};
-		expect(answer.status).toBe(403);
-		expect(answer.data.form.message).toMatch(/cannot add to the condition library/);
+	it("a reviewer's save is refused (403) before it reaches the API, and another team's is a 404", async () => {
+		const refusal = await act('save', f.people.reviewer, fields({ reagents: 'y' })).catch(
+			(e: unknown) => e
+		);
+		expect(isHttpError(refusal) && refusal.status).toBe(403);
+		const outside = await act('save', f.people.outsider, fields({ reagents: 'y' })).catch(
+			(e: unknown) => e
+		);
+		expect(isHttpError(outside) && outside.status).toBe(404);
 		expect(await SavedCondition.count({ where: { reagents: 'y' } })).toBe(0);
 	});
 
 	it('a lead approves; a chemist cannot', async () => {
-		const refused = (await act('approve', f.people.chemist, { id: entryId })) as {
-			status: number;
-			data: { problem: string };
-		};
-		expect(refused.status).toBe(403);
+		const refused = await act('approve', f.people.chemist, { id: entryId }).catch(
+			(e: unknown) => e
+		);
+		expect(isHttpError(refused) && refused.status).toBe(403);
 		expect((await SavedCondition.findByPk(entryId))?.approvedAt).toBeNull();
 		await act('approve', f.people.lead, { id: entryId });
 		expect((await SavedCondition.findByPk(entryId))?.approvedAt).not.toBeNull();
+	});
+
+	it("a chemist cannot retire another chemist's entry: the API's refusal comes back in words", async () => {
+		const other = await addEntry(f.people.lead, f.team.id, { reagents: 'the lead’s own' });
+		const answer = (await act('retire', f.people.chemist, { id: other.id })) as {
+			status: number;
+			data: { problem: string };
+		};
+		expect(answer.status).toBe(403);
+		expect(answer.data.problem).toBeTruthy();
+		expect((await SavedCondition.findByPk(other.id))?.retiredAt ?? null).toBeNull();
 	});
 });

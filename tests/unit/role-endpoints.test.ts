@@ -94,6 +94,13 @@ const EXPECTED: Record<string, Expectation> = {
 	'action add /teams/[teamId=uuid]': pageManage,
 	'action changeRole /teams/[teamId=uuid]': pageManage,
 	'action remove /teams/[teamId=uuid]': pageManage,
+	// The library page guards the team (save) or the entry's team (the row buttons) itself, then
+	// calls the library API, which decides author-or-lead.
+	'action save /library': pageEdit,
+	'action approve /library': pageManage,
+	'action retire /library': pageEdit,
+	'action restore /library': pageEdit,
+	'action delete /library': pageEdit,
 	'action default /signin': AUTH_JS,
 	'action default /signout': AUTH_JS,
 	'action default /set-password/[token]': AUTH_JS
@@ -176,7 +183,12 @@ async function call(entry: Entry, caller: Caller): Promise<Outcome> {
 		Object.assign(event, { params });
 		return outcomeOf(() => (module[entry.name] as (e: RequestEvent) => unknown)(event));
 	}
-	const form = new URLSearchParams({ teamId: f.team.id, name: 'Role table', routeId: route.id });
+	const form = new URLSearchParams({
+		teamId: f.team.id,
+		name: 'Role table',
+		routeId: route.id,
+		id: saved.id
+	});
 	const url = new URL(`${path}?/${entry.name}`, 'http://localhost');
 	const request = new Request(url, {
 		method: 'POST',

@@ -4,10 +4,11 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import type { Actions, PageServerLoad } from './$types';
 import type { ApiResult } from '$lib/client/api';
 import { can } from '$lib/policy';
-import { notFound, requireUser } from '$lib/server/auth/guards';
+import { isUuid } from '$lib/uuid';
+import { notFound, requireTeamAction, requireUser } from '$lib/server/auth/guards';
 import { teamsOfCaller } from '$lib/server/auth/memberships';
 import { routeMapLabels } from '$lib/server/route-map-labels';
-import { listSavedConditions } from '$lib/server/services/library';
+import { findSavedCondition, listSavedConditions } from '$lib/server/services/library';
 import {
 	approveEntry,
 	deleteEntry,
@@ -53,18 +54,30 @@ export const load: PageServerLoad = async (event) => {
 
 /** A refused row action, in words for the page (the API's message names the reason). */
 const refused = (result: ApiResult<unknown>) =>
-	result.ok ? undefined : fail(result.status || 500, { problem: result.message });
+	result.ok ? undefined : fail(result.status || 503, { problem: result.message });
 
-async function entryId(event: RequestEvent) {
+/**
+ * The entry a row button names, after the page's own guard on its team (404 for another team,
+ * 403 without `action`); the API then decides author-or-lead for the write itself.
+ */
+async function guardedEntryId(event: RequestEvent, action: 'library.add' | 'library.approve') {
 	requireUser(event);
 	const parsed = entryIdSchema.safeParse(Object.fromEntries(await event.request.formData()));
-	return parsed.success ? parsed.data.id : notFound('That library entry');
+	const entry = parsed.success ? await findSavedCondition(parsed.data.id) : null;
+	if (!entry) {
+		notFound('That library entry');
+	}
+	await requireTeamAction(event, entry.teamId, action);
+	return entry.id;
 }
 
 export const actions: Actions = {
 	save: async (event) => {
 		requireUser(event);
 		const form = await superValidate(event.request, zod4(libraryEntrySchema));
+		// The team is guarded before the fields, so another team's id is a 404 whatever the body.
+		const teamId = isUuid(form.data.teamId) ? form.data.teamId : notFound('That team');
+		await requireTeamAction(event, teamId, 'library.add');
 		if (!form.valid) {
 			return fail(400, { form });
 		}
@@ -78,9 +91,12 @@ export const actions: Actions = {
 		}
 		return message(form, result.message, { status: result.status === 403 ? 403 : 400 });
 	},
-	approve: async (event) => refused(await approveEntry(event.fetch, await entryId(event))),
-	retire: async (event) => refused(await setEntryRetired(event.fetch, await entryId(event), true)),
+	approve: async (event) =>
+		refused(await approveEntry(event.fetch, await guardedEntryId(event, 'library.approve'))),
+	retire: async (event) =>
+		refused(await setEntryRetired(event.fetch, await guardedEntryId(event, 'library.add'), true)),
 	restore: async (event) =>
-		refused(await setEntryRetired(event.fetch, await entryId(event), false)),
-	delete: async (event) => refused(await deleteEntry(event.fetch, await entryId(event)))
+		refused(await setEntryRetired(event.fetch, await guardedEntryId(event, 'library.add'), false)),
+	delete: async (event) =>
+		refused(await deleteEntry(event.fetch, await guardedEntryId(event, 'library.add')))
 };
