@@ -5,7 +5,8 @@ import { render } from '@testing-library/svelte';
 import type { Component } from 'svelte';
 import { vi } from 'vitest';
 import { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
-import type { ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
+import type { Analysis, ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
+import type { SavedConditionAnswer } from '$lib/api/answers';
 import { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
 import type { ReviewState } from '$lib/components/review/review-state.svelte';
@@ -36,6 +37,9 @@ type Options = {
 	document?: RouteDocument;
 	checks?: StepCheck[];
 	labels?: ConditionLabel[] | null;
+	/** Analyses by structure, as the page load sends them. */
+	analyses?: Record<string, Analysis>;
+	library?: SavedConditionAnswer[];
 };
 
 /** The editor, with its check answer already in (when `checks` is given). */
@@ -43,7 +47,9 @@ export async function makeEditor({
 	canEdit = true,
 	document = routeDoc,
 	checks,
-	labels = null
+	labels = null,
+	analyses = {},
+	library
 }: Options = {}) {
 	const client = {
 		save: vi.fn(async () => ({ ok: true, status: 200, data: { version: 2 } })),
@@ -57,7 +63,8 @@ export async function makeEditor({
 			version: 1,
 			document,
 			canEdit,
-			analyses: {},
+			analyses,
+			library,
 			// The page load sends the labels; none in a test that does not name them.
 			labels: { conditions: labels ?? [], groups: new Map(), protectingGroups: new Map() }
 		},

@@ -5,6 +5,7 @@ import { Project } from '../../src/lib/server/db';
 import { addComment } from '../../src/lib/server/services/comment-writes';
 import { createRoute } from '../../src/lib/server/services/routes';
 import { freshDatabase, makeProject, makeTeamWithEveryRole } from '../factories';
+import { addEntry } from '../factories/library';
 import { concrete, discoverEndpoints, routeModule, type Endpoint } from '../factories/route-tree';
 
 // Malformed bodies, wrong content types and control characters at every endpoint that reads a
@@ -66,6 +67,18 @@ const JSON_BODIES: Body[] = [
 		name: 'review request with a NUL in its note',
 		contentType: 'application/json',
 		body: JSON.stringify({ action: 'request', reviewers: [], note: 'See s2\u0000' }),
+		nul: true
+	},
+	{
+		name: 'library entry with NUL',
+		contentType: 'application/json',
+		body: JSON.stringify({
+			teamId: '',
+			protectingGroup: 'TBS',
+			kind: 'install',
+			reagents: 'TBSCl\u0000',
+			notes: '\u0000'
+		}),
 		nul: true
 	},
 	{
@@ -200,7 +213,9 @@ async function send(endpoint: Endpoint, body: Body): Promise<Verdict> {
 		steps: []
 	});
 	const comment = await addComment(f.people.lead, route, project, { body: 'Fuzz' });
+	const saved = await addEntry(f.people.lead, f.team.id);
 	const { params, path } = concrete(endpoint.route, {
+		conditionId: saved.id,
 		projectId: project.id,
 		routeId: route.id,
 		commentId: comment.id,
@@ -213,10 +228,15 @@ async function send(endpoint: Endpoint, body: Body): Promise<Verdict> {
 		'http://localhost'
 	);
 	const headers = body.contentType ? { 'content-type': body.contentType } : undefined;
+	// A body naming the team gets the real one, so the guard lets it through to the fields.
+	const sent =
+		typeof body.body === 'string'
+			? body.body.replace('"teamId":""', `"teamId":"${f.team.id}"`)
+			: body.body;
 	const request = new Request(url, {
 		method: endpoint.kind === 'action' ? 'POST' : endpoint.name,
 		headers,
-		body: body.body
+		body: sent
 	});
 	const noCookies = {
 		get: () => undefined,

@@ -8,7 +8,9 @@ import {
 	type Endpoint as Entry
 } from '../factories/route-tree';
 import { addComment } from '../../src/lib/server/services/comment-writes';
+import type { SessionUser } from '../../src/lib/types';
 import { createRoute } from '../../src/lib/server/services/routes';
+import { addEntry } from '../factories/library';
 
 // Every endpoint method and form action in the route tree, run as every kind of caller. The list
 // of endpoints is read from src/routes, so a new one fails this test until it is added to
@@ -68,6 +70,15 @@ const EXPECTED: Record<string, Expectation> = {
 	'PATCH /api/comments/[commentId=uuid]': apiComment,
 	// Leads only, of any team: the outsider leads the other team and reads that team's outbox.
 	'GET /api/outbox': row('ok', '403', '403', '403', 'ok', '401'),
+	// Without teamId the list is of the caller's own teams, so the outsider reads their own.
+	'GET /api/library': apiAnyone,
+	'POST /api/library': apiEdit,
+	// The entry is the chemist's: its author or a lead may change or delete it.
+	'PATCH /api/library/[conditionId=uuid]': apiEdit,
+	'DELETE /api/library/[conditionId=uuid]': apiEdit,
+	'POST /api/library/[conditionId=uuid]/approve': row('ok', '403', '403', '403', '404', '401'),
+	'GET /api/library/export': apiRead,
+	'POST /api/library/import': apiEdit,
 	'action createToken /account': pageAnyone,
 	'action revokeToken /account': pageAnyone,
 	'action changePassword /account': pageAnyone,
@@ -83,6 +94,13 @@ const EXPECTED: Record<string, Expectation> = {
 	'action add /teams/[teamId=uuid]': pageManage,
 	'action changeRole /teams/[teamId=uuid]': pageManage,
 	'action remove /teams/[teamId=uuid]': pageManage,
+	// The library page guards the team (save) or the entry's team (the row buttons) itself, then
+	// calls the library API, which decides author-or-lead.
+	'action save /library': pageEdit,
+	'action approve /library': pageManage,
+	'action retire /library': pageEdit,
+	'action restore /library': pageEdit,
+	'action delete /library': pageEdit,
 	'action default /signin': AUTH_JS,
 	'action default /signout': AUTH_JS,
 	'action default /set-password/[token]': AUTH_JS
@@ -131,7 +149,9 @@ async function call(entry: Entry, caller: Caller): Promise<Outcome> {
 		steps: []
 	});
 	const comment = await addComment(f.people.chemist, route, project, { body: 'Role table' });
+	const saved = await addEntry(f.people.chemist, f.team.id);
 	const ids: Record<string, string> = {
+		conditionId: saved.id,
 		projectId: project.id,
 		routeId: route.id,
 		commentId: comment.id,
@@ -142,23 +162,33 @@ async function call(entry: Entry, caller: Caller): Promise<Outcome> {
 	const { params, path } = concrete(entry.route, ids);
 	const user = caller === 'anonymous' ? null : f.people[caller];
 	const module = await routeModule(entry.file);
+	if (entry.key === 'POST /api/library/import') {
+		return outcomeOf(() => (module.POST as (e: unknown) => unknown)(libraryImport(user, path)));
+	}
 	if (entry.kind === 'method') {
 		const body =
 			entry.key === 'POST /api/projects'
 				? { teamId: f.team.id, name: 'Role table' }
-				: ['GET', 'fallback'].includes(entry.name)
-					? undefined
-					: {};
+				: entry.key === 'POST /api/library'
+					? { teamId: f.team.id, protectingGroup: 'TBS', kind: 'install', reagents: 'TBSCl' }
+					: ['GET', 'fallback'].includes(entry.name)
+						? undefined
+						: {};
 		const event = fakeEvent({
 			user,
-			path,
+			path: entry.key === 'GET /api/library/export' ? `${path}?teamId=${f.team.id}` : path,
 			method: entry.name === 'fallback' ? 'GET' : entry.name,
 			body
 		});
 		Object.assign(event, { params });
 		return outcomeOf(() => (module[entry.name] as (e: RequestEvent) => unknown)(event));
 	}
-	const form = new URLSearchParams({ teamId: f.team.id, name: 'Role table', routeId: route.id });
+	const form = new URLSearchParams({
+		teamId: f.team.id,
+		name: 'Role table',
+		routeId: route.id,
+		id: saved.id
+	});
 	const url = new URL(`${path}?/${entry.name}`, 'http://localhost');
 	const request = new Request(url, {
 		method: 'POST',
@@ -175,6 +205,15 @@ async function call(entry: Entry, caller: Caller): Promise<Outcome> {
 	};
 	const actions = module.actions as Record<string, (e: unknown) => unknown>;
 	return outcomeOf(() => actions[entry.name]!(event));
+}
+
+/** The library import reads its team from a multipart form, so the table sends one. */
+function libraryImport(user: SessionUser | null, path: string) {
+	const form = new FormData();
+	form.set('teamId', f.team.id);
+	form.set('file', new File(['protectingGroup,kind,reagents\nTBS,install,TBSCl'], 'roles.csv'));
+	const request = new Request(new URL(path, 'http://localhost'), { method: 'POST', body: form });
+	return { url: new URL(request.url), request, locals: { user, via: user ? 'session' : null } };
 }
 
 describe('role × endpoint, from the route tree', () => {

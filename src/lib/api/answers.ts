@@ -172,3 +172,6 @@ export type RuleOverrideAnswer = {
 
 /** `GET /api/teams/{teamId}/rules`. */
 export type TeamRulesAnswer = { overrides: RuleOverrideAnswer[] };
+
+/** `POST /api/library/import` → 201: rows added, rows that changed an entry (by `id`), rows equal to theirs. */
+export type LibraryImportAnswer = { created: number; updated: number; unchanged: number };

@@ -95,3 +95,12 @@ export const LIBRARY_CSV_COLUMNS = [
 
 /** The most rows one CSV import takes (all or none). */
 export const MAX_IMPORT_ROWS = 2000;
+
+/** The largest CSV file one import reads (413 beyond): 2000 full rows fit with room to spare. */
+export const MAX_IMPORT_CSV_BYTES = 2 * 1024 * 1024;
+
+/**
+ * One problem of a refused import (422 `invalid_rows`, `details: { rows }`): the row as a
+ * spreadsheet numbers it (the header is row 1), the column (null for the row as a whole), why.
+ */
+export type ImportRowProblem = { row: number; column: string | null; reason: string };

@@ -5,6 +5,7 @@
 
 import type { Analysis, ConditionLabel, RouteClient, RuleLabels } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
+import type { SavedConditionAnswer } from '$lib/api/answers';
 import type { RouteDocument } from '$lib/route/document';
 import { FIELD_LIMITS, withSuffix } from '$lib/schemas/limits';
 import { Autosave } from './autosave.svelte';
@@ -26,6 +27,8 @@ type Init = {
 	analyses: Record<string, Analysis>;
 	/** Names for rule-table ids, sent with the page load (so no download of the rule table). */
 	labels: RuleLabels & { conditions: ConditionLabel[] };
+	/** The team's condition library as the page load read it (the step panel's suggestions). */
+	library?: SavedConditionAnswer[];
 };
 
 export class RouteEditor {
@@ -38,6 +41,7 @@ export class RouteEditor {
 	readonly check: ClashCheck;
 	readonly ruleLabels: RuleLabels;
 	readonly conditionLabels: ConditionLabel[];
+	readonly library: SavedConditionAnswer[] | null;
 
 	constructor(
 		init: Init,
@@ -49,6 +53,7 @@ export class RouteEditor {
 		this.canEdit = init.canEdit;
 		this.conditionLabels = init.labels.conditions;
 		this.ruleLabels = init.labels;
+		this.library = init.library ?? null;
 		this.document = new UndoableDocument(init.document, () => this.autosave.schedule());
 		this.check = new ClashCheck(init.routeId, client);
 		this.autosave = new Autosave(

@@ -1,7 +1,7 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { can, ROLE_LABELS, type Action, type Role } from '../../policy';
 import { paths } from '../../paths';
-import { Comment, dbReady, Project, Route, User } from '../db';
+import { Comment, dbReady, Project, Route, SavedCondition, User } from '../db';
 import type { SessionUser } from './credentials';
 import { callerRoleIn } from './memberships';
 
@@ -138,4 +138,25 @@ export async function requireCommentAction(event: GuardEvent, commentId: string,
 	}
 	const { role } = await authorize(event, user, route.project.teamId, action, 'That comment');
 	return { user, role, comment, route, project: route.project };
+}
+
+/**
+ * Loads a saved condition of the team library with its author, and checks the action in its
+ * team: another team's entry is a 404 like one that does not exist.
+ */
+export async function requireSavedConditionAction(
+	event: GuardEvent,
+	conditionId: string,
+	action: Action
+) {
+	const user = requireUser(event);
+	await dbReady();
+	const entry = await SavedCondition.findByPk(conditionId, {
+		include: [{ model: User, as: 'author', attributes: ['id', 'name'] }]
+	});
+	if (!entry) {
+		notFound('That saved condition');
+	}
+	const { role } = await authorize(event, user, entry.teamId, action, 'That saved condition');
+	return { user, role, entry };
 }

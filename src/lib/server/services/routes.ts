@@ -5,6 +5,7 @@ import type { SessionUser } from '../../types';
 import { dbReady, Intermediate, PlannedRoute, Project, Route, Step } from '../db';
 import { assertRouteWithinLimits } from '../route-limits';
 import { recordActivity } from './activity';
+import { assertSavedConditionsOfTeam } from './library-links';
 import { endApproval } from './review-actions';
 
 export type RouteSummary = {
@@ -72,6 +73,7 @@ async function writeChildren(routeId: string, doc: RouteDocument, transaction: T
 			notes: step.notes ?? null,
 			quantities: storedQuantities(step),
 			intent: step.intent ?? null,
+			savedConditionId: step.savedCondition ?? null,
 			ordinal
 		})),
 		{ transaction }
@@ -117,6 +119,7 @@ export async function createRoute(
 	assertRouteWithinLimits(doc);
 	await dbReady();
 	return Route.sequelize!.transaction(async (transaction) => {
+		await assertSavedConditionsOfTeam(doc, project.teamId, transaction);
 		const route = await Route.create(
 			{ projectId: project.id, name: doc.name, createdById: actor.id, archivedAt: null },
 			{ transaction }
@@ -203,6 +206,7 @@ export async function routeDocument(route: Route): Promise<RouteDocument> {
 			...(step.conditionIds?.length ? { conditions: step.conditionIds } : {}),
 			...(step.notes ? { notes: step.notes } : {}),
 			...(step.intent ? { intent: step.intent } : {}),
+			...(step.savedConditionId ? { savedCondition: step.savedConditionId } : {}),
 			...quantitiesOf(step.quantities)
 		}))
 	};
@@ -240,6 +244,7 @@ export async function saveRoute(
 	assertRouteWithinLimits(doc);
 	await dbReady();
 	return Route.sequelize!.transaction(async (transaction) => {
+		await assertSavedConditionsOfTeam(doc, teamId, transaction);
 		// The version test and the increment are one UPDATE, so two saves cannot both win.
 		const [claimed] = await Route.update(
 			{ version: expectedVersion + 1, name: doc.name },

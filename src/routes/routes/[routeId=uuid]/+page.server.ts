@@ -7,6 +7,7 @@ import { chemPoolConfig } from '$lib/server/chem-pool/config';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeMapLabels } from '$lib/server/route-map-labels';
 import { listComments } from '$lib/server/services/comments';
+import { listSavedConditions } from '$lib/server/services/library';
 import { reviewCandidates, reviewHistory } from '$lib/server/services/review';
 import { approvedVersionIn } from '$lib/review/history';
 import { routeDocument, routeLinks } from '$lib/server/services/routes';
@@ -17,12 +18,14 @@ export const load: PageServerLoad = async (event) => {
 		event.params.routeId,
 		'project.read'
 	);
-	const [document, links, comments, history, reviewers] = await Promise.all([
+	const [document, links, comments, history, reviewers, library] = await Promise.all([
 		routeDocument(route),
 		routeLinks(route),
 		listComments(route.id),
 		reviewHistory(route.id),
-		reviewCandidates(project.teamId)
+		reviewCandidates(project.teamId),
+		// The step panel's suggestions (issue 16): the team's saved conditions.
+		listSavedConditions([project.teamId], {})
 	]);
 	const approvedVersion = approvedVersionIn(history);
 	// Depictions come with the page, so a reload shows the drawings without a request per node.
@@ -49,11 +52,12 @@ export const load: PageServerLoad = async (event) => {
 			version: route.version,
 			archived: route.archivedAt !== null
 		},
-		project: { id: project.id, name: project.name },
+		project: { id: project.id, name: project.name, teamId: project.teamId },
 		document,
 		analyses,
 		// The names the map shows for condition, group and protecting-group ids (no /api/rules call).
 		labels: routeMapLabels(),
+		library,
 		links,
 		role,
 		canEdit: can(role, 'route.edit'),

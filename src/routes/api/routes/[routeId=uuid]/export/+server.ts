@@ -21,7 +21,13 @@ export const GET: RequestHandler = apiHandler(async (event) => {
 	if (format !== 'sdf' && format !== 'json') {
 		return apiError(400, 'bad_format', `Export as “sdf” or “json”, not “${format}”.`);
 	}
-	const document = await routeDocument(route);
+	const stored = await routeDocument(route);
+	// A step's saved condition is an id in this team's library: the file leaves the team, and
+	// imported into another team's project the id would be refused, so it is not written.
+	const document = {
+		...stored,
+		steps: stored.steps.map(({ savedCondition: _unused, ...step }) => step)
+	};
 	let body: string;
 	try {
 		body =
