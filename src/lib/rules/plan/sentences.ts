@@ -2,6 +2,7 @@
 // nothing fits, which PGs were left out because they clash with the others. Apart from index.ts,
 // which decides the plans; this file only words them.
 
+import { teamRule } from '../check/messages';
 import { maskedBecause } from './cautions';
 import type { CheckRules } from '../check/types';
 import { conflict } from './conflict';
@@ -21,8 +22,26 @@ export function because(rules: CheckRules, tree: RouteTree, need: Need, option: 
 	const cautions = option.cautions
 		? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)`
 		: '';
-	const level = need.level === 'caution' ? ` ${maskedBecause(rules, tree, need)}` : '';
+	const level =
+		need.level === 'caution'
+			? ` ${maskedBecause(rules, tree, need)}`
+			: teamRuleNeed(rules, tree, need);
 	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${cautions}.${option.why ? ` ${option.why}` : ''}${level}`;
+}
+
+/** Said when the team's override, not the textbook, makes a step attack the group; else ''. */
+function teamRuleNeed(rules: CheckRules, tree: RouteTree, need: Need): string {
+	for (const stepId of need.attackedAt) {
+		for (const c of tree.conditions.get(stepId)!) {
+			for (const group of need.members) {
+				const rule = rules.reactivity(group, c.id, c.reagents);
+				if (rule?.rating === 'reacts' && rule.layer === 'override') {
+					return ` It is masked because of the team's override (${teamRule(rule.reason).slice(0, -1)}).`;
+				}
+			}
+		}
+	}
+	return '';
 }
 
 /** Why no PG can mask a need: nothing in the table masks it, one step removes every candidate, or each was rejected. */
