@@ -71,6 +71,11 @@ export type RuleOverrides = Omit<z.output<typeof ruleOverridesSchema>, 'reactivi
 	reactivity: (ReactivityOverride & { group: FreeGroupId })[];
 };
 
+const layerName = (input: unknown) =>
+	typeof (input as { name?: unknown } | null)?.name === 'string'
+		? (input as { name: string }).name
+		: 'the team';
+
 /** The cell a row overrides, e.g. `TBS × fluoride` or `TBS × fluoride × TBAF`. */
 const cellOf = (subject: string, row: { condition: string; reagent?: string }) =>
 	`${subject} × ${row.condition}${row.reagent ? ` × ${row.reagent}` : ''}`;
@@ -92,12 +97,26 @@ function expandAliases(rows: ReactivityOverride[]): RuleOverrides['reactivity'] 
 	return [...explicit, ...expanded];
 }
 
+/**
+ * A team's layer that does not fit the table (a row on an id the table no longer has): the
+ * check refuses to answer for that team rather than quietly drop the row.
+ */
+export class OverrideLayerError extends RuleTableError {
+	constructor(
+		readonly team: string,
+		problems: readonly string[]
+	) {
+		super(problems);
+		this.name = 'OverrideLayerError';
+	}
+}
+
 /** Validates a layer, e.g. `parseOverrides({ name: 'Team Kestrel', stability: [...] })`. */
 export function parseOverrides(input: unknown): RuleOverrides {
 	const label = 'overrides';
 	const result = ruleOverridesSchema.safeParse(input);
 	if (!result.success) {
-		throw new RuleTableError(formatZodIssues(label, result.error));
+		throw new OverrideLayerError(layerName(input), formatZodIssues(label, result.error));
 	}
 	const problems: string[] = [];
 	const seen = new Set<string>();
@@ -116,7 +135,7 @@ export function parseOverrides(input: unknown): RuleOverrides {
 		seen.add(key);
 	});
 	if (problems.length > 0) {
-		throw new RuleTableError(problems);
+		throw new OverrideLayerError(result.data.name, problems);
 	}
 	return { ...result.data, reactivity: expandAliases(result.data.reactivity) };
 }
