@@ -31,17 +31,23 @@ export function because(rules: CheckRules, tree: RouteTree, need: Need, option: 
 
 /** Said when the team's override, not the textbook, makes a step attack the group; else ''. */
 function teamRuleNeed(rules: CheckRules, tree: RouteTree, need: Need): string {
+	const reason = teamRuleAttack(rules, tree, need);
+	return reason ? ` It is masked because of the team's override (${reason}).` : '';
+}
+
+/** "team rule: <reason>" of the team's override that makes a step attack the group, or null. */
+function teamRuleAttack(rules: CheckRules, tree: RouteTree, need: Need): string | null {
 	for (const stepId of need.attackedAt) {
 		for (const c of tree.conditions.get(stepId)!) {
 			for (const group of need.members) {
 				const rule = rules.reactivity(group, c.id, c.reagents);
 				if (rule?.rating === 'reacts' && rule.layer === 'override') {
-					return ` It is masked because of the team's override (${teamRule(rule.reason).slice(0, -1)}).`;
+					return teamRule(rule.reason).slice(0, -1);
 				}
 			}
 		}
 	}
-	return '';
+	return null;
 }
 
 /** Why no PG can mask a need: nothing in the table masks it, one step removes every candidate, or each was rejected. */
@@ -52,12 +58,15 @@ export function whyUnsolved(
 	judged: Judged[]
 ): Unsolved {
 	const label = rules.groupLabel(need.group);
+	const byTeam = teamRuleAttack(rules, tree, need);
 	const first = tree.stepName(need.attackedAt[0]!);
+	// Where the team's override makes the step attack the group, the sentence says so.
+	const attacker = `${first}${byTeam ? ` (${byTeam})` : ''}`;
 	if (judged.length === 0) {
 		return {
 			group: need.group,
 			atoms: need.atoms,
-			reason: `${capital(first)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.`
+			reason: `${capital(attacker)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.`
 		};
 	}
 	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt)
@@ -73,7 +82,7 @@ export function whyUnsolved(
 	return {
 		group: need.group,
 		atoms: need.atoms,
-		reason: `${capital(first)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.`
+		reason: `${capital(attacker)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.`
 	};
 }
 
