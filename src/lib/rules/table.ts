@@ -2,9 +2,10 @@
  * The rule table as the engine reads it: validated defaults plus an optional override layer.
  *
  * Layering: `loadRuleTable(overrides)` validates the bundled defaults once, then wraps them with
- * one team's layer. `stabilityOf` and `reactivityOf` look in the layer first (a row for one of the
- * step's reagents, then a row for the class) and fall back to the defaults; the answer says which layer it came from, so a clash message can credit the team's
- * reason instead of the textbook's. The defaults are never modified, and tables are frozen.
+ * one team's layer. `stabilityOf` and `reactivityOf` look in the layer first (a row for one of
+ * the step's reagents, then a row for the class) and fall back to the defaults; the answer says
+ * which layer it came from, so a clash message can credit the team's reason instead of the
+ * textbook's. The defaults are never modified, and tables are frozen.
  */ import { compileClassifier, type ReagentClassifier } from './classify';
 import { DEFAULT_RULE_FILES } from './default-files';
 import type { ConditionId, FreeGroupId, PgSite, ProtectingGroupId, StabilityRating } from './ids';
@@ -68,6 +69,11 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 		reason: row.reason,
 		layer: 'override' as const
 	});
+	// Most layers (and the defaults) have no reagent rows: their lookups skip the per-reagent pass.
+	const reagentRows = {
+		stability: overrides?.stability.some((row) => row.reagent) ?? false,
+		reactivity: overrides?.reactivity.some((row) => row.reagent) ?? false
+	};
 	/** The row the team wrote for this reagent under the class or its broader class, if any. */
 	const reagentRow = <R>(rowsByCell: Map<string, R>, subject: string, condition: ConditionId) => {
 		return (reagent: string): R | undefined => {
@@ -168,7 +174,7 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 			// A reagent's own row beats the class: each reagent gets its row or the class answer for
 			// it alone, and the worst applies (as the defaults' reagent ratings do).
 			const ownRow = reagentRow(rows.stability, pg, condition);
-			if (!reagents.some((r) => ownRow(r))) {
+			if (!reagentRows.stability || !reagents.some((r) => ownRow(r))) {
 				return stabilityOfClass(pg, condition, reagents, site);
 			}
 			return worstStability(
@@ -187,7 +193,7 @@ function layer(base: Base, overrides: RuleOverrides | null): RuleTable {
 		},
 		reactivityOf(group, condition, reagents = []) {
 			const ownRow = reagentRow(rows.reactivity, group, condition);
-			if (!reagents.some((r) => ownRow(r))) {
+			if (!reagentRows.reactivity || !reagents.some((r) => ownRow(r))) {
 				return reactivityOfClass(group, condition, reagents);
 			}
 			return worstReactivity(
