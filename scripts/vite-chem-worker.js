@@ -5,7 +5,7 @@ import path from 'node:path';
 import { buildChemWorker } from './build-chem-worker.js';
 
 const CHEMISTRY =
-	/src[\\/]lib[\\/](chem|rules|route|server[\\/](chem-pool|route-sdf|services[\\/](check|plan)))/;
+	/src[\\/]lib[\\/](chem|rules|team-rules|route|server[\\/](chem-pool|route-sdf|services[\\/](check|plan)))/;
 
 /** @returns {import('vite').Plugin} */
 export function chemWorker() {

@@ -7,7 +7,12 @@ import type { ConditionId, ReactivityRowRating, StabilityRating } from './ids';
 import type { ProtectingGroupConditions, ReactivityEntry, WhereOnEntry } from './schemas';
 import type { StabilityAnswer } from './table-types';
 
-const SEVERITY: Record<StabilityRating, number> = { stable: 0, caution: 1, labile: 2 };
+/** How bad a PG's rating is, for picking the worst of several reagents' answers. */
+export const STABILITY_SEVERITY: Record<StabilityRating, number> = {
+	stable: 0,
+	caution: 1,
+	labile: 2
+};
 
 /**
  * The answer for the reagents that brought a class: each reagent its own entry where the row
@@ -53,11 +58,16 @@ export function withReagentRatings(
 				}
 			);
 		},
-		SEVERITY
+		STABILITY_SEVERITY
 	);
 }
 
-const REACTS: Record<ReactivityRowRating, number> = { none: 0, caution: 1, reacts: 2 };
+/** How bad a free group's rating is (`none`: no known problem). */
+export const REACTIVITY_SEVERITY: Record<ReactivityRowRating, number> = {
+	none: 0,
+	caution: 1,
+	reacts: 2
+};
 
 /**
  * A free group's default rating under one class, refined for the reagents that brought it, e.g.
@@ -71,6 +81,6 @@ export function reactivityForReagents(
 		{ rating: entry.rating, reason: entry.reason },
 		reagents,
 		(name) => entry.reagentRatings.find((r) => r.reagent === name),
-		REACTS
+		REACTIVITY_SEVERITY
 	);
 }

@@ -1,7 +1,9 @@
 // Plain-language clash messages: the group, the condition class, the reagent that brought it
 // in, the reason and the source, in one or two sentences a reviewer can act on.
 
+import { TEAM_RULE_PREFIX } from '../../team-rules/contract';
 import type { PgSite } from '../ids';
+import type { RuleLayer } from '../table-types';
 import type { CheckRules } from './types';
 
 const SITE_WORDS: Record<PgSite, string> = {
@@ -43,17 +45,27 @@ export function protectingGroupMessage(
 	rules: CheckRules,
 	pgId: string,
 	condition: string,
-	answer: { rating: 'caution' | 'labile'; source: string; reason?: string; site?: PgSite },
+	answer: {
+		rating: 'caution' | 'labile';
+		source: string;
+		reason?: string;
+		site?: PgSite;
+		layer?: RuleLayer;
+	},
 	origin: Origin
 ): string {
 	const label = rules.conditionLabel(condition);
 	const verb = answer.rating === 'labile' ? 'would remove' : 'may partly remove';
+	// Said only when the site decided the rating, so the reader learns why it differs from the usual.
+	const where = answer.site ? ` ${SITE_WORDS[answer.site]}` : '';
+	const what = `${broughtBy(origin, label)} ${verb} the ${pgId} group (${rules.protectingGroupLabel(pgId)})${where}, which this step keeps`;
+	if (answer.layer === 'override' && answer.reason) {
+		return teamRuleMessage(answer.reason, what, answer.source);
+	}
 	const why = answer.reason
 		? stripStop(answer.reason)
 		: `${pgId} is rated ${answer.rating} under ${label.toLowerCase()} conditions`;
-	// Said only when the site decided the rating, so the reader learns why it differs from the usual.
-	const where = answer.site ? ` ${SITE_WORDS[answer.site]}` : '';
-	return `${broughtBy(origin, label)} ${verb} the ${pgId} group (${rules.protectingGroupLabel(pgId)})${where}, which this step keeps: ${why}. Source: ${answer.source}.`;
+	return `${what}: ${why}. Source: ${answer.source}.`;
 }
 
 /** E.g. "MeMgBr (organometallic) attacks the free ketone, which this step leaves alone: …" */
@@ -61,12 +73,29 @@ export function freeGroupMessage(
 	rules: CheckRules,
 	groupId: string,
 	condition: string,
-	rule: { rating: 'reacts' | 'caution'; reason: string; source: string },
+	rule: { rating: 'reacts' | 'caution'; reason: string; source: string; layer?: RuleLayer },
 	origin: Origin
 ): string {
 	const label = rules.conditionLabel(condition);
 	const verb = rule.rating === 'reacts' ? 'attacks' : 'may attack';
-	return `${broughtBy(origin, label)} ${verb} the free ${rules.groupLabel(groupId)}, which this step leaves alone: ${stripStop(rule.reason)}. Source: ${rule.source}.`;
+	const what = `${broughtBy(origin, label)} ${verb} the free ${rules.groupLabel(groupId)}, which this step leaves alone`;
+	if (rule.layer === 'override') {
+		return teamRuleMessage(rule.reason, what, rule.source);
+	}
+	return `${what}: ${stripStop(rule.reason)}. Source: ${rule.source}.`;
+}
+
+/**
+ * A message the team's override decided opens with its reason, so a reader sees at once that the
+ * team, not the textbook, raised it, e.g. "team rule: our TBS ethers fall off on silica. TBAF …".
+ */
+function teamRuleMessage(reason: string, what: string, source: string): string {
+	return `${teamRule(reason)} ${what}. Source: ${source}.`;
+}
+
+/** `team rule: <reason>.`, e.g. `teamRule('TBAF strips our TBS ethers')` → "team rule: TBAF strips our TBS ethers." */
+export function teamRule(reason: string): string {
+	return `${TEAM_RULE_PREFIX} ${stripStop(reason)}.`;
 }
 
 function stripStop(text: string): string {

@@ -36,8 +36,12 @@ export function checkRulesFrom(table: RuleTable = loadRuleTable()): CheckRules {
 			if (!answer) {
 				return null;
 			}
-			const { rating, reason, source, usuallyMasked } = answer;
-			return usuallyMasked ? { rating, reason, source, usuallyMasked } : { rating, reason, source };
+			const { rating, reason, source, usuallyMasked, layer } = answer;
+			const said = usuallyMasked
+				? { rating, reason, source, usuallyMasked }
+				: { rating, reason, source };
+			// Only the team's answers say their layer: a default answer keeps its old shape.
+			return layer === 'override' ? { ...said, layer } : said;
 		}),
 		// Lower-case the first letter only, for mid-sentence use: "the free alkene (non-aromatic C=C)".
 		groupLabel: (group) => lowerFirst(groupLabels.get(group) ?? group),

@@ -2,6 +2,7 @@
 // the narrow view of the table the check needs, so a team's override layer can sit behind it.
 
 import type { PgSite } from '../ids';
+import type { RuleLayer } from '../table-types';
 
 export type Severity = 'clash' | 'caution';
 export type ClashKind = 'removes-protecting-group' | 'attacks-free-group';
@@ -90,7 +91,14 @@ export type CheckRules = {
 		conditionId: string,
 		reagents: readonly string[],
 		site?: PgSite
-	): { rating: 'stable' | 'caution' | 'labile'; source: string; reason?: string; site?: PgSite };
+	): {
+		rating: 'stable' | 'caution' | 'labile';
+		source: string;
+		reason?: string;
+		site?: PgSite;
+		/** `override`: the team's layer decided the rating (its message says "team rule:"). */
+		layer?: RuleLayer;
+	};
 	protectingGroupLabel(pgId: string): string;
 	/** `reagents`: canonical names of the reagents that brought the condition (none: the class rating). */
 	reactivity(
@@ -103,6 +111,8 @@ export type CheckRules = {
 		source: string;
 		/** A caution chemists usually mask for (the planner's first plans mask it). */
 		usuallyMasked?: true;
+		/** `override`: the team's layer decided the rating (its message says "team rule:"). */
+		layer?: RuleLayer;
 	} | null;
 	groupLabel(groupId: string): string;
 	/**

@@ -2,6 +2,7 @@
 // Grignard reagent, an amine beside a Swern oxidation) is offered a mask, and the plan that leaves
 // it free says which cautions it accepts, so no answer reads "nothing needs masking" over a caution.
 
+import { teamRule } from '../check/messages';
 import type { CheckRules } from '../check/types';
 import type { RouteTree } from './tree';
 import type { Need, Plan } from './types';
@@ -16,7 +17,8 @@ export function cautionReason(rules: CheckRules, tree: RouteTree, need: Need): s
 					const by = c.reagents.length
 						? c.reagents.join(', ')
 						: rules.conditionLabel(c.id).toLowerCase();
-					return `${by} in ${tree.stepName(stepId)}: ${rule.reason.replace(/\.$/, '')}`;
+					const why = rule.layer === 'override' ? teamRule(rule.reason) : rule.reason;
+					return `${by} in ${tree.stepName(stepId)}: ${why.replace(/\.$/, '')}`;
 				}
 			}
 		}

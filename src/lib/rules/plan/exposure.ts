@@ -2,6 +2,7 @@
 // or removal recipe would attack among the free groups and the route's own PGs there.
 
 import { perceiveText } from '../../chem/perception-cache';
+import { teamRule } from '../check/messages';
 import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
 import { prefersOver, type Recipe } from './recipes';
@@ -139,8 +140,9 @@ export function harm(
 			for (const member of members) {
 				const rule = rules.reactivity(member, c.id, c.reagents);
 				if (rule?.rating === 'reacts') {
+					const why = rule.layer === 'override' ? teamRule(rule.reason) : rule.reason;
 					return {
-						blocked: `would also attack the free ${rules.groupLabel(member)} (${rule.reason.replace(/\.$/, '')})`,
+						blocked: `would also attack the free ${rules.groupLabel(member)} (${why.replace(/\.$/, '')})`,
 						cautions
 					};
 				}
@@ -154,7 +156,11 @@ export function harm(
 		for (const c of conds) {
 			const answer = rules.stability(found.id, c.id, c.reagents, siteOfGroup(found.masks));
 			if (answer.rating === 'labile') {
-				return { blocked: `would also strip the route's own ${found.id} group`, cautions };
+				const by =
+					answer.layer === 'override' && answer.reason
+						? ` (${teamRule(answer.reason).slice(0, -1)})`
+						: '';
+				return { blocked: `would also strip the route's own ${found.id} group${by}`, cautions };
 			}
 			if (answer.rating === 'caution') {
 				cautions++;

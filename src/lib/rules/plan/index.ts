@@ -159,7 +159,9 @@ function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = [])
 					`One deprotection step takes off ${together(pgs)}: they come off under the same conditions.`
 			),
 			...needs.flatMap((need, i) =>
+				// The PGs the team's own rules rejected are named first: they changed the choice.
 				judged[i]!.filter((j) => j.rejected)
+					.sort((a, b) => Number(b.byTeamRule ?? false) - Number(a.byTeamRule ?? false))
 					.slice(0, 4)
 					.map((j) => `${j.rejected} (for the ${rules.groupLabel(need.group)}).`)
 			),

@@ -4,6 +4,8 @@
 import { perceptionRules } from '../../chem/patterns';
 import { readStructure } from '../../chem/parse';
 import { stereocentres } from '../../chem/properties';
+import { TEAM_RULE_PREFIX } from '../../team-rules/contract';
+import { teamRule } from '../check/messages';
 import { siteOfGroup } from '../check/pg-site';
 import type { CheckRules } from '../check/types';
 import type { RuleTable } from '../table';
@@ -37,7 +39,14 @@ const HARSHNESS: Record<string, number> = {
 export const harshnessOf = (conditions: string[]) =>
 	conditions.reduce((sum, id) => sum + (HARSHNESS[id] ?? 1), 0);
 
-export type Judged = { pg: string; options: Option[]; rejected: string | null; killedAt?: string };
+export type Judged = {
+	pg: string;
+	options: Option[];
+	rejected: string | null;
+	killedAt?: string;
+	/** The team's override rejected it: the rationale names such PGs first. */
+	byTeamRule?: true;
+};
 
 /**
  * Where a PG on `need` may come off, latest first, with the cautions it collects on the way: from
@@ -50,7 +59,10 @@ function removalPoints(
 	tree: RouteTree,
 	need: Need,
 	pg: string
-): { points: { node: string; cautions: number }[]; killer?: { step: string; condition: string } } {
+): {
+	points: { node: string; cautions: number }[];
+	killer?: { step: string; condition: string; teamRule?: string };
+} {
 	const on = need.path.indexOf(need.installAt);
 	const earliest = need.path.indexOf(need.removableFrom);
 	const latest = need.path.indexOf(need.freeAt);
@@ -65,9 +77,20 @@ function removalPoints(
 		}
 		const step = tree.next.get(need.path[at]!)!;
 		for (const c of tree.conditions.get(step.id)!) {
-			const rating = rules.stability(pg, c.id, c.reagents, siteOfGroup(need.group)).rating;
+			const answer = rules.stability(pg, c.id, c.reagents, siteOfGroup(need.group));
+			const rating = answer.rating;
 			if (rating === 'labile') {
-				return points.length ? { points } : { points, killer: { step: step.id, condition: c.id } };
+				if (points.length) {
+					return { points };
+				}
+				const killer: { step: string; condition: string; teamRule?: string } = {
+					step: step.id,
+					condition: c.id
+				};
+				if (answer.layer === 'override' && answer.reason) {
+					killer.teamRule = answer.reason;
+				}
+				return { points, killer };
 			}
 			if (rating === 'caution') {
 				cautions++;
@@ -111,8 +134,10 @@ export function judgeCandidates(
 		}
 		const { points, killer } = removalPoints(rules, tree, need, row.id);
 		if (killer) {
-			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of ${tree.stepName(killer.step)} would remove it`;
-			return { pg: row.id, options: [], rejected, killedAt: killer.step };
+			const by = killer.teamRule ? ` (${teamRule(killer.teamRule).slice(0, -1)})` : '';
+			const rejected = `${row.id} rejected: the ${rules.conditionLabel(killer.condition).toLowerCase()} conditions of ${tree.stepName(killer.step)} would remove it${by}`;
+			const judged: Judged = { pg: row.id, options: [], rejected, killedAt: killer.step };
+			return killer.teamRule ? { ...judged, byTeamRule: true } : judged;
 		}
 		const recipes = installRecipes(row, need.group);
 		if (recipes.length === 0) {
@@ -143,7 +168,7 @@ export function judgeCandidates(
 			return null;
 		});
 		if (installs.length === 0) {
-			return { pg: row.id, options: [], rejected: `${row.id} rejected: ${firstInstallProblem}` };
+			return rejectedFor(row.id, firstInstallProblem);
 		}
 		// The PG's own drawbacks; a new stereocentre matters only on a chiral substrate, which it
 		// turns into a mixture of diastereomers.
@@ -198,10 +223,16 @@ export function judgeCandidates(
 			options.push(...undominated(here));
 		}
 		if (options.length === 0) {
-			return { pg: row.id, options, rejected: `${row.id} rejected: ${firstRemovalProblem}` };
+			return rejectedFor(row.id, firstRemovalProblem);
 		}
 		return { pg: row.id, options, rejected: null };
 	});
+}
+
+/** A PG rejected for `problem`, marked when the team's rule decided it (its words say "team rule:"). */
+function rejectedFor(pg: string, problem: string): Judged {
+	const judged: Judged = { pg, options: [], rejected: `${pg} rejected: ${problem}` };
+	return problem.includes(TEAM_RULE_PREFIX) ? { ...judged, byTeamRule: true } : judged;
 }
 
 const sentence = (note: string) => (/[.!?]$/.test(note) ? note : `${note}.`);

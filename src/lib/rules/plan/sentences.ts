@@ -2,6 +2,7 @@
 // nothing fits, which PGs were left out because they clash with the others. Apart from index.ts,
 // which decides the plans; this file only words them.
 
+import { teamRule } from '../check/messages';
 import { maskedBecause } from './cautions';
 import type { CheckRules } from '../check/types';
 import { conflict } from './conflict';
@@ -21,8 +22,32 @@ export function because(rules: CheckRules, tree: RouteTree, need: Need, option: 
 	const cautions = option.cautions
 		? ` (${option.cautions} caution rating${option.cautions > 1 ? 's' : ''} to watch)`
 		: '';
-	const level = need.level === 'caution' ? ` ${maskedBecause(rules, tree, need)}` : '';
+	const level =
+		need.level === 'caution'
+			? ` ${maskedBecause(rules, tree, need)}`
+			: teamRuleNeed(rules, tree, need);
 	return `${option.pg} masks the ${rules.groupLabel(need.group)} through ${threats}: on with ${option.install.reagents}, off ${off} with ${option.removal.reagents}${cautions}.${option.why ? ` ${option.why}` : ''}${level}`;
+}
+
+/** Said when the team's override, not the textbook, makes a step attack the group; else ''. */
+function teamRuleNeed(rules: CheckRules, tree: RouteTree, need: Need): string {
+	const reason = teamRuleAttack(rules, tree, need);
+	return reason ? ` It is masked because of the team's override (${reason}).` : '';
+}
+
+/** "team rule: <reason>" of the team's override that makes a step attack the group, or null. */
+function teamRuleAttack(rules: CheckRules, tree: RouteTree, need: Need): string | null {
+	for (const stepId of need.attackedAt) {
+		for (const c of tree.conditions.get(stepId)!) {
+			for (const group of need.members) {
+				const rule = rules.reactivity(group, c.id, c.reagents);
+				if (rule?.rating === 'reacts' && rule.layer === 'override') {
+					return teamRule(rule.reason).slice(0, -1);
+				}
+			}
+		}
+	}
+	return null;
 }
 
 /** Why no PG can mask a need: nothing in the table masks it, one step removes every candidate, or each was rejected. */
@@ -33,12 +58,15 @@ export function whyUnsolved(
 	judged: Judged[]
 ): Unsolved {
 	const label = rules.groupLabel(need.group);
+	const byTeam = teamRuleAttack(rules, tree, need);
 	const first = tree.stepName(need.attackedAt[0]!);
+	// Where the team's override makes the step attack the group, the sentence says so.
+	const attacker = `${first}${byTeam ? ` (${byTeam})` : ''}`;
 	if (judged.length === 0) {
 		return {
 			group: need.group,
 			atoms: need.atoms,
-			reason: `${capital(first)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.`
+			reason: `${capital(attacker)} attacks the free ${label}, and no protecting group in the rule table masks a ${label}.`
 		};
 	}
 	const killer = judged.every((j) => j.killedAt !== undefined && j.killedAt === judged[0]!.killedAt)
@@ -54,7 +82,7 @@ export function whyUnsolved(
 	return {
 		group: need.group,
 		atoms: need.atoms,
-		reason: `${capital(first)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.`
+		reason: `${capital(attacker)} attacks the free ${label}, and no protecting group fits: ${judged.map((j) => j.rejected).join('; ')}.`
 	};
 }
 

@@ -5,6 +5,7 @@
 import { isStructureError, type StructureError } from '../../chem/errors';
 import { isQuantitiesError } from '../../quantities/errors';
 import { StepStructureError, UnknownConditionError } from '../../rules/check/types';
+import { OverrideLayerError } from '../../rules/overrides';
 import { RouteFileError } from '../route-sdf';
 
 export type Refusal = { status: 422; code: string; message: string; details?: unknown };
@@ -37,6 +38,14 @@ function structureRefusal(caught: StructureError): Refusal {
 export function refusalOf(caught: unknown): Refusal | null {
 	if (isStructureError(caught)) {
 		return structureRefusal(caught);
+	}
+	if (caught instanceof OverrideLayerError) {
+		return {
+			status: 422,
+			code: 'invalid_team_rules',
+			message: `${caught.team}'s rule overrides no longer fit the rule table, so nothing was checked: ${caught.problems.join('; ')}. A lead can correct or remove them on the team's rules page.`,
+			details: { problems: caught.problems }
+		};
 	}
 	if (caught instanceof UnknownConditionError) {
 		return { status: 422, code: 'unknown_condition', message: caught.message };

@@ -7,16 +7,22 @@ import { computeQuantities } from '../../quantities/compute';
 import type { QuantitiesAnswer, QuantitiesRequest } from '../../quantities/contract';
 import type { RouteDocument } from '../../route/document';
 import { routeFromJson, routeFromSdf, routeToSdf } from '../route-sdf';
-import { checkRouteDocument, checkSteps } from '../services/check';
+import type { RuleOverridesInput } from '../../rules/overrides';
+import { checkRouteDocument, checkSteps, rulesFor } from '../services/check';
 import { refusalOf } from './refusals';
 import { planRouteDocument } from '../services/plan';
 
 export const chemistryTasks = {
 	analyze: ({ text, options }: { text: string; options: AnalyzeOptions }) =>
 		analyzeStructure(text, options),
-	checkSteps: ({ steps }: { steps: StepToCheck[] }) => checkSteps(steps),
-	checkRoute: ({ document }: { document: RouteDocument }) => checkRouteDocument(document),
-	plan: ({ document }: { document: RouteDocument }) => planRouteDocument(document),
+	// `layer`: the team's rule overrides (services/team-rules-layer.ts), plain JSON; the layered
+	// table is built here in the worker.
+	checkSteps: ({ steps, layer }: { steps: StepToCheck[]; layer?: RuleOverridesInput }) =>
+		checkSteps(steps, rulesFor(layer).rules),
+	checkRoute: ({ document, layer }: { document: RouteDocument; layer?: RuleOverridesInput }) =>
+		checkRouteDocument(document, rulesFor(layer).rules),
+	plan: ({ document, layer }: { document: RouteDocument; layer?: RuleOverridesInput }) =>
+		planRouteDocument(document, layer),
 	importSdf: ({ text, name }: { text: string; name: string }) => routeFromSdf(text, name),
 	importJson: ({ text, name }: { text: string; name: string }) => routeFromJson(text, name),
 	exportSdf: ({ document }: { document: RouteDocument }) => routeToSdf(document),

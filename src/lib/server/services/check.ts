@@ -7,6 +7,8 @@ import {
 	type StepToCheck
 } from '../../rules/check';
 import { checkRulesFrom } from '../../rules/check/rules-adapter';
+import type { RuleOverridesInput } from '../../rules/overrides';
+import { loadRuleTable, type RuleTable } from '../../rules/table';
 import type { RouteDocument } from '../../route/document';
 import { codeForStructure } from '../chem-pool/refusals';
 
@@ -16,6 +18,40 @@ let defaults: CheckRules | null = null;
 export function defaultCheckRules(): CheckRules {
 	defaults ??= checkRulesFrom();
 	return defaults;
+}
+
+/** A rule table and the check's view of it: the planner reads both. */
+export type LayeredRules = { table: RuleTable; rules: CheckRules };
+
+// Layered tables built in this worker, by the layer's JSON. A cache only (the layer itself comes
+// from the database with every task, so an edited override is a new key); small, because a table
+// view keeps its remembered answers, and a team's checks come in runs.
+const LAYERED_TABLES = 8;
+const layered = new Map<string, LayeredRules>();
+
+/**
+ * The defaults, or the table under a team's layer, e.g. `rulesFor({ name: 'Kestrel', stability:
+ * [...] })`. A layer that does not fit the table throws OverrideLayerError (a 422 refusal).
+ */
+export function rulesFor(layer?: RuleOverridesInput): LayeredRules {
+	if (!layer) {
+		return { table: loadRuleTable(), rules: defaultCheckRules() };
+	}
+	const key = JSON.stringify(layer);
+	const known = layered.get(key);
+	if (known) {
+		// Most recently used last, so the oldest is the one dropped.
+		layered.delete(key);
+		layered.set(key, known);
+		return known;
+	}
+	const table = loadRuleTable(layer);
+	const built = { table, rules: checkRulesFrom(table) };
+	if (layered.size >= LAYERED_TABLES) {
+		layered.delete(layered.keys().next().value!);
+	}
+	layered.set(key, built);
+	return built;
 }
 
 /** Checks steps in order; the first unreadable structure or unknown condition id throws. */

@@ -1,10 +1,11 @@
 import type { RouteDocument } from '../../route/document';
 import { planRoute, type CheckedPlanAnswer, type Plan, type PlanSafety } from '../../rules/plan';
-import { checkRouteDocument, defaultCheckRules, type RouteStepCheck } from './check';
+import type { RuleOverridesInput } from '../../rules/overrides';
+import { checkRouteDocument, rulesFor, type RouteStepCheck } from './check';
 
 /** The first clash or unreadable step of a route, or null when it re-checks clean. */
-export function firstClash(route: RouteDocument): string | null {
-	return firstClashIn(checkRouteDocument(route));
+export function firstClash(route: RouteDocument, layer?: RuleOverridesInput): string | null {
+	return firstClashIn(checkRouteDocument(route, rulesFor(layer).rules));
 }
 
 function firstClashIn(checks: RouteStepCheck[]): string | null {
@@ -21,24 +22,28 @@ function firstClashIn(checks: RouteStepCheck[]): string | null {
 }
 
 /**
- * Plans a route with the default rule table, every plan re-checked through `checkRouteDocument`,
- * and says for each plan which hazards its added steps bring, which cautions remain and which
- * reagent text it could not judge.
+ * Plans a route with the default rule table, or under a team's layer, every plan re-checked
+ * through `checkRouteDocument` with the same table, and says for each plan which hazards its added
+ * steps bring, which cautions remain and which reagent text it could not judge.
  */
-export function planRouteDocument(document: RouteDocument): CheckedPlanAnswer {
+export function planRouteDocument(
+	document: RouteDocument,
+	layer?: RuleOverridesInput
+): CheckedPlanAnswer {
+	const { table, rules } = rulesFor(layer);
 	// The re-check that admits each plan also gives its hazards and cautions: keep it, by route.
 	const checked = new WeakMap<RouteDocument, RouteStepCheck[]>();
 	const verify = (route: RouteDocument) => {
-		const checks = checkRouteDocument(route);
+		const checks = checkRouteDocument(route, rules);
 		checked.set(route, checks);
 		return firstClashIn(checks);
 	};
-	const answer = planRoute(document, { verify, rules: defaultCheckRules() });
+	const answer = planRoute(document, { verify, table, rules });
 	return {
 		...answer,
 		plans: answer.plans.map((plan) => ({
 			...plan,
-			...safetyOf(plan, checked.get(plan.route) ?? checkRouteDocument(plan.route))
+			...safetyOf(plan, checked.get(plan.route) ?? checkRouteDocument(plan.route, rules))
 		}))
 	};
 }

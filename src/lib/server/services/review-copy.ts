@@ -11,6 +11,7 @@ import { ApiFailure } from '../api';
 import { runChemistry } from '../chem-pool/pool';
 import type { Route } from '../db';
 import { routeMapLabels } from '../route-map-labels';
+import { routeRuleLayer } from './team-rules-layer';
 import { listComments } from './comments';
 import { reviewHistory } from './review';
 
@@ -173,7 +174,10 @@ export async function reviewCopy(route: Route, document: RouteDocument): Promise
 				structures: document.intermediates.map((node) => node.structure)
 			})
 		),
-		attempt(() => runChemistry('checkRoute', { document })),
+		// Under the team's rule overrides, as the route page shows it.
+		attempt(async () =>
+			runChemistry('checkRoute', { document, layer: await routeRuleLayer(route) })
+		),
 		stepQuantities(document, ordered),
 		listComments(route.id),
 		reviewHistory(route.id)

@@ -7,6 +7,7 @@ import { STRUCTURE_LIMITS } from '$lib/chem/limits';
 import { FIELD_LIMITS } from '$lib/schemas/limits';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import type { CheckAnswer } from '$lib/rules/check/types';
+import { callerTeamLayer, teamIdField } from '$lib/server/services/team-rules-layer';
 
 const MAX_STRUCTURE = STRUCTURE_LIMITS.maxTextBytes;
 const checkBody = z.object({
@@ -21,14 +22,20 @@ const checkBody = z.object({
 			})
 		)
 		.min(1, 'Send at least one step.')
-		.max(200, 'Send at most 200 steps at a time.')
+		.max(200, 'Send at most 200 steps at a time.'),
+	/** Apply this team's rule overrides (the caller must be in the team). */
+	teamId: teamIdField
 });
 
-/** `POST /api/check` `{ steps: [{ id, substrate, product, conditions?, reagents? }] }` → `{ steps: [...] }`. */
+/**
+ * `POST /api/check` `{ steps: [{ id, substrate, product, conditions?, reagents? }], teamId? }` →
+ * `{ steps: [...] }`; with `teamId`, under that team's rule overrides.
+ */
 export const POST: RequestHandler = apiHandler(async (event) => {
 	requireUser(event);
-	const { steps } = await readJson(event, checkBody);
+	const { steps, teamId } = await readJson(event, checkBody);
+	const layer = await callerTeamLayer(event, teamId);
 	// Unknown condition ids and unreadable structures come back as 422 from the pool.
-	const answer: CheckAnswer = { steps: await runChemistry('checkSteps', { steps }) };
+	const answer: CheckAnswer = { steps: await runChemistry('checkSteps', { steps, layer }) };
 	return json(answer);
 });

@@ -5,10 +5,21 @@ import { apiHandler, readJson } from '$lib/server/api';
 import { requireUser } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
+import { callerTeamLayer, teamIdField } from '$lib/server/services/team-rules-layer';
 
-/** `POST /api/plan` with a route document → `{ plans: [...], unsolved? }`. */
+// The route document may carry `teamId` beside its own fields; the document's schema ignores it.
+const teamChoice = z.object({ teamId: teamIdField });
+
+/**
+ * `POST /api/plan` with a route document (and optionally `teamId`, to plan under that team's rule
+ * overrides) → `{ plans: [...], unsolved? }`.
+ */
 export const POST: RequestHandler = apiHandler(async (event) => {
 	requireUser(event);
-	const document = routeDocumentOr422(await readJson(event, z.unknown()));
-	return json(await runChemistry('plan', { document }));
+	const body = await readJson(event, z.unknown());
+	const { teamId } =
+		typeof body === 'object' && body !== null && !Array.isArray(body) ? teamChoice.parse(body) : {};
+	const document = routeDocumentOr422(body);
+	const layer = await callerTeamLayer(event, teamId);
+	return json(await runChemistry('plan', { document, layer }));
 });

@@ -5,11 +5,16 @@ import { requireRouteAction } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
 import { routeDocument } from '$lib/server/services/routes';
+import { routeRuleLayer } from '$lib/server/services/team-rules-layer';
 
-/** `POST /api/routes/{id}/plan` → the `/api/plan` answer for the stored route (reading it is enough). */
+/**
+ * `POST /api/routes/{id}/plan` → the `/api/plan` answer for the stored route (reading it is
+ * enough), under the rule overrides of the route's team.
+ */
 export const POST: RequestHandler = apiHandler(async (event) => {
 	const { route } = await requireRouteAction(event, event.params.routeId, 'project.read');
 	// A stored route may be half drawn; it is validated like a posted one.
-	const document = routeDocumentOr422(await routeDocument(route));
-	return json(await runChemistry('plan', { document }));
+	const [stored, layer] = await Promise.all([routeDocument(route), routeRuleLayer(route)]);
+	const document = routeDocumentOr422(stored);
+	return json(await runChemistry('plan', { document, layer }));
 });

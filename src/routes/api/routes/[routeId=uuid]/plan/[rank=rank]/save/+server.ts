@@ -13,6 +13,7 @@ import {
 	routeDocumentAt,
 	VersionConflict
 } from '$lib/server/services/routes';
+import { routeRuleLayer } from '$lib/server/services/team-rules-layer';
 
 function noSuchPlan(rank: string, why: string): never {
 	error(404, { code: 'no_such_plan', message: `There is no plan ${rank} for this route. ${why}` });
@@ -51,7 +52,11 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 			details
 		);
 	}
-	const answer = await runChemistry('plan', { document: routeDocumentOr422(stored) });
+	// The team's overrides, as for the plans the chemist was shown.
+	const answer = await runChemistry('plan', {
+		document: routeDocumentOr422(stored),
+		layer: await routeRuleLayer(route)
+	});
 	const plan = answer.plans.find((p) => p.rank === rank);
 	if (!plan) {
 		const why =
