@@ -14,6 +14,14 @@ export type RuleGridRow = {
 };
 export type RuleGrid = { conditions: { id: ConditionId; label: string }[]; rows: RuleGridRow[] };
 
+/** What the form's lists offer: subjects with their names, condition classes, reagent names. */
+export type OverrideChoices = {
+	subjects: { value: string; label: string }[];
+	conditions: { value: string; label: string }[];
+	/** Reagents that bring a class (solvents and work-up materials cannot be overridden). */
+	reagents: string[];
+};
+
 /**
  * Every PG's rating under every class, with the PGs' names from `labels` (id → name), e.g.
  * `ruleGrid(loadRuleTable(layer), new Map([['TBS', 'TBS ether']])).rows[0].ratings`.

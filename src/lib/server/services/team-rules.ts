@@ -15,9 +15,10 @@ const FIELDS = Object.keys(ruleOverrideBody.shape) as OverrideField[];
 export class OverrideRefused extends ApiFailure {
 	constructor(
 		readonly field: OverrideField,
-		message: string
+		/** The reason alone, for a form that shows it under the field. */
+		readonly reason: string
 	) {
-		super(422, 'invalid', `${field}: ${message}`, { field });
+		super(422, 'invalid', `${field}: ${reason}`, { field });
 	}
 }
 
