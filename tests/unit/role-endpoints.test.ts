@@ -7,6 +7,7 @@ import {
 	routeModule,
 	type Endpoint as Entry
 } from '../factories/route-tree';
+import { TeamRuleOverride } from '../../src/lib/server/db';
 import { addComment } from '../../src/lib/server/services/comment-writes';
 import type { SessionUser } from '../../src/lib/types';
 import { createRoute } from '../../src/lib/server/services/routes';
@@ -35,6 +36,7 @@ const apiAnyone = row('ok', 'ok', 'ok', 'ok', 'ok', '401');
 const apiRead = row('ok', 'ok', 'ok', 'ok', '404', '401');
 const apiEdit = row('ok', 'ok', '403', '403', '404', '401');
 const apiComment = row('ok', 'ok', 'ok', '403', '404', '401');
+const apiLead = row('ok', '403', '403', '403', '404', '401');
 // Pages: the sign-in page instead of 401.
 const pageAnyone = row('ok', 'ok', 'ok', 'ok', 'ok', 'sign-in');
 const pageEdit = row('ok', 'ok', '403', '403', '404', 'sign-in');
@@ -79,6 +81,9 @@ const EXPECTED: Record<string, Expectation> = {
 	'POST /api/library/[conditionId=uuid]/approve': row('ok', '403', '403', '403', '404', '401'),
 	'GET /api/library/export': apiRead,
 	'POST /api/library/import': apiEdit,
+	'GET /api/teams/[teamId=uuid]/rules': apiRead,
+	'POST /api/teams/[teamId=uuid]/rules': apiLead,
+	'DELETE /api/teams/[teamId=uuid]/rules/[overrideId=uuid]': apiLead,
 	'action createToken /account': pageAnyone,
 	'action revokeToken /account': pageAnyone,
 	'action changePassword /account': pageAnyone,
@@ -101,6 +106,8 @@ const EXPECTED: Record<string, Expectation> = {
 	'action retire /library': pageEdit,
 	'action restore /library': pageEdit,
 	'action delete /library': pageEdit,
+	'action add /teams/[teamId=uuid]/rules': pageManage,
+	'action remove /teams/[teamId=uuid]/rules': pageManage,
 	'action default /signin': AUTH_JS,
 	'action default /signout': AUTH_JS,
 	'action default /set-password/[token]': AUTH_JS
@@ -150,12 +157,23 @@ async function call(entry: Entry, caller: Caller): Promise<Outcome> {
 	});
 	const comment = await addComment(f.people.chemist, route, project, { body: 'Role table' });
 	const saved = await addEntry(f.people.chemist, f.team.id);
+	const override = await TeamRuleOverride.create({
+		teamId: f.team.id,
+		subject: 'TBS',
+		condition: 'heat',
+		reagent: null,
+		rating: 'caution',
+		reason: 'Role table',
+		source: 'Role table',
+		authorId: f.people.lead.id
+	});
 	const ids: Record<string, string> = {
 		conditionId: saved.id,
 		projectId: project.id,
 		routeId: route.id,
 		commentId: comment.id,
 		teamId: f.team.id,
+		overrideId: override.id,
 		rank: '1',
 		token: 'x'
 	};
