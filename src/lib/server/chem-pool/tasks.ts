@@ -6,6 +6,7 @@ import type { StepToCheck } from '../../rules/check/types';
 import { computeQuantities } from '../../quantities/compute';
 import type { QuantitiesAnswer, QuantitiesRequest } from '../../quantities/contract';
 import type { RouteDocument } from '../../route/document';
+import type { SavedConditionEntry } from '../../rules/plan';
 import { routeFromJson, routeFromSdf, routeToSdf } from '../route-sdf';
 import { checkRouteDocument, checkSteps } from '../services/check';
 import { refusalOf } from './refusals';
@@ -16,7 +17,14 @@ export const chemistryTasks = {
 		analyzeStructure(text, options),
 	checkSteps: ({ steps }: { steps: StepToCheck[] }) => checkSteps(steps),
 	checkRoute: ({ document }: { document: RouteDocument }) => checkRouteDocument(document),
-	plan: ({ document }: { document: RouteDocument }) => planRouteDocument(document),
+	/** `savedConditions`: the route's team's approved library entries, as plain JSON. */
+	plan: ({
+		document,
+		savedConditions
+	}: {
+		document: RouteDocument;
+		savedConditions?: SavedConditionEntry[];
+	}) => planRouteDocument(document, savedConditions),
 	importSdf: ({ text, name }: { text: string; name: string }) => routeFromSdf(text, name),
 	importJson: ({ text, name }: { text: string; name: string }) => routeFromJson(text, name),
 	exportSdf: ({ document }: { document: RouteDocument }) => routeToSdf(document),

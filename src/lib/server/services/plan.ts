@@ -1,5 +1,11 @@
 import type { RouteDocument } from '../../route/document';
-import { planRoute, type CheckedPlanAnswer, type Plan, type PlanSafety } from '../../rules/plan';
+import {
+	planRoute,
+	type CheckedPlanAnswer,
+	type Plan,
+	type PlanSafety,
+	type SavedConditionEntry
+} from '../../rules/plan';
 import { checkRouteDocument, defaultCheckRules, type RouteStepCheck } from './check';
 
 /** The first clash or unreadable step of a route, or null when it re-checks clean. */
@@ -23,9 +29,13 @@ function firstClashIn(checks: RouteStepCheck[]): string | null {
 /**
  * Plans a route with the default rule table, every plan re-checked through `checkRouteDocument`,
  * and says for each plan which hazards its added steps bring, which cautions remain and which
- * reagent text it could not judge.
+ * reagent text it could not judge. `savedConditions` are the route's team's approved entries
+ * (`approvedSavedConditions`), which the added steps follow where the re-check allows.
  */
-export function planRouteDocument(document: RouteDocument): CheckedPlanAnswer {
+export function planRouteDocument(
+	document: RouteDocument,
+	savedConditions: readonly SavedConditionEntry[] = []
+): CheckedPlanAnswer {
 	// The re-check that admits each plan also gives its hazards and cautions: keep it, by route.
 	const checked = new WeakMap<RouteDocument, RouteStepCheck[]>();
 	const verify = (route: RouteDocument) => {
@@ -33,7 +43,7 @@ export function planRouteDocument(document: RouteDocument): CheckedPlanAnswer {
 		checked.set(route, checks);
 		return firstClashIn(checks);
 	};
-	const answer = planRoute(document, { verify, rules: defaultCheckRules() });
+	const answer = planRoute(document, { verify, rules: defaultCheckRules(), savedConditions });
 	return {
 		...answer,
 		plans: answer.plans.map((plan) => ({

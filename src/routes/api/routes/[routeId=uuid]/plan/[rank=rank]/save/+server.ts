@@ -7,6 +7,7 @@ import { apiError, apiHandler, readJson } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
+import { approvedSavedConditions } from '$lib/server/services/planning-library';
 import {
 	createRoute,
 	plannedRouteName,
@@ -51,7 +52,11 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 			details
 		);
 	}
-	const answer = await runChemistry('plan', { document: routeDocumentOr422(stored) });
+	// The same plans as `POST /api/routes/{id}/plan` showed: with the team's saved conditions.
+	const answer = await runChemistry('plan', {
+		document: routeDocumentOr422(stored),
+		savedConditions: await approvedSavedConditions(project.teamId)
+	});
 	const plan = answer.plans.find((p) => p.rank === rank);
 	if (!plan) {
 		const why =
