@@ -116,6 +116,21 @@ describe('the planner and the team’s saved conditions', () => {
 		expect(firstClash(tbs.route)).toBeNull();
 	});
 
+	it('keeps one deprotection step for TBS and a dioxolane rather than add one for the team’s TBS removal — Greene’s: aqueous HCl in THF cleaves both', () => {
+		// A keto alcohol by a Grignard addition to its ester: the ketone (dioxolane) and the
+		// primary alcohol (TBS) both come off with 1 M HCl in THF, in one step.
+		const doc = line(['CC(=O)CCC(CO)CC(=O)OC', 'CC(=O)CCC(CO)CC(C)(C)O'], ['MeMgBr, THF']);
+		const textbook = plan(doc).plans[0]!;
+		expect(textbook.rationale.join(' ')).toContain('takes off dioxolane and TBS together');
+		const tbaf = entry({ kind: 'remove', reagents: 'TBAF, THF', uses: 2 });
+		const first = plan(doc, [tbaf]).plans[0]!;
+		expect(first.route.steps).toEqual(textbook.route.steps);
+		expect(first.addedSteps).toBe(textbook.addedSteps);
+		expect(first.rationale.join(' ')).toContain(
+			"TBS off: the team's saved condition (TBAF, THF) was not used: the plan takes TBS off in one step with dioxolane, and the saved condition is for TBS alone; the plan keeps that one step."
+		);
+	});
+
 	it('does not follow a removal the rule table says does not remove the PG — Greene’s: benzyl ethers stand fluoride', () => {
 		const wrong = entry({ protectingGroup: 'Bn', kind: 'remove', reagents: 'TBAF, THF' });
 		const bn = withPg(plan(alcoholByGrignard(), [wrong]).plans, 'Bn');

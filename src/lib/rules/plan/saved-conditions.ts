@@ -48,6 +48,10 @@ type Unit = Preferred & {
 	textbook: string;
 };
 
+/** Why an entry was not followed, and what the plan keeps instead (the textbook recipe, a shared step). */
+type Refusal = { reason: string; keeps: string };
+const textbookOf = (unit: Unit) => `the textbook recipe (${unit.textbook})`;
+
 export type Followed = { drawn: Drawn; options: Option[]; notes: string[] };
 
 export type FollowInput = {
@@ -73,13 +77,14 @@ export function followSavedConditions(input: FollowInput): Followed {
 	if (units.length === 0) {
 		return { drawn: textbook, options, notes: [] };
 	}
-	const outcome = new Map<Unit, string | null>();
+	// Per unit: null when followed, else why not and what the plan keeps instead.
+	const outcome = new Map<Unit, Refusal | null>();
 	const usable = units.filter((unit) => {
-		const refusal = unreadable(rules, needs, options, unit);
-		if (refusal) {
-			outcome.set(unit, refusal);
+		const reason = unreadable(rules, needs, options, unit);
+		if (reason) {
+			outcome.set(unit, { reason, keeps: textbookOf(unit) });
 		}
-		return !refusal;
+		return !reason;
 	});
 	const attempt = (chosen: Unit[]) => {
 		const followed = withUnits(options, chosen);
@@ -87,12 +92,16 @@ export function followSavedConditions(input: FollowInput): Followed {
 		// An entry is for its own PG: where the plan frees several PGs in one step, following it
 		// would add a step the ranking never counted.
 		if (drawn.route.steps.length > textbook.route.steps.length) {
-			const problem =
-				'the plan takes this group off in one step with another, and the saved condition is for it alone';
+			const problem: Refusal = { reason: splits(textbook, chosen.at(-1)!), keeps: 'that one step' };
 			return { drawn, options: followed, problem };
 		}
 		const clash = verify(drawn.route);
-		const problem = clash ? `with it the re-check finds ${clash.replace(/\.$/, '')}` : null;
+		const problem: Refusal | null = clash
+			? {
+					reason: `with it the re-check finds ${clash.replace(/\.$/, '')}`,
+					keeps: textbookOf(chosen.at(-1)!)
+				}
+			: null;
 		return { drawn, options: followed, problem };
 	};
 	let best = { drawn: textbook, options };
@@ -119,6 +128,15 @@ export function followSavedConditions(input: FollowInput): Followed {
 		return refusal ? notFollowed(unit, refusal) : followed(unit);
 	});
 	return { drawn: best.drawn, options: best.options, notes };
+}
+
+/** Why following the entry would add a step, e.g. "the plan takes TBS off in one step with dioxolane, …". */
+function splits(textbook: Drawn, unit: Unit): string {
+	const others = textbook.merged
+		.find((pgs) => pgs.includes(unit.pg))
+		?.filter((pg) => pg !== unit.pg);
+	const partners = others?.length ? [...new Set(others)].join(', ') : 'another group';
+	return `the plan takes ${unit.pg} off in one step with ${partners}, and the saved condition is for ${unit.pg} alone`;
 }
 
 /** The PGs and kinds of the plan that have an entry, in need order, install before removal. */
@@ -221,6 +239,6 @@ function followed(unit: Unit): string {
 }
 
 /** E.g. "TBS off: the team's saved condition (TBAF, THF) was not used: with it the re-check finds …". */
-function notFollowed(unit: Unit, reason: string): string {
-	return `${side(unit)}: the team's saved condition (${unit.entry.reagents}) was not used: ${reason}; the plan keeps the textbook recipe (${unit.textbook}).`;
+function notFollowed(unit: Unit, { reason, keeps }: Refusal): string {
+	return `${side(unit)}: the team's saved condition (${unit.entry.reagents}) was not used: ${reason}; the plan keeps ${keeps}.`;
 }
