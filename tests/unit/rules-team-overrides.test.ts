@@ -209,7 +209,7 @@ describe('the planner under a team layer', () => {
 		const route = reduce('OCCCC(C)=O', 'OCCCC(C)O');
 		expect(planRouteDocument(route).plans[0]!.protections).toEqual([]);
 		const reason = 'Our hydroxy ketones close to the lactol and are over-reduced';
-		const [plan] = planRouteDocument(route, raises('alcohol-primary', reason)).plans;
+		const [plan] = planRouteDocument(route, { layer: raises('alcohol-primary', reason) }).plans;
 		expect(plan!.protections.map((p) => p.group)).toEqual(['alcohol-primary']);
 		expect(plan!.rationale).toContainEqual(
 			expect.stringContaining(`It is masked because of the team's override (team rule: ${reason}).`)
@@ -217,10 +217,9 @@ describe('the planner under a team layer', () => {
 	});
 
 	it("says a need no PG can mask comes from the team's rule", () => {
-		const answer = planRouteDocument(
-			reduce('C=CCCC(C)=O', 'C=CCCC(C)O'),
-			raises('alkene', 'Our alkenes are reduced')
-		);
+		const answer = planRouteDocument(reduce('C=CCCC(C)=O', 'C=CCCC(C)O'), {
+			layer: raises('alkene', 'Our alkenes are reduced')
+		});
 		expect(answer.plans).toEqual([]);
 		expect(answer.unsolved?.[0]?.reason).toMatch(
 			/^Step "s1" \(NaBH4, MeOH\) \(team rule: Our alkenes are reduced\) attacks the free alkene/

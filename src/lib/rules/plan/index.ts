@@ -11,11 +11,12 @@ import { judgeCandidates } from './options';
 import { drawRoute } from './route';
 import { withRanking } from './rationale';
 import type { Choice } from './cost';
+import { followSavedConditions, preferredEntries, type Preferred } from './saved-conditions';
 import { searchChoices } from './search';
 import { because, notTogether, together, whyUnsolved } from './sentences';
 import { clearFollowCache, findNeeds } from './track';
 import { routeTree, type RouteTree } from './tree';
-import type { Need, Plan, PlanAnswer, Unsolved } from './types';
+import type { Need, Plan, PlanAnswer, SavedConditionEntry, Unsolved } from './types';
 
 export type * from './types';
 
@@ -27,7 +28,14 @@ export function clearPlanCaches(): void {
 
 /** The first `clash` the re-check finds in a route, as a message, or null when it is clean. */
 export type Verify = (route: RouteDocument) => string | null;
-export type PlanOptions = { verify: Verify; table?: RuleTable; rules?: CheckRules; plans?: number };
+export type PlanOptions = {
+	verify: Verify;
+	table?: RuleTable;
+	rules?: CheckRules;
+	plans?: number;
+	/** The team's approved, not retired saved conditions: the added steps follow them where the re-check allows. */
+	savedConditions?: readonly SavedConditionEntry[];
+};
 
 const MAX_PLANS = 5;
 // More joint choices than plans are drawn, because the re-check may still drop some.
@@ -39,6 +47,8 @@ type Context = {
 	rules: CheckRules;
 	tree: RouteTree;
 	verify: Verify;
+	/** The team's entry to follow per PG and kind. */
+	preferred: Map<string, Preferred>;
 };
 type Solved = { plans: Plan[]; unsolved?: Unsolved[] };
 
@@ -50,7 +60,14 @@ export function planRoute(doc: RouteDocument, options: PlanOptions): PlanAnswer 
 	if (typeof tree === 'string') {
 		return { plans: [], unsolved: [{ group: 'route', atoms: [], reason: tree }] };
 	}
-	const ctx: Context = { doc, table, rules, tree, verify: options.verify };
+	const ctx: Context = {
+		doc,
+		table,
+		rules,
+		tree,
+		verify: options.verify,
+		preferred: preferredEntries(options.savedConditions ?? [])
+	};
 	const limit = options.plans ?? MAX_PLANS;
 	const needs = findNeeds(tree, rules);
 	const required = needs.filter((n) => n.level === 'reacts');
@@ -142,14 +159,25 @@ function solve(ctx: Context, needs: Need[], limit: number, notes: string[] = [])
 		if (plans.length >= limit) {
 			break;
 		}
-		const drawn = drawRoute(doc, tree, needs, choice.options);
-		const problem = ctx.verify(drawn.route);
+		const textbook = drawRoute(doc, tree, needs, choice.options);
+		const problem = ctx.verify(textbook.route);
 		if (problem) {
 			firstProblem ??= problem;
 			continue;
 		}
+		const {
+			drawn,
+			options,
+			notes: team
+		} = followSavedConditions({
+			...ctx,
+			needs,
+			options: choice.options,
+			textbook
+		});
 		const rationale = [
-			...needs.map((need, i) => because(rules, tree, need, choice.options[i]!)),
+			...needs.map((need, i) => because(rules, tree, need, options[i]!)),
+			...team,
 			...drawn.shared.map(
 				({ pg, count }) =>
 					`One protection step puts ${pg} on ${count} groups of the same kind at once.`

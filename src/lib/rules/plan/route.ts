@@ -9,7 +9,7 @@ import { protectedStructure } from './draw';
 import { installsBefore } from './exposure';
 import { installKey } from './conflict';
 import type { RouteTree } from './tree';
-import type { Need, Option, Protection } from './types';
+import type { Need, Option, Protection, StepRecipe } from './types';
 
 export type Drawn = {
 	route: RouteDocument;
@@ -102,7 +102,8 @@ export function drawRoute(
 				reagents: option.install.reagents,
 				conditions: [...option.install.conditions],
 				intent: 'protect',
-				notes: 'Added by the planner.'
+				notes: 'Added by the planner.',
+				...savedConditionOf(option.install)
 			});
 			current = id;
 			if (batch.length > 1) {
@@ -131,7 +132,9 @@ export function drawRoute(
 		}
 		const batches = new Map<string, number[]>();
 		for (const x of active.filter((i) => options[i]!.removeAt === node.id)) {
-			const key = [...options[x]!.removal.conditions].sort().join('+');
+			// A team's saved condition is for its own PG: it shares a step only with the same entry.
+			const { conditions, savedCondition } = options[x]!.removal;
+			const key = `${[...conditions].sort().join('+')}\u0001${savedCondition ?? ''}`;
 			batches.set(key, [...(batches.get(key) ?? []), x]);
 		}
 		for (const batch of batches.values()) {
@@ -150,7 +153,8 @@ export function drawRoute(
 				reagents: removal.reagents,
 				conditions: [...removal.conditions],
 				intent: 'deprotect',
-				notes: 'Added by the planner.'
+				notes: 'Added by the planner.',
+				...savedConditionOf(removal)
 			});
 			if (batch.length > 1) {
 				merged.push(batch.map((x) => options[x]!.pg));
@@ -172,3 +176,7 @@ export function drawRoute(
 		shared
 	};
 }
+
+/** The route step's link to the team's saved condition it follows, if any. */
+const savedConditionOf = (recipe: StepRecipe): Pick<RouteStep, 'savedCondition'> =>
+	recipe.savedCondition ? { savedCondition: recipe.savedCondition } : {};

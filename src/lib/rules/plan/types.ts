@@ -1,6 +1,7 @@
 // The planner's vocabulary: what needs masking (a need), what could mask it (an option), and
 // the ranked answer in the shape of `POST /api/plan`.
 
+import type { SavedConditionKind } from '../../library/contract';
 import type { RouteDocument } from '../../route/document';
 import type { PgDrawback, ReagentConcern } from '../ids';
 
@@ -44,13 +45,19 @@ export type Need = {
  */
 export type Drawback = { kind: PgDrawback | ReagentConcern; note: string };
 
+/**
+ * How an added step puts a PG on or takes it off; `savedCondition` is the id of the team's saved
+ * condition it follows (absent: a textbook recipe of the rule table).
+ */
+export type StepRecipe = { reagents: string; conditions: string[]; savedCondition?: string };
+
 /** A way to mask one need: the PG and one install and one removal option. */
 export type Option = {
 	pg: string;
 	/** The install transform (reaction SMARTS) that draws this PG on this need's group. */
 	transform: string;
-	install: { reagents: string; conditions: string[] };
-	removal: { reagents: string; conditions: string[] };
+	install: StepRecipe;
+	removal: StepRecipe;
 	/** Intermediate it comes off at: the need's `freeAt`, or earlier once nothing attacks the group. */
 	removeAt: string;
 	cautions: number;
@@ -73,8 +80,8 @@ export type Protection = {
 	atoms: number[];
 	intermediate: string;
 	protectingGroup: string;
-	install: { before: string; reagents: string; conditions: string[] };
-	removal: { after: string; reagents: string; conditions: string[] };
+	install: { before: string } & StepRecipe;
+	removal: { after: string } & StepRecipe;
 };
 
 export type Plan = {
@@ -84,6 +91,24 @@ export type Plan = {
 	route: RouteDocument;
 	addedSteps: number;
 	rationale: string[];
+};
+
+/**
+ * A team's approved, not retired saved condition as the planner reads it (plain JSON from the
+ * server), e.g. `{ protectingGroup: 'TBS', kind: 'install', reagents: 'TBSOTf, 2,6-lutidine,
+ * CH2Cl2, −78 °C', yield: 94, uses: 3, … }`.
+ */
+export type SavedConditionEntry = {
+	id: string;
+	protectingGroup: string;
+	kind: SavedConditionKind;
+	reagents: string;
+	yield: number | null;
+	reference: string | null;
+	scale: string | null;
+	notes: string | null;
+	/** Steps of the team's routes that follow it: of several entries for one PG and kind, the most used wins. */
+	uses: number;
 };
 
 export type Unsolved = { group: string; atoms: number[]; reason: string };

@@ -10,19 +10,20 @@ import { routeFromJson, routeFromSdf, routeToSdf } from '../route-sdf';
 import type { RuleOverridesInput } from '../../rules/overrides';
 import { checkRouteDocument, checkSteps, rulesFor } from '../services/check';
 import { refusalOf } from './refusals';
-import { planRouteDocument } from '../services/plan';
+import { planRouteDocument, type TeamPlanning } from '../services/plan';
 
 export const chemistryTasks = {
 	analyze: ({ text, options }: { text: string; options: AnalyzeOptions }) =>
 		analyzeStructure(text, options),
-	// `layer`: the team's rule overrides (services/team-rules-layer.ts), plain JSON; the layered
+	// `layer`: the team's rule overrides (services/team-rules-layer.ts); `savedConditions`: the
+	// team's approved library entries (services/planning-library.ts). Both plain JSON; the layered
 	// table is built here in the worker.
 	checkSteps: ({ steps, layer }: { steps: StepToCheck[]; layer?: RuleOverridesInput }) =>
 		checkSteps(steps, rulesFor(layer).rules),
 	checkRoute: ({ document, layer }: { document: RouteDocument; layer?: RuleOverridesInput }) =>
 		checkRouteDocument(document, rulesFor(layer).rules),
-	plan: ({ document, layer }: { document: RouteDocument; layer?: RuleOverridesInput }) =>
-		planRouteDocument(document, layer),
+	plan: ({ document, ...team }: { document: RouteDocument } & TeamPlanning) =>
+		planRouteDocument(document, team),
 	importSdf: ({ text, name }: { text: string; name: string }) => routeFromSdf(text, name),
 	importJson: ({ text, name }: { text: string; name: string }) => routeFromJson(text, name),
 	exportSdf: ({ document }: { document: RouteDocument }) => routeToSdf(document),

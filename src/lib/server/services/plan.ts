@@ -1,7 +1,22 @@
 import type { RouteDocument } from '../../route/document';
-import { planRoute, type CheckedPlanAnswer, type Plan, type PlanSafety } from '../../rules/plan';
+import {
+	planRoute,
+	type CheckedPlanAnswer,
+	type Plan,
+	type PlanSafety,
+	type SavedConditionEntry
+} from '../../rules/plan';
 import type { RuleOverridesInput } from '../../rules/overrides';
 import { checkRouteDocument, rulesFor, type RouteStepCheck } from './check';
+
+/**
+ * What a route's team brings to its plans, both plain JSON for the chemistry worker: its rule
+ * overrides (`teamRuleLayer`) and its approved saved conditions (`approvedSavedConditions`).
+ */
+export type TeamPlanning = {
+	layer?: RuleOverridesInput;
+	savedConditions?: readonly SavedConditionEntry[];
+};
 
 /** The first clash or unreadable step of a route, or null when it re-checks clean. */
 export function firstClash(route: RouteDocument, layer?: RuleOverridesInput): string | null {
@@ -24,11 +39,12 @@ function firstClashIn(checks: RouteStepCheck[]): string | null {
 /**
  * Plans a route with the default rule table, or under a team's layer, every plan re-checked
  * through `checkRouteDocument` with the same table, and says for each plan which hazards its added
- * steps bring, which cautions remain and which reagent text it could not judge.
+ * steps bring, which cautions remain and which reagent text it could not judge. The added steps
+ * follow the team's saved conditions where the re-check allows.
  */
 export function planRouteDocument(
 	document: RouteDocument,
-	layer?: RuleOverridesInput
+	{ layer, savedConditions = [] }: TeamPlanning = {}
 ): CheckedPlanAnswer {
 	const { table, rules } = rulesFor(layer);
 	// The re-check that admits each plan also gives its hazards and cautions: keep it, by route.
@@ -38,7 +54,7 @@ export function planRouteDocument(
 		checked.set(route, checks);
 		return firstClashIn(checks);
 	};
-	const answer = planRoute(document, { verify, table, rules });
+	const answer = planRoute(document, { verify, table, rules, savedConditions });
 	return {
 		...answer,
 		plans: answer.plans.map((plan) => ({

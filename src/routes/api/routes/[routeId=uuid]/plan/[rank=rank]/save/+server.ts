@@ -7,13 +7,14 @@ import { apiError, apiHandler, readJson } from '$lib/server/api';
 import { requireRouteAction } from '$lib/server/auth/guards';
 import { runChemistry } from '$lib/server/chem-pool/pool';
 import { routeDocumentOr422 } from '$lib/server/route-api';
+import { approvedSavedConditions } from '$lib/server/services/planning-library';
 import {
 	createRoute,
 	plannedRouteName,
 	routeDocumentAt,
 	VersionConflict
 } from '$lib/server/services/routes';
-import { routeRuleLayer } from '$lib/server/services/team-rules-layer';
+import { teamRuleLayer } from '$lib/server/services/team-rules-layer';
 
 function noSuchPlan(rank: string, why: string): never {
 	error(404, { code: 'no_such_plan', message: `There is no plan ${rank} for this route. ${why}` });
@@ -52,10 +53,16 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 			details
 		);
 	}
-	// The team's overrides, as for the plans the chemist was shown.
+	// The same plans as `POST /api/routes/{id}/plan` showed: the team's overrides and its saved
+	// conditions.
+	const [layer, savedConditions] = await Promise.all([
+		teamRuleLayer(project.teamId),
+		approvedSavedConditions(project.teamId)
+	]);
 	const answer = await runChemistry('plan', {
 		document: routeDocumentOr422(stored),
-		layer: await routeRuleLayer(route)
+		layer,
+		savedConditions
 	});
 	const plan = answer.plans.find((p) => p.rank === rank);
 	if (!plan) {
