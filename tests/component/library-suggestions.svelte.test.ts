@@ -1,9 +1,10 @@
-import { fireEvent, screen, within } from '@testing-library/svelte';
+import { fireEvent, screen, waitFor, within } from '@testing-library/svelte';
 import { describe, expect, it } from 'vitest';
+import SidePanel from '$lib/components/route-map/SidePanel.svelte';
 import StepPanel from '$lib/components/route-map/StepPanel.svelte';
 import type { Analysis } from '$lib/client/route-client';
 import type { RouteDocument } from '$lib/route/document';
-import { libraryEntry } from '../factories/library-entries';
+import { libraryEntry, LIBRARY_TEAM } from '../factories/library-entries';
 import { makeEditor, renderWithEditor } from './route-editor-fixture';
 
 // The step panel's suggestions from the team's condition library (issue 16).
@@ -111,5 +112,81 @@ describe('StepPanel: saved conditions for a protection step', () => {
 		});
 		renderWithEditor(editor, StepPanel, { step: step() });
 		expect(screen.queryByText('From the team’s condition library')).toBeNull();
+	});
+});
+
+describe('SidePanel: saving a step’s conditions to the library', () => {
+	const open = async (options: Parameters<typeof makeEditor>[0]) => {
+		const made = await makeEditor({ document: protection, analyses, library: [], ...options });
+		made.editor.select({ kind: 'step', id: 's1' });
+		renderWithEditor(made.editor, SidePanel, {});
+		return made;
+	};
+
+	it('saves the step’s reagents as a TBS install (read from the structures) and links the step', async () => {
+		const { editor, client } = await open({});
+		await fireEvent.click(
+			screen.getByRole('button', { name: 'Save this step’s conditions to the library' })
+		);
+		const form = within(
+			screen.getByRole('form', { name: 'Save this step’s conditions to the library' })
+		);
+		// The diol → mono-TBS ether step puts a TBS on: both are chosen already.
+		expect((form.getByLabelText('Protecting group') as HTMLSelectElement).value).toBe('TBS');
+		expect((form.getByLabelText('Kind') as HTMLSelectElement).value).toBe('install');
+		await fireEvent.input(form.getByLabelText('Yield (%)'), { target: { value: '94' } });
+		await fireEvent.input(form.getByLabelText('Reference (DOI or notebook page)'), {
+			target: { value: 'OG notebook 12/44' }
+		});
+		await fireEvent.submit(form.getByRole('button', { name: 'Save' }).closest('form')!);
+		await waitFor(() =>
+			expect(screen.getByText(/Saved to the team’s library and linked to this step/)).toBeTruthy()
+		);
+		expect(client.saveCondition).toHaveBeenCalledWith({
+			teamId: LIBRARY_TEAM,
+			protectingGroup: 'TBS',
+			kind: 'install',
+			reagents: 'TBSCl',
+			yield: 94,
+			reference: 'OG notebook 12/44'
+		});
+		const [entry] = editor.library!;
+		expect(editor.doc.steps[0]!.savedCondition).toBe(entry!.id);
+		// Saved before the library was read again, so the server's uses can count the step.
+		expect(client.save).toHaveBeenCalled();
+		const item = within(screen.getByTestId('suggestion'));
+		expect(item.getByText('Used in this step')).toBeTruthy();
+		expect(screen.getByText(/A lead approves it on the library page/).getAttribute('role')).toBe(
+			'status'
+		);
+	});
+
+	it('shows a refusal where the chemist saved, and leaves the step as it was', async () => {
+		const { editor, client } = await open({});
+		client.saveCondition.mockResolvedValueOnce({
+			ok: false,
+			status: 403,
+			code: 'forbidden',
+			message: 'Your role cannot add to the library.'
+		} as never);
+		await fireEvent.click(
+			screen.getByRole('button', { name: 'Save this step’s conditions to the library' })
+		);
+		await fireEvent.submit(screen.getByRole('button', { name: 'Save' }).closest('form')!);
+		await waitFor(() =>
+			expect(screen.getByRole('alert').textContent).toBe(
+				'Not saved: Your role cannot add to the library.'
+			)
+		);
+		expect(editor.doc.steps[0]!.savedCondition).toBeUndefined();
+	});
+
+	it('is not offered to a reader, nor for a step that already follows an entry', async () => {
+		await open({ canEdit: false, canSaveConditions: false });
+		expect(screen.queryByRole('button', { name: /Save this step’s conditions/ })).toBeNull();
+		document.body.innerHTML = '';
+		const linked = { ...protection, steps: [{ ...step(), savedCondition: best.id }] };
+		await open({ document: linked, library: conditions });
+		expect(screen.queryByRole('button', { name: /Save this step’s conditions/ })).toBeNull();
 	});
 });

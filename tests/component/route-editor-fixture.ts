@@ -11,6 +11,8 @@ import { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
 import type { ReviewState } from '$lib/components/review/review-state.svelte';
 import { fakeReviewApi, makeReview } from './review-fixture';
+import type { NewSavedConditionRequest } from '$lib/library/contract';
+import { libraryEntry, LIBRARY_TEAM } from '../factories/library-entries';
 import WithRouteEditor from './WithRouteEditor.svelte';
 
 export const routeDoc: RouteDocument = {
@@ -40,6 +42,7 @@ type Options = {
 	/** Analyses by structure, as the page load sends them. */
 	analyses?: Record<string, Analysis>;
 	library?: SavedConditionAnswer[];
+	canSaveConditions?: boolean;
 };
 
 /** The editor, with its check answer already in (when `checks` is given). */
@@ -49,9 +52,19 @@ export async function makeEditor({
 	checks,
 	labels = null,
 	analyses = {},
-	library
+	library,
+	canSaveConditions = canEdit
 }: Options = {}) {
+	// The team's library as a fake server holds it: a saved condition is added to what it lists.
+	const stored = [...(library ?? [])];
 	const client = {
+		library: vi.fn(async () => [...stored]),
+		saveCondition: vi.fn(async (body: NewSavedConditionRequest) => {
+			const { teamId, ...fields } = body;
+			const entry = libraryEntry({ ...fields, teamId, approved: false, uses: 0 });
+			stored.push(entry);
+			return { ok: true, status: 201, data: { id: entry.id } };
+		}),
 		save: vi.fn(async () => ({ ok: true, status: 200, data: { version: 2 } })),
 		check: vi.fn(async () => (checks ? new Map(checks.map((c) => [c.id, c])) : null)),
 		analyze: vi.fn(async () => ({ ok: false, status: 400, code: 'x', message: 'not in tests' }))
@@ -64,7 +77,8 @@ export async function makeEditor({
 			document,
 			canEdit,
 			analyses,
-			library,
+			library: library && { teamId: library[0]?.teamId ?? LIBRARY_TEAM, entries: library },
+			canSaveConditions,
 			// The page load sends the labels; none in a test that does not name them.
 			labels: { conditions: labels ?? [], groups: new Map(), protectingGroups: new Map() }
 		},

@@ -3,13 +3,15 @@
 import type { SavedConditionAnswer } from '../../src/lib/api/answers';
 
 let serial = 0;
+/** The team every entry belongs to unless a test says otherwise. */
+export const LIBRARY_TEAM = '00000000-0000-4000-8000-000000000001';
 
 /** One entry with plausible defaults, changed by `over`; ids are real uuids. */
 export function libraryEntry(over: Partial<SavedConditionAnswer> = {}): SavedConditionAnswer {
 	serial += 1;
 	return {
 		id: crypto.randomUUID(),
-		teamId: '00000000-0000-4000-8000-000000000001',
+		teamId: LIBRARY_TEAM,
 		protectingGroup: 'TBS',
 		kind: 'install',
 		reagents: `TBSCl, imidazole (${serial})`,

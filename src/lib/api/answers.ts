@@ -157,6 +157,9 @@ export type SavedConditionAnswer = {
 /** `GET /api/library`. */
 export type LibraryAnswer = { conditions: SavedConditionAnswer[] };
 
+/** `POST /api/library` → 201. */
+export type CreatedSavedConditionAnswer = { id: string };
+
 /** One override in `GET /api/teams/{teamId}/rules`. */
 export type RuleOverrideAnswer = {
 	id: string;

@@ -6,7 +6,9 @@ import type {
 	AnalyzeAnswer as Analysis,
 	CheckAnswer,
 	CreatedRouteAnswer,
+	CreatedSavedConditionAnswer,
 	ImportedRouteAnswer,
+	LibraryAnswer,
 	PlanAnswer,
 	RouteAnswer,
 	RulesAnswer,
@@ -14,6 +16,7 @@ import type {
 	SavedRouteAnswer,
 	StepCheck
 } from '$lib/api/answers';
+import type { NewSavedConditionRequest } from '$lib/library/contract';
 import type { RouteDocument } from '$lib/route/document';
 import { callApi, isVersionConflict, jsonBody, type ApiResult } from './api';
 import type { Toasts } from './toasts.svelte';
@@ -106,6 +109,21 @@ export class RouteClient {
 			this.toasts.show(`Plan ${rank} was not saved: ${result.message}`, 'problem');
 		}
 		return result;
+	}
+
+	/** The team's saved conditions; null (and a toast) when they could not be read. */
+	async library(teamId: string): Promise<LibraryAnswer['conditions'] | null> {
+		const result = await this.#call<LibraryAnswer>(
+			`/api/library?teamId=${encodeURIComponent(teamId)}`,
+			{},
+			'The condition library could not be read'
+		);
+		return result.ok ? result.data.conditions : null;
+	}
+
+	/** A refusal (a field, a role) is shown where the chemist saved, not toasted. */
+	saveCondition(body: NewSavedConditionRequest): Promise<ApiResult<CreatedSavedConditionAnswer>> {
+		return callApi(`/api/library`, jsonBody('POST', body), this.fetcher);
 	}
 
 	async importFile(projectId: string, file: File): Promise<string | null> {

@@ -49,6 +49,13 @@ export type SavedConditionFields = z.output<typeof savedConditionFields>;
 /** `POST /api/library`. */
 export const newSavedConditionBody = savedConditionFields.extend({ teamId: z.uuid() });
 export type NewSavedConditionBody = z.output<typeof newSavedConditionBody>;
+/** What a browser sends to `POST /api/library`: the PG id is any text, the server's parse decides. */
+export type NewSavedConditionRequest = Omit<
+	z.input<typeof newSavedConditionBody>,
+	'protectingGroup'
+> & {
+	protectingGroup: string;
+};
 
 /** `PATCH /api/library/{id}`: any of the fields, and `retired` (kept, no longer suggested). */
 export const savedConditionPatch = savedConditionFields

@@ -5,7 +5,9 @@
 
 import type { Analysis, ConditionLabel, RouteClient, RuleLabels } from '$lib/client/route-client';
 import type { Toasts } from '$lib/client/toasts.svelte';
-import type { SavedConditionAnswer } from '$lib/api/answers';
+import type { ApiResult } from '$lib/client/api';
+import type { CreatedSavedConditionAnswer, SavedConditionAnswer } from '$lib/api/answers';
+import type { NewSavedConditionRequest } from '$lib/library/contract';
 import type { RouteDocument } from '$lib/route/document';
 import { FIELD_LIMITS, withSuffix } from '$lib/schemas/limits';
 import { Autosave } from './autosave.svelte';
@@ -13,6 +15,7 @@ import { ClashCheck } from './clash-check.svelte';
 import * as ops from './document-ops';
 import { heavyAtomCount, substrateHighlight } from './step-view';
 import { StructureDrawings } from './structure-drawings.svelte';
+import { TeamLibrary } from './team-library.svelte';
 import { UndoableDocument, type Selection } from './undoable-document.svelte';
 
 export type { SaveState } from './autosave.svelte';
@@ -27,9 +30,17 @@ type Init = {
 	analyses: Record<string, Analysis>;
 	/** Names for rule-table ids, sent with the page load (so no download of the rule table). */
 	labels: RuleLabels & { conditions: ConditionLabel[] };
-	/** The team's condition library as the page load read it (the step panel's suggestions). */
-	library?: SavedConditionAnswer[];
+	/**
+	 * The route's team and its condition library as the page load read it (the step panel's
+	 * suggestions, and where a step's conditions are saved).
+	 */
+	library?: { teamId: string; entries: SavedConditionAnswer[] };
+	/** Whether the caller may add to the team's library (`library.add`). */
+	canSaveConditions?: boolean;
 };
+
+/** What the step panel asks for when it saves a step's conditions (the reagents are the step's). */
+export type StepConditionFields = Omit<NewSavedConditionRequest, 'teamId' | 'reagents'>;
 
 export class RouteEditor {
 	readonly routeId: string;
@@ -41,7 +52,9 @@ export class RouteEditor {
 	readonly check: ClashCheck;
 	readonly ruleLabels: RuleLabels;
 	readonly conditionLabels: ConditionLabel[];
-	readonly library: SavedConditionAnswer[] | null;
+	/** Null when the page came without the library (it could not be read, or a test left it out). */
+	readonly teamLibrary: TeamLibrary | null;
+	readonly canSaveConditions: boolean;
 
 	constructor(
 		init: Init,
@@ -53,7 +66,10 @@ export class RouteEditor {
 		this.canEdit = init.canEdit;
 		this.conditionLabels = init.labels.conditions;
 		this.ruleLabels = init.labels;
-		this.library = init.library ?? null;
+		this.teamLibrary = init.library
+			? new TeamLibrary(init.library.teamId, init.library.entries, client)
+			: null;
+		this.canSaveConditions = (init.canSaveConditions ?? false) && this.teamLibrary !== null;
 		this.document = new UndoableDocument(init.document, () => this.autosave.schedule());
 		this.check = new ClashCheck(init.routeId, client);
 		this.autosave = new Autosave(
@@ -71,6 +87,9 @@ export class RouteEditor {
 
 	get doc() {
 		return this.document.current;
+	}
+	get library(): SavedConditionAnswer[] | null {
+		return this.teamLibrary?.entries ?? null;
 	}
 	get selection() {
 		return this.document.selection;
@@ -165,6 +184,28 @@ export class RouteEditor {
 		if (this.canEdit) {
 			this.document.change(next, coalesceKey);
 		}
+	}
+
+	/**
+	 * Saves the step's reagents as a new entry of the team's library and links the step to it
+	 * (one undoable edit, saved before the library is read again, so the entry's uses count it).
+	 * A refusal is returned for the panel to show; nothing changes then.
+	 */
+	async saveStepToLibrary(
+		stepId: string,
+		fields: StepConditionFields
+	): Promise<ApiResult<CreatedSavedConditionAnswer> | null> {
+		const reagents = this.doc.steps.find((step) => step.id === stepId)?.reagents?.trim();
+		if (!this.canSaveConditions || !this.teamLibrary || !reagents) {
+			return null;
+		}
+		const result = await this.teamLibrary.create({ ...fields, reagents });
+		if (result.ok) {
+			this.updateStep(stepId, { savedCondition: result.data.id });
+			await this.flush();
+			await this.teamLibrary.reload();
+		}
+		return result;
 	}
 
 	// ── Saving ───────────────────────────────────────────────────────────────────────────────

@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
-import type { LibraryAnswer } from '$lib/api/answers';
+import type { CreatedSavedConditionAnswer, LibraryAnswer } from '$lib/api/answers';
 import { libraryQuery, newSavedConditionBody } from '$lib/library/contract';
 import { apiHandler, readJson } from '$lib/server/api';
 import { requireTeamAction, requireUser } from '$lib/server/auth/guards';
@@ -38,5 +38,5 @@ export const POST: RequestHandler = apiHandler(async (event) => {
 	const { user } = await requireTeamAction(event, teamId, 'library.add');
 	const body = parseFields(newSavedConditionBody, raw);
 	const entry = await createSavedCondition(user, body);
-	return json({ id: entry.id }, { status: 201 });
+	return json({ id: entry.id } satisfies CreatedSavedConditionAnswer, { status: 201 });
 });

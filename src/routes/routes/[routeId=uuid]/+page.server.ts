@@ -61,6 +61,7 @@ export const load: PageServerLoad = async (event) => {
 		links,
 		role,
 		canEdit: can(role, 'route.edit'),
+		canSaveConditions: can(role, 'library.add'),
 		// Review (issue 15): the threads, the history and who may be asked. The page only hides
 		// what a role cannot use; the API enforces it.
 		comments,
