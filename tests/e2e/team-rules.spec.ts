@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { signInAndWait } from './helpers';
+import { cormorantId, signInAndWait, unique } from './helpers';
 
 // The team's rules page in the browser: the lead adds an override with the form and sees its cell
 // bordered and named "team rule"; a chemist reads the same table without the form; the lead
@@ -61,4 +61,62 @@ test('a lead adds a team rule and sees the cell marked; a chemist reads it; the 
 		.click();
 	await expect(lead.getByTestId('team-rule')).toHaveCount(0);
 	await expect(pmbUnderMetathesis(lead)).not.toHaveAttribute('data-team-rule', 'true');
+});
+
+// A methyl ester saponified with LiOH beside a primary TBS ether: rules/protecting-groups.json rates
+// alkyl TBS ethers stable to aqueous hydroxide (Greene's, 5th ed., ch. 4 — from memory), so only
+// the team's rule for LiOH makes this step clash. A rule for the one reagent keeps the other specs'
+// routes as the book rates them while this test runs.
+const TBS_ESTER = 'COC(=O)CCCO[Si](C)(C)C(C)(C)C';
+const TBS_ACID = 'OC(=O)CCCO[Si](C)(C)C(C)(C)C';
+const LIOH_REASON = 'LiOH in THF/H2O strips our primary TBS ethers at 50 °C (fictional)';
+
+test('a lead adds a team rule for one reagent and the route map flags the step with "team rule"', async ({
+	browser
+}) => {
+	test.slow();
+	const lead = await (await browser.newContext()).newPage();
+	await signInAndWait(lead, 'lead@example.com');
+	const created = await lead.request.post(`/api/projects/${await cormorantId(lead)}/routes`, {
+		data: {
+			name: unique('TBS acid by saponification'),
+			intermediates: [
+				{ id: 'a', label: 'TBS ester', structure: TBS_ESTER, position: { x: 0, y: 0 } },
+				{ id: 'b', label: 'TBS acid', structure: TBS_ACID, position: { x: 380, y: 0 } }
+			],
+			steps: [{ id: 's1', from: ['a'], to: 'b', reagents: 'LiOH, THF, H2O' }]
+		}
+	});
+	expect(created.status()).toBe(201);
+	const routeId = (await created.json()).id as string;
+	await lead.goto(`/routes/${routeId}`);
+	// Before the rule: the book's rating, no clash on the step.
+	await lead.getByTestId('step-label').getByRole('button', { name: 'LiOH, THF, H2O' }).click();
+	await expect(lead.getByText(/No clashes found/)).toBeVisible({ timeout: 15_000 });
+
+	await rulesPageOf(lead);
+	const form = lead.getByRole('form', { name: 'Add a team rule' });
+	await form.getByLabel('Protecting group or free group').selectOption('TBS');
+	await form.getByLabel('Condition class').selectOption('base-aqueous');
+	await form.getByLabel(/^Reagent/).fill('LiOH');
+	await form.getByLabel('Rating').selectOption('labile');
+	await form.getByLabel('Reason').fill(LIOH_REASON);
+	await form.getByLabel('Source').fill('Notebook LM-9, p. 4 (fictional)');
+	await form.getByRole('button', { name: 'Add team rule' }).click();
+	await expect(lead.getByText('The team rule is set')).toBeVisible();
+
+	try {
+		await lead.goto(`/routes/${routeId}`);
+		const marker = lead.getByRole('button', { name: /clash/ });
+		await expect(marker).toBeVisible({ timeout: 15_000 });
+		await marker.click();
+		await expect(lead.getByRole('list', { name: 'Clashes' })).toContainText(
+			`team rule: ${LIOH_REASON}`
+		);
+	} finally {
+		await rulesPageOf(lead);
+		lead.once('dialog', (dialog) => dialog.accept());
+		await lead.getByRole('button', { name: /Remove the team rule for TBS under/ }).click();
+		await expect(lead.getByTestId('team-rule')).toHaveCount(0);
+	}
 });
