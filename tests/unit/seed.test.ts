@@ -1,7 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { verifyCredentials } from '../../src/lib/server/auth/credentials';
 import { graphProblems } from '../../src/lib/route/document';
-import { OutboxMessage, Project, Route, User } from '../../src/lib/server/db';
+import { ActivityEvent, OutboxMessage, Project, Route, Team, User } from '../../src/lib/server/db';
+import { listSavedConditions } from '../../src/lib/server/services/library';
 import { listComments } from '../../src/lib/server/services/comments';
 import { reviewHistory } from '../../src/lib/server/services/review';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
@@ -109,6 +110,33 @@ describe('demo scenario', () => {
 				['lead@example.com', expect.stringMatching(/^New comment on “OG-2044 amide coupling”/)]
 			])
 		);
+	});
+
+	it('gives the process team a library: Tomas’s two TBS conditions approved by Lena, her dioxolane one awaiting approval (issue 16)', async () => {
+		const aster = await Team.findOne({ where: { name: 'Aster Process Chemistry' } });
+		const entries = await listSavedConditions([aster!.id], {});
+		const summary = entries
+			.map((e) => [e.protectingGroup, e.kind, e.author?.name, e.approved, e.uses])
+			.sort(
+				(a, b) =>
+					String(a[0]).localeCompare(String(b[0])) || String(a[1]).localeCompare(String(b[1]))
+			);
+		expect(summary).toEqual([
+			['dioxolane', 'install', 'Lena Marsh', false, 0],
+			['TBS', 'install', 'Tomas Ridley', true, 0],
+			['TBS', 'remove', 'Tomas Ridley', true, 0]
+		]);
+		// The reagents are read like any step's: TBAF with AcOH is buffered fluoride, milder on
+		// base-sensitive groups than TBAF alone (Greene's, 5th ed., ch. 2; from memory).
+		expect(entries.find((e) => e.kind === 'remove')!.conditions).toContain('fluoride-buffered');
+		// Written and approved through the services, so the feed has them.
+		const kinds = (await ActivityEvent.findAll({ where: { teamId: aster!.id } })).map(
+			(a) => a.kind
+		);
+		expect(kinds.filter((k) => k === 'library.created')).toHaveLength(3);
+		expect(kinds.filter((k) => k === 'library.approved')).toHaveLength(2);
+		const fenwick = await Team.findOne({ where: { name: 'Fenwick Analogue Group' } });
+		expect(await listSavedConditions([fenwick!.id], {})).toEqual([]);
 	});
 
 	it('rejects a wrong password', async () => {

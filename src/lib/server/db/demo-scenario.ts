@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { savedConditionFields } from '../../library/contract';
 import { ROLES } from '../../policy';
 import { routeDocumentShape } from '../../route/document';
 import scenario from './demo-scenario.json';
@@ -22,6 +23,14 @@ const demoReview = z.object({
 });
 export type DemoReview = z.infer<typeof demoReview>;
 
+// A team's saved conditions: the fields a person writes (the library's own schema), who wrote
+// each, and the lead who approved it, if one has.
+const demoSavedCondition = savedConditionFields.extend({
+	by: z.email(),
+	approvedBy: z.email().optional()
+});
+export type DemoSavedCondition = z.infer<typeof demoSavedCondition>;
+
 // The JSON is the single source: the seed reads it here, `npm start` reads it to print sign-ins.
 const demoSchema = z.object({
 	password: z.string(),
@@ -29,6 +38,7 @@ const demoSchema = z.object({
 		z.object({
 			name: z.string(),
 			people: z.array(z.object({ email: z.email(), name: z.string(), role: z.enum(ROLES) })),
+			library: z.array(demoSavedCondition).default([]),
 			projects: z.array(
 				z.object({
 					name: z.string(),

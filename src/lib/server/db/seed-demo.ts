@@ -1,11 +1,17 @@
 import type { RouteDocument } from '../../route/document';
 import { hashPassword } from '../auth/passwords';
 import { dbReady, Membership, Project, Team, User } from '.';
-import { DEMO_PASSWORD, DEMO_TEAMS, type DemoReview } from './demo-scenario';
+import {
+	DEMO_PASSWORD,
+	DEMO_TEAMS,
+	type DemoReview,
+	type DemoSavedCondition
+} from './demo-scenario';
 import { ActivityEvent } from './models';
 import { createRoute } from '../services/routes';
 import { takeReviewAction } from '../services/review-actions';
 import { addComment } from '../services/comment-writes';
+import { approveSavedCondition, createSavedCondition } from '../services/library-writes';
 import type { Route } from './models';
 import type { SessionUser } from '../../types';
 
@@ -67,6 +73,9 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
 			}
 		}
 	});
+	for (const demoTeam of DEMO_TEAMS) {
+		await seedLibrary(demoTeam.name, demoTeam.library);
+	}
 	for (const { lead, project, document, review } of routes) {
 		const route = await createRoute(sessionUser(lead), project, document);
 		if (review) {
@@ -81,6 +90,24 @@ const sessionUser = (user: User): SessionUser => ({
 	email: user.email,
 	name: user.name
 });
+
+/** A team's saved conditions, written and approved through the library's services (activity too). */
+async function seedLibrary(teamName: string, entries: DemoSavedCondition[]) {
+	const team = await Team.findOne({ where: { name: teamName } });
+	const person = async (email: string) => {
+		const user = await User.findOne({ where: { email } });
+		if (!user) {
+			throw new Error(`Demo scenario: ${email} (library of “${teamName}”) is not a demo person.`);
+		}
+		return sessionUser(user);
+	};
+	for (const { by, approvedBy, ...fields } of entries) {
+		const entry = await createSavedCondition(await person(by), { ...fields, teamId: team!.id });
+		if (approvedBy) {
+			await approveSavedCondition(await person(approvedBy), entry);
+		}
+	}
+}
 
 /**
  * Puts a demo route in review through the same services the API uses, so its history, activity
