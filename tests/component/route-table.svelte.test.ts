@@ -49,6 +49,10 @@ describe('RouteTable', () => {
 		expect(cellsOf(0)).toEqual(
 			second[0] === '7' ? ['Busy', 'Some', 'Quiet'] : ['Quiet', 'Some', 'Busy']
 		);
+		// The header says the order it shows to assistive technology, as the arrow does on screen.
+		const th = header.closest('th')!;
+		expect(th.getAttribute('aria-sort')).toBe(second[0] === '7' ? 'descending' : 'ascending');
+		expect(header.textContent).toContain(second[0] === '7' ? '▼' : '▲');
 	});
 
 	it("offers the contract's statuses in the filter", () => {
