@@ -108,4 +108,18 @@ describe('LibraryTable', () => {
 		await fireEvent.click(screen.getByRole('button', { name: /^Edit the/ }));
 		expect(onedit).toHaveBeenCalledWith(expect.objectContaining({ reagents: 'TBAF, AcOH' }));
 	});
+
+	it('says which reagent text Orthogon could not read, and names the hazards with the SDS', () => {
+		const unread = row({
+			reagents: 'OG-Cat 17, TBSCl',
+			unrecognized: ['OG-Cat 17'],
+			hazards: [{ reagent: 'TBSCl', note: 'Corrosive; reacts with water.' }]
+		});
+		render(LibraryTable, { entries: [unread], permissions: permissions() });
+		expect(screen.getByTestId('entry-unrecognized').textContent).toBe(
+			'Not recognised: OG-Cat 17 — its effect is not checked.'
+		);
+		const hazards = screen.getByText(/^Hazards: TBSCl — check the SDS\.$/);
+		expect(hazards.getAttribute('title')).toBe('TBSCl: Corrosive; reacts with water.');
+	});
 });

@@ -16,6 +16,8 @@ export function libraryEntry(over: Partial<SavedConditionAnswer> = {}): SavedCon
 		kind: 'install',
 		reagents: `TBSCl, imidazole (${serial})`,
 		conditions: [],
+		hazards: [],
+		unrecognized: [],
 		solvent: 'DMF',
 		temperature: 'rt',
 		time: '2 h',

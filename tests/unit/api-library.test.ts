@@ -97,6 +97,29 @@ describe('library API: adding and listing', () => {
 		expect(Date.parse(entry.updatedAt)).not.toBeNaN();
 	});
 
+	it('reads what a following step would carry: says which text it could not read, and the hazards', async () => {
+		// OG-Cat 17 is an in-house code no reagent table lists; the reflux in the temperature is heat.
+		const { body } = await post('chemist', {
+			...tbsOn(),
+			protectingGroup: 'dioxolane',
+			reagents: 'ethylene glycol, p-TsOH, OG-Cat 17',
+			solvent: 'toluene',
+			temperature: 'reflux'
+		});
+		const { body: listed } = await list('viewer', `?teamId=${f.team.id}`);
+		const entry = (listed.conditions as SavedConditionAnswer[]).find((c) => c.id === body.id)!;
+		expect(entry.unrecognized).toEqual(['OG-Cat 17']);
+		// Toluene at reflux (111 °C, CRC Handbook) is above the 80 °C heat threshold; toluene is
+		// flammable (common practice), so its caution comes with the entry.
+		expect(entry.conditions).toEqual(expect.arrayContaining(['heat']));
+		expect(entry.hazards.map((h) => h.reagent)).toEqual(expect.arrayContaining(['toluene']));
+		// A fully read entry says nothing is unread.
+		const { body: clean } = await post('chemist', { ...tbsOn(), reagents: 'TBAF, THF' });
+		const { body: again } = await list('viewer', `?teamId=${f.team.id}`);
+		const read = (again.conditions as SavedConditionAnswer[]).find((c) => c.id === clean.id)!;
+		expect(read.unrecognized).toEqual([]);
+	});
+
 	it('lists for every role of the team; another team’s id → 404; no teamId → only the caller’s teams', async () => {
 		for (const who of ['lead', 'chemist', 'reviewer', 'viewer'] as const) {
 			const { status, body } = await list(who, `?teamId=${f.team.id}`);

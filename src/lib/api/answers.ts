@@ -130,7 +130,11 @@ export type OutboxMessageAnswer = {
 /** `GET /api/outbox` (leads): the messages of the caller's teams, newest first. */
 export type OutboxAnswer = { messages: OutboxMessageAnswer[] };
 
-/** One saved condition in `GET /api/library`; `conditions` are the classes its reagents bring. */
+/**
+ * One saved condition in `GET /api/library`. `conditions`, `hazards` and `unrecognized` are read
+ * on every answer from the text a step gets when it follows the entry (reagents, solvent and
+ * temperature), so the library says what Orthogon could not judge, as a step's check does.
+ */
 export type SavedConditionAnswer = {
 	id: string;
 	teamId: string;
@@ -138,6 +142,10 @@ export type SavedConditionAnswer = {
 	kind: SavedConditionKind;
 	reagents: string;
 	conditions: string[];
+	/** The usual cautions of the reagents it names (check the SDS). */
+	hazards: { reagent: string; note: string }[];
+	/** Text Orthogon did not recognise as any reagent: its classes are not known. */
+	unrecognized: string[];
 	solvent: string | null;
 	temperature: string | null;
 	time: string | null;

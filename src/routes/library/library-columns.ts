@@ -19,6 +19,7 @@ import { SAVED_CONDITION_KIND_LABELS } from '$lib/library/contract';
 import EntryActionsCell from './EntryActionsCell.svelte';
 import EntryStatusCell from './EntryStatusCell.svelte';
 import PgCell from './PgCell.svelte';
+import ReagentsCell from './ReagentsCell.svelte';
 
 /** An entry with the protecting group's name from the rule table beside its id. */
 export type LibraryRow = SavedConditionAnswer & { pgLabel: string };
@@ -78,7 +79,10 @@ export function libraryColumns(permissions: RowPermissions): Column[] {
 			enableGlobalFilter: false,
 			cell: ({ row }) => SAVED_CONDITION_KIND_LABELS[row.original.kind]
 		},
-		textColumn('reagents', 'Reagents'),
+		{
+			...textColumn('reagents', 'Reagents'),
+			cell: ({ row }) => renderComponent(ReagentsCell, { entry: row.original })
+		},
 		textColumn('solvent', 'Solvent'),
 		textColumn('temperature', 'Temperature'),
 		textColumn('time', 'Time'),

@@ -1,6 +1,7 @@
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import type { SavedConditionAnswer } from '../../api/answers';
 import type { LibraryQuery } from '../../library/contract';
+import { stepReagentsOf } from '../../library/suggestions';
 import { loadRuleTable } from '../../rules/table';
 import { dbReady, SavedCondition, User } from '../db';
 
@@ -30,15 +31,21 @@ export async function usesOf(entryIds: string[]): Promise<Record<string, number>
 	return Object.fromEntries(rows.map((row) => [row.id, Number(row.uses)]));
 }
 
-/** A stored entry in the API's shape; `conditions` are read from its reagents on every answer. */
+/**
+ * A stored entry in the API's shape. Its classes, hazards and unrecognised text are read on every
+ * answer from what a step following it carries (`stepReagentsOf`), never stored.
+ */
 export function savedConditionAnswer(entry: SavedCondition, uses: number): SavedConditionAnswer {
+	const read = loadRuleTable().conditionsForReagents(stepReagentsOf(entry));
 	return {
 		id: entry.id,
 		teamId: entry.teamId,
 		protectingGroup: entry.protectingGroup,
 		kind: entry.kind,
 		reagents: entry.reagents,
-		conditions: [...loadRuleTable().conditionsForReagents(entry.reagents).conditions],
+		conditions: [...read.conditions],
+		hazards: read.hazards.map(({ reagent, note }) => ({ reagent, note })),
+		unrecognized: [...read.unknown],
 		solvent: entry.solvent,
 		temperature: entry.temperature,
 		time: entry.time,
