@@ -92,6 +92,13 @@ describe('POST /api/routes/{id}/plan with the team’s condition library', () =>
 		);
 	});
 
+	it('writes the entry as "Use this" would: reagents, then the solvent and temperature', async () => {
+		const b = await bench();
+		const entry = await saved(b.team.id, { reagents: 'TBSOTf, 2,6-lutidine' });
+		const plan = await firstPlan(b);
+		expect(protectStep(plan)).toMatchObject({ reagents: TBSOTF, savedCondition: entry.id });
+	});
+
 	it('saves plan 1 with the entry’s reagents, as the plans showed it', async () => {
 		const b = await bench();
 		await saved(b.team.id);

@@ -64,7 +64,7 @@ describe('suggestionsFor: the entries the step panel offers', () => {
 	});
 });
 
-describe('stepReagentsOf: what "Use this" writes into the step', () => {
+describe('stepReagentsOf: what a step following an entry carries', () => {
 	it('joins the reagents with the solvent and temperature the classifier reads', () => {
 		const entry = { reagents: 'TBSOTf, 2,6-lutidine', solvent: 'CH2Cl2', temperature: '−78 °C' };
 		expect(stepReagentsOf(entry)).toBe('TBSOTf, 2,6-lutidine, CH2Cl2, −78 °C');
@@ -72,5 +72,10 @@ describe('stepReagentsOf: what "Use this" writes into the step', () => {
 
 	it('leaves out what the entry does not say', () => {
 		expect(stepReagentsOf({ reagents: 'TBAF', solvent: null, temperature: ' ' })).toBe('TBAF');
+	});
+
+	it('does not write a solvent or temperature twice when the reagents already name it', () => {
+		const entry = { reagents: 'TBAF, AcOH, thf, 0 °C', solvent: 'THF', temperature: '0 °C' };
+		expect(stepReagentsOf(entry)).toBe('TBAF, AcOH, thf, 0 °C');
 	});
 });

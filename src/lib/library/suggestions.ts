@@ -62,14 +62,17 @@ export function suggestionsFor(
 }
 
 /**
- * The text "Use this" writes into the step's reagents: the reagents with the solvent and the
- * temperature, which the classifier also reads, e.g. 'TBSOTf, 2,6-lutidine, CH2Cl2, −78 °C'.
+ * The text a step gets when it follows an entry ("Use this", the planner): the reagents with the
+ * solvent and the temperature, which the classifier also reads, e.g. 'TBSOTf, 2,6-lutidine,
+ * CH2Cl2, −78 °C'. A part the reagents already name (ignoring case) is not written twice.
  */
 export function stepReagentsOf(
 	entry: Pick<SavedConditionAnswer, 'reagents' | 'solvent' | 'temperature'>
 ) {
-	return [entry.reagents, entry.solvent, entry.temperature]
+	const reagents = entry.reagents.trim();
+	const said = reagents.toLowerCase();
+	const extra = [entry.solvent, entry.temperature]
 		.map((part) => part?.trim())
-		.filter(Boolean)
-		.join(', ');
+		.filter((part): part is string => Boolean(part) && !said.includes(part!.toLowerCase()));
+	return [reagents, ...extra].filter(Boolean).join(', ');
 }

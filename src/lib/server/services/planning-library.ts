@@ -5,6 +5,7 @@
 import { Op } from 'sequelize';
 import type { SavedConditionEntry } from '../../rules/plan';
 import { dbReady, SavedCondition } from '../db';
+import { stepReagentsOf } from '../../library/suggestions';
 import { usesOf } from './library';
 
 /** The team's approved, not retired saved conditions with their uses, e.g. for `POST /api/routes/{id}/plan`. */
@@ -22,7 +23,8 @@ export async function approvedSavedConditions(teamId: string): Promise<SavedCond
 		id: row.id,
 		protectingGroup: row.protectingGroup,
 		kind: row.kind,
-		reagents: row.reagents,
+		// What the added step carries: as "Use this" writes it, with the solvent and temperature.
+		reagents: stepReagentsOf(row),
 		yield: row.yield,
 		reference: row.reference,
 		scale: row.scale,
