@@ -82,6 +82,18 @@ const JSON_BODIES: Body[] = [
 		nul: true
 	},
 	{
+		name: 'team rule with NUL',
+		contentType: 'application/json',
+		body: JSON.stringify({
+			subject: 'TBS',
+			condition: 'heat',
+			rating: 'caution',
+			reason: 'Lost at reflux\u0000',
+			source: '\u0000'
+		}),
+		nul: true
+	},
+	{
 		name: 'project with NUL',
 		contentType: 'application/json',
 		body: JSON.stringify({ name: 'Kitti\u0000wake', description: '\u0000', teamId: '' }),
@@ -102,7 +114,18 @@ const nulForm = () => {
 		'teamId',
 		'current',
 		'next',
-		'confirm'
+		'confirm',
+		// The library's and the team rules' forms.
+		'protectingGroup',
+		'kind',
+		'reagents',
+		'notes',
+		'reference',
+		'subject',
+		'condition',
+		'rating',
+		'reason',
+		'source'
 	]) {
 		form.set(field, `x\u0000${field}`);
 	}
