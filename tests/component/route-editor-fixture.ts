@@ -66,7 +66,12 @@ export async function makeEditor({
 			return { ok: true, status: 201, data: { id: entry.id } };
 		}),
 		save: vi.fn(async () => ({ ok: true, status: 200, data: { version: 2 } })),
-		check: vi.fn(async () => (checks ? new Map(checks.map((c) => [c.id, c])) : null)),
+		// No `checks`: an answer with no steps in it (no verdict shown, and no failure either).
+		check: vi.fn(async () => ({
+			ok: true,
+			status: 200,
+			data: new Map((checks ?? []).map((c) => [c.id, c]))
+		})),
 		analyze: vi.fn(async () => ({ ok: false, status: 400, code: 'x', message: 'not in tests' }))
 	};
 	const editor = new RouteEditor(

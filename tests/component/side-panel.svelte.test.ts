@@ -3,7 +3,7 @@ import { flushSync } from 'svelte';
 import { describe, expect, it } from 'vitest';
 import SidePanel from '$lib/components/route-map/SidePanel.svelte';
 import type { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
-import { makeEditor, renderWithEditor } from './route-editor-fixture';
+import { makeEditor, renderWithEditor, stepCheck } from './route-editor-fixture';
 import { comment, fakeReviewApi, makeReview } from './review-fixture';
 
 const show = (editor: RouteEditor) => renderWithEditor(editor, SidePanel, {});
@@ -34,6 +34,30 @@ describe('SidePanel follows the editor’s one selection', () => {
 		flushSync();
 		expect(editor.selection).toBeNull();
 		expect(heading()).toBe('This route');
+	});
+});
+
+describe('SidePanel when the clash check could not run', () => {
+	it('says no step is checked, on the route and on a step, instead of the earlier verdicts', async () => {
+		const { editor, client } = await makeEditor({ checks: [stepCheck()] });
+		editor.select({ kind: 'step', id: 's1' });
+		show(editor);
+		expect(screen.getByText('No clashes found for these conditions.')).toBeTruthy();
+		client.check.mockResolvedValueOnce({
+			ok: false,
+			status: 503,
+			code: 'chemistry_busy',
+			message: 'The chemistry service is busy; try again in a moment.'
+		} as never);
+		await editor.check.refresh();
+		flushSync();
+		expect(screen.queryByText('No clashes found for these conditions.')).toBeNull();
+		expect(screen.getByRole('alert').textContent).toMatch(
+			/^\s*Not checked: the clash check could not run, so no step of this route has a verdict\.\s+The chemistry service is busy/
+		);
+		editor.select(null);
+		flushSync();
+		expect(screen.getByRole('alert').textContent).toContain('Not checked');
 	});
 });
 

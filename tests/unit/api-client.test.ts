@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { VERSION_CONFLICT } from '../../src/lib/api/errors';
 import { callApi, isVersionConflict } from '../../src/lib/client/api';
+import { ClashCheck } from '../../src/lib/components/route-map/clash-check.svelte';
 import { RouteClient } from '../../src/lib/client/route-client';
 import { Toasts } from '../../src/lib/client/toasts.svelte';
 import { verdictOf } from '../../src/lib/components/route-map/step-view';
@@ -81,12 +82,44 @@ describe('a step the server could not check', () => {
 			]
 		};
 		const checks = await new RouteClient(new Toasts(), answering(200, body)).check('r');
-		expect(checks).toBeInstanceOf(Map);
-		const byStep = checks as Map<string, Parameters<typeof verdictOf>[0]>;
+		expect(checks.ok).toBe(true);
+		const byStep = (checks as { data: Map<string, Parameters<typeof verdictOf>[0]> }).data;
 		expect(verdictOf(byStep.get('s1'))).toEqual({
 			tone: 'unchecked',
 			label: 'Not checked: The product cannot be read — it is empty.'
 		});
 		expect(verdictOf(byStep.get('s2')).tone).toBe('fine');
+	});
+});
+
+describe('a check that could not run at all', () => {
+	it('drops the earlier verdicts and says why until a check succeeds, without a toast', async () => {
+		const toasts = new Toasts();
+		let answer: [number, unknown] = [
+			200,
+			{ steps: [{ id: 's1', conditions: [], hazards: [], clashes: [], unrecognized: [] }] }
+		];
+		const client = new RouteClient(toasts, (() => answering(...answer)('')) as typeof fetch);
+		const check = new ClashCheck('r', client);
+		await check.refresh();
+		expect(verdictOf(check.of('s1')).tone).toBe('fine');
+		answer = [
+			422,
+			{
+				error: {
+					code: 'invalid_team_rules',
+					message: 'The team’s rules no longer fit the rule table.'
+				}
+			}
+		];
+		await check.refresh();
+		// The old "fine" was for an older version: no verdict at all now, and the reason in place.
+		expect(check.of('s1')).toBeUndefined();
+		expect(check.failure).toBe('The team’s rules no longer fit the rule table.');
+		expect(toasts.items).toEqual([]);
+		answer[0] = 200;
+		answer[1] = { steps: [] };
+		await check.refresh();
+		expect(check.failure).toBeNull();
 	});
 });

@@ -40,7 +40,7 @@ const client = {
 			document: { ...doc, name: 'Theirs' }
 		}
 	})),
-	check: vi.fn(async () => null),
+	check: vi.fn(async () => ({ ok: true, status: 200, data: new Map() })),
 	analyze: vi.fn()
 };
 const labels = { conditions: [], groups: new Map(), protectingGroups: new Map() };

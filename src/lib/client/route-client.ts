@@ -66,14 +66,15 @@ export class RouteClient {
 		return result.ok ? result.data.id : null;
 	}
 
-	/** The clash check of the stored route by step id; null (and a toast) when it failed. */
-	async check(routeId: string): Promise<Map<string, StepCheck> | null> {
+	/**
+	 * The clash check of the stored route by step id. A failure is not toasted: the map keeps
+	 * saying, in place, that nothing is checked until a check succeeds.
+	 */
+	async check(routeId: string): Promise<ApiResult<Map<string, StepCheck>>> {
 		const result = await callApi<CheckAnswer>(`/api/routes/${routeId}/check`, {}, this.fetcher);
-		if (!result.ok) {
-			this.toasts.show(`The clash check failed: ${result.message}`, 'problem');
-			return null;
-		}
-		return new Map(result.data.steps.map((step) => [step.id, step]));
+		return result.ok
+			? { ...result, data: new Map(result.data.steps.map((step) => [step.id, step])) }
+			: result;
 	}
 
 	/** Unreadable structures come back as failures for the caller to show beside the field. */

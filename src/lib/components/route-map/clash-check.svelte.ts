@@ -1,15 +1,17 @@
 // The clash check of the stored route, refreshed after each save. Until the first answer arrives
-// (or when it fails, which the client says in a toast) no step has a check: the map shows no
-// verdict rather than a reassuring one.
+// no step has a check: the map shows no verdict rather than a reassuring one. When a check fails
+// (the chemistry service is busy, the team's rules no longer fit the table) the earlier verdicts
+// are dropped, since they were for an older version, and `failure` says why until one succeeds.
 
 import type { RouteClient, StepCheck } from '$lib/client/route-client';
 
 export class ClashCheck {
 	#steps = $state.raw<Map<string, StepCheck> | null>(null);
+	#failure = $state<string | null>(null);
 
 	constructor(
 		private readonly routeId: string,
-		private readonly client: RouteClient
+		private readonly client: Pick<RouteClient, 'check'>
 	) {}
 
 	/** Whether a check answer has arrived. */
@@ -17,15 +19,19 @@ export class ClashCheck {
 		return this.#steps !== null;
 	}
 
-	/** One step's answer; undefined before the first answer or for a step saved after it. */
+	/** Why the last check did not run, or null. */
+	get failure() {
+		return this.#failure;
+	}
+
+	/** One step's answer; undefined before the first answer, after a failure, or for a step saved after it. */
 	of(stepId: string): StepCheck | undefined {
 		return this.#steps?.get(stepId);
 	}
 
 	async refresh() {
-		const steps = await this.client.check(this.routeId);
-		if (steps !== null) {
-			this.#steps = steps;
-		}
+		const result = await this.client.check(this.routeId);
+		this.#steps = result.ok ? result.data : null;
+		this.#failure = result.ok ? null : result.message;
 	}
 }
