@@ -6,6 +6,8 @@
 import { clearPerceptionCache } from '../../src/lib/chem';
 import { checkStep, clearTransformationCache, type StepToCheck } from '../../src/lib/rules/check';
 import { checkRulesFrom } from '../../src/lib/rules/check/rules-adapter';
+import type { RuleOverridesInput } from '../../src/lib/rules/overrides';
+import { loadRuleTable } from '../../src/lib/rules/table';
 import { routeOG2031 } from '../../tests/factories/route-og2031';
 
 const REAGENTS: Record<string, string> = {
@@ -97,3 +99,39 @@ console.log(
 console.log(`first pass (cold process, empty caches): ${cold.ms.toFixed(1)} ms`);
 console.log(`empty caches, warm code (median of 5):   ${uncached[2]!.toFixed(1)} ms`);
 console.log(`warm (median of 20 re-checks):           ${median.toFixed(2)} ms   (aim ≤ 30 ms)`);
+
+// The same route under a team's layer (issue 16): building the layered table is paid on the
+// first check after a lead changes a rule (the worker then keeps it by the layer's JSON); the
+// re-check with it should cost what the defaults' does.
+const layer: RuleOverridesInput = {
+	name: 'Bench team',
+	stability: (['TBS', 'MOM', 'PMB', 'THP', 'Bz', 'Fmoc'] as const).map((protectingGroup) => ({
+		protectingGroup,
+		condition: 'base-aqueous-mild' as const,
+		rating: 'caution' as const,
+		reason: 'Bench',
+		source: 'Bench'
+	})),
+	reactivity: [
+		{
+			group: 'alcohol-primary',
+			condition: 'acylating',
+			rating: 'none',
+			reason: 'Bench',
+			source: 'Bench'
+		}
+	]
+};
+const buildStarted = performance.now();
+const layered = checkRulesFrom(loadRuleTable(layer));
+const buildMs = performance.now() - buildStarted;
+const layeredRuns: number[] = [];
+for (let i = 0; i < 20; i++) {
+	const started = performance.now();
+	steps.forEach((step) => checkStep(layered, step));
+	layeredRuns.push(performance.now() - started);
+}
+layeredRuns.sort((a, b) => a - b);
+console.log(
+	`team layer (${layer.stability!.length + layer.reactivity!.length} overrides): table built in ${buildMs.toFixed(1)} ms; warm re-check ${layeredRuns[10]!.toFixed(2)} ms (aim ≤ 30 ms)`
+);
