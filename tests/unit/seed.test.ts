@@ -3,6 +3,9 @@ import { verifyCredentials } from '../../src/lib/server/auth/credentials';
 import { graphProblems } from '../../src/lib/route/document';
 import { ActivityEvent, OutboxMessage, Project, Route, Team, User } from '../../src/lib/server/db';
 import { listSavedConditions } from '../../src/lib/server/services/library';
+import { checkSteps, rulesFor } from '../../src/lib/server/services/check';
+import { listOverrides } from '../../src/lib/server/services/team-rules';
+import { teamRuleLayer } from '../../src/lib/server/services/team-rules-layer';
 import { listComments } from '../../src/lib/server/services/comments';
 import { reviewHistory } from '../../src/lib/server/services/review';
 import { planRouteDocument } from '../../src/lib/server/services/plan';
@@ -137,6 +140,32 @@ describe('demo scenario', () => {
 		expect(kinds.filter((k) => k === 'library.approved')).toHaveLength(2);
 		const fenwick = await Team.findOne({ where: { name: 'Fenwick Analogue Group' } });
 		expect(await listSavedConditions([fenwick!.id], {})).toEqual([]);
+	});
+
+	it('gives the process team one rule of its own: TBAF only cautions a TBDPS ether (issue 16)', async () => {
+		const aster = await Team.findOne({ where: { name: 'Aster Process Chemistry' } });
+		expect(
+			(await listOverrides(aster!.id)).map((o) => [o.subject, o.condition, o.reagent, o.rating])
+		).toEqual([['TBDPS', 'fluoride', 'TBAF', 'caution']]);
+		// The book rates TBDPS labile to fluoride (Greene's, 5th ed., ch. 2 — from memory); the
+		// team's check says caution for TBAF and names its rule, and keeps the book for HF·pyridine.
+		const tbdps = 'CC(C)(C)[Si](OCCCCO[Si](C)(C)C(C)(C)C)(c1ccccc1)c1ccccc1';
+		const step = (reagents: string) => ({
+			id: 's1',
+			substrate: tbdps,
+			product: 'CC(C)(C)[Si](OCCCCO)(c1ccccc1)c1ccccc1',
+			reagents
+		});
+		const layer = await teamRuleLayer(aster!.id);
+		const [withTbaf, withHf] = checkSteps(
+			[step('TBAF, THF, 0 °C'), step('HF·pyridine, THF')],
+			rulesFor(layer).rules
+		);
+		expect(withTbaf!.clashes.map((c) => c.severity)).toEqual(['caution']);
+		expect(withTbaf!.clashes[0]!.message).toMatch(/^team rule: On the OG-series, TBAF/);
+		expect(withHf!.clashes.some((c) => c.severity === 'clash')).toBe(true);
+		const fenwick = await Team.findOne({ where: { name: 'Fenwick Analogue Group' } });
+		expect(await teamRuleLayer(fenwick!.id)).toBeUndefined();
 	});
 
 	it('rejects a wrong password', async () => {

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { savedConditionFields } from '../../library/contract';
 import { ROLES } from '../../policy';
+import { ruleOverrideBody } from '../../team-rules/contract';
 import { routeDocumentShape } from '../../route/document';
 import scenario from './demo-scenario.json';
 
@@ -31,6 +32,10 @@ const demoSavedCondition = savedConditionFields.extend({
 });
 export type DemoSavedCondition = z.infer<typeof demoSavedCondition>;
 
+// A team's rule overrides (issue 16), set by a lead of the team.
+const demoRule = ruleOverrideBody.extend({ by: z.email() });
+export type DemoRule = z.infer<typeof demoRule>;
+
 // The JSON is the single source: the seed reads it here, `npm start` reads it to print sign-ins.
 const demoSchema = z.object({
 	password: z.string(),
@@ -39,6 +44,7 @@ const demoSchema = z.object({
 			name: z.string(),
 			people: z.array(z.object({ email: z.email(), name: z.string(), role: z.enum(ROLES) })),
 			library: z.array(demoSavedCondition).default([]),
+			rules: z.array(demoRule).default([]),
 			projects: z.array(
 				z.object({
 					name: z.string(),

@@ -5,6 +5,7 @@ import {
 	DEMO_PASSWORD,
 	DEMO_TEAMS,
 	type DemoReview,
+	type DemoRule,
 	type DemoSavedCondition
 } from './demo-scenario';
 import { ActivityEvent } from './models';
@@ -12,6 +13,7 @@ import { createRoute } from '../services/routes';
 import { takeReviewAction } from '../services/review-actions';
 import { addComment } from '../services/comment-writes';
 import { approveSavedCondition, createSavedCondition } from '../services/library-writes';
+import { addOverride } from '../services/team-rules';
 import type { Route } from './models';
 import type { SessionUser } from '../../types';
 
@@ -75,6 +77,7 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
 	});
 	for (const demoTeam of DEMO_TEAMS) {
 		await seedLibrary(demoTeam.name, demoTeam.library);
+		await seedRules(demoTeam.name, demoTeam.rules);
 	}
 	for (const { lead, project, document, review } of routes) {
 		const route = await createRoute(sessionUser(lead), project, document);
@@ -91,21 +94,31 @@ const sessionUser = (user: User): SessionUser => ({
 	name: user.name
 });
 
+async function demoPerson(email: string, teamName: string) {
+	const user = await User.findOne({ where: { email } });
+	if (!user) {
+		throw new Error(`Demo scenario: ${email} (of “${teamName}”) is not a demo person.`);
+	}
+	return sessionUser(user);
+}
+
 /** A team's saved conditions, written and approved through the library's services (activity too). */
 async function seedLibrary(teamName: string, entries: DemoSavedCondition[]) {
 	const team = await Team.findOne({ where: { name: teamName } });
-	const person = async (email: string) => {
-		const user = await User.findOne({ where: { email } });
-		if (!user) {
-			throw new Error(`Demo scenario: ${email} (library of “${teamName}”) is not a demo person.`);
-		}
-		return sessionUser(user);
-	};
+	const person = (email: string) => demoPerson(email, teamName);
 	for (const { by, approvedBy, ...fields } of entries) {
 		const entry = await createSavedCondition(await person(by), { ...fields, teamId: team!.id });
 		if (approvedBy) {
 			await approveSavedCondition(await person(approvedBy), entry);
 		}
+	}
+}
+
+/** A team's rule overrides, set through the rules service (so the feed has them). */
+async function seedRules(teamName: string, rules: DemoRule[]) {
+	const team = await Team.findOne({ where: { name: teamName } });
+	for (const { by, ...body } of rules) {
+		await addOverride(await demoPerson(by, teamName), team!.id, body);
 	}
 }
 
