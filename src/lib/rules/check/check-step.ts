@@ -5,7 +5,7 @@ import { isStructureError } from '../../chem/errors';
 import { readStructure } from '../../chem/parse';
 import { transformation, type Site } from './transformation';
 import { conditionOrigins } from './condition-origins';
-import { protectingGroupMessage, freeGroupMessage } from './messages';
+import { protectingGroupMessage, freeGroupMessage, twinSiteMessage } from './messages';
 import {
 	StepStructureError,
 	UnknownConditionError,
@@ -72,13 +72,25 @@ export function checkStep(rules: CheckRules, step: StepToCheck): StepCheck {
 				rule.rating === 'reacts'
 					? takenFirst(rules, change.freeGroups, group.id, condition, named)
 					: null;
+			// The other alcohol of a symmetric diol, one of which the step converts: whether it
+			// reacts too is a question of selectivity the chemist drew on purpose, not a clash.
+			// A team's own rating stays as the team set it.
+			const twin =
+				rule.rating === 'reacts' &&
+				!selective &&
+				rule.layer !== 'override' &&
+				group.twinOfConverted === true;
 			clashes.push({
-				severity: rule.rating === 'reacts' && !selective ? 'clash' : 'caution',
+				severity: rule.rating === 'reacts' && !selective && !twin ? 'clash' : 'caution',
 				kind: 'attacks-free-group',
 				subject: group.id,
 				condition,
 				atoms: group.atoms,
-				message: selective ?? freeGroupMessage(rules, group.id, condition, rule, origin)
+				message:
+					selective ??
+					(twin
+						? twinSiteMessage(rules, group.id, condition, rule, origin)
+						: freeGroupMessage(rules, group.id, condition, rule, origin))
 			});
 		}
 	}

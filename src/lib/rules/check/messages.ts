@@ -86,6 +86,24 @@ export function freeGroupMessage(
 }
 
 /**
+ * A standing-by group symmetry-equivalent to one the step converts: the reagent cannot tell them
+ * apart, so the step is a question of selectivity (amounts, a mono-selective method), not a
+ * clash, e.g. "TBSCl (…) reacts with the free primary alcohol this step converts; the other one,
+ * which this step leaves alone, is the same site by symmetry: …".
+ */
+export function twinSiteMessage(
+	rules: CheckRules,
+	groupId: string,
+	condition: string,
+	rule: { reason: string; source: string },
+	origin: Origin
+): string {
+	const group = rules.groupLabel(groupId);
+	const by = broughtBy(origin, rules.conditionLabel(condition));
+	return `${by} reacts with the free ${group} this step converts; the other free ${group}, which this step leaves alone, is the same site by symmetry, so the reagent cannot tell them apart: expect some of both to react unless the amount or the method sets one apart (common practice: one equivalent or an excess of the substrate, or a mono-selective method). Why it reacts: ${stripStop(rule.reason)}. Source: ${rule.source}.`;
+}
+
+/**
  * A message the team's override decided opens with its reason, so a reader sees at once that the
  * team, not the textbook, raised it, e.g. "team rule: our TBS ethers fall off on silica. TBAF …".
  */

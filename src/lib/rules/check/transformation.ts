@@ -2,7 +2,7 @@
 // and free groups survive unchanged into the product (bystanders) and which change (the
 // intended reaction sites). Cached by structure text, since a route is re-checked on every edit.
 
-import type { Molecule } from 'openchemlib';
+import { Molecule } from 'openchemlib';
 import { mapAtoms, type AtomMap } from '../../chem/atom-map';
 import { LruCache } from '../../chem/cache';
 import { sharedMolecule } from '../../chem/molecule-cache';
@@ -11,8 +11,18 @@ import { perceiveText } from '../../chem/perception-cache';
 import type { PgSite } from '../ids';
 import { siteOf } from './pg-site';
 
-/** `on`: what a protecting group sits on, where that matters to its ratings (pg-site.ts). */
-export type Site = { id: string; atoms: number[]; survives: boolean; on?: PgSite };
+/**
+ * `on`: what a protecting group sits on, where that matters to its ratings (pg-site.ts).
+ * `twinOfConverted`: a surviving free group that is symmetry-equivalent to one the step converts
+ * (the other alcohol of a symmetric diol), so no reagent can tell the two apart.
+ */
+export type Site = {
+	id: string;
+	atoms: number[];
+	survives: boolean;
+	on?: PgSite;
+	twinOfConverted?: boolean;
+};
 export type Transformation = { protectingGroups: Site[]; freeGroups: Site[]; mapped: boolean };
 
 const cache = new LruCache<Transformation>('transformations');
@@ -47,6 +57,9 @@ export function transformation(substrates: string[], product: string): Transform
 		? mapAtoms(substrateMolecule(), sharedMolecule(product))
 		: null;
 	const result = compare(before, after, map);
+	if (map) {
+		markTwins(result.freeGroups, substrateMolecule());
+	}
 	if (result.protectingGroups.length) {
 		const molecule = substrateMolecule();
 		before.protectingGroups.forEach((pg, i) => {
@@ -120,6 +133,33 @@ function compare(before: Perception, after: Perception, map: AtomMap | null): Tr
 			survives: survives(g.id, g.atoms, after.groups, count(free, g.id))
 		}))
 	};
+}
+
+/**
+ * Marks each surviving free group whose atoms have the same symmetry ranks as a converted group
+ * of the same id: the two are the same site as far as any reagent can tell, e.g. the two
+ * alcohols of butane-1,4-diol, one of which a mono-silylation converts.
+ */
+function markTwins(groups: Site[], substrate: Molecule): void {
+	const converted = groups.filter((g) => !g.survives);
+	const standing = groups.filter((g) => g.survives && converted.some((c) => c.id === g.id));
+	if (standing.length === 0) {
+		return;
+	}
+	// A copy: the shared molecule is read by other callers, and ranks are helper state.
+	const molecule = substrate.getCompactCopy();
+	molecule.ensureHelperArrays(Molecule.cHelperSymmetrySimple);
+	const ranks = (atoms: number[]) =>
+		atoms
+			.map((a) => molecule.getSymmetryRank(a))
+			.sort((a, b) => a - b)
+			.join(',');
+	for (const group of standing) {
+		const mine = ranks(group.atoms);
+		if (converted.some((c) => c.id === group.id && ranks(c.atoms) === mine)) {
+			group.twinOfConverted = true;
+		}
+	}
 }
 
 export function clearTransformationCache(): void {
