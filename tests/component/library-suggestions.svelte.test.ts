@@ -161,6 +161,30 @@ describe('SidePanel: saving a step’s conditions to the library', () => {
 		);
 	});
 
+	it('moves the choice to the group the structures show when their analyses arrive after the form opened', async () => {
+		const late: Record<string, (a: Analysis) => void> = {};
+		// Marked a protection, so the panel offers the library before the structures are read.
+		const marked = { ...protection, steps: [{ ...step(), intent: 'protect' as const }] };
+		const { editor, client } = await makeEditor({ document: marked, library: [] });
+		client.analyze.mockImplementation(
+			(structure: string) =>
+				new Promise((resolve) => {
+					late[structure] = (a) => resolve({ ok: true, status: 200, data: a });
+				}) as never
+		);
+		editor.select({ kind: 'step', id: 's1' });
+		renderWithEditor(editor, SidePanel, {});
+		await fireEvent.click(
+			screen.getByRole('button', { name: 'Save this step’s conditions to the library' })
+		);
+		const pg = () => (screen.getByLabelText('Protecting group') as HTMLSelectElement).value;
+		expect(pg()).not.toBe('TBS');
+		late[diol]!(analysis([]));
+		late[silylEther]!(analysis(['TBS']));
+		await waitFor(() => expect(pg()).toBe('TBS'));
+		expect((screen.getByLabelText('Kind') as HTMLSelectElement).value).toBe('install');
+	});
+
 	it('shows a refusal where the chemist saved, and leaves the step as it was', async () => {
 		const { editor, client } = await open({});
 		client.saveCondition.mockResolvedValueOnce({
