@@ -38,27 +38,37 @@ export async function cormorantId(page: Page): Promise<string> {
 	return projects.find((p) => PROJECT.test(p.name))!.id;
 }
 
-/** A two-node route made through the API, for the tests that are about something else. */
-export async function makeRoute(
+type Node = { label: string; structure: string };
+
+/**
+ * A route of one step, `from` → `to`, made in Cormorant through the API; returns its id, e.g.
+ * `oneStepRoute(page, { name, from: { label: 'diol', structure: 'OCCCCO' }, to, reagents: 'TBSCl' })`.
+ */
+export async function oneStepRoute(
 	page: Page,
-	name: string,
-	reagents = 'MeMgBr, THF'
+	route: { name: string; from: Node; to: Node; reagents: string; intent?: 'protect' | 'deprotect' }
 ): Promise<string> {
+	const { name, from, to, reagents, intent } = route;
 	const created = await page.request.post(`/api/projects/${await cormorantId(page)}/routes`, {
 		data: {
 			name,
 			intermediates: [
-				{ id: 'a', label: 'OG-2031-A keto ester', structure: KETO_ESTER, position: { x: 0, y: 0 } },
-				{
-					id: 'c',
-					label: 'OG-2031-C hydroxy ketone',
-					structure: HYDROXY_KETONE,
-					position: { x: 360, y: 0 }
-				}
+				{ id: 'a', ...from, position: { x: 0, y: 0 } },
+				{ id: 'b', ...to, position: { x: 380, y: 0 } }
 			],
-			steps: [{ id: 's1', from: ['a'], to: 'c', reagents }]
+			steps: [{ id: 's1', from: ['a'], to: 'b', reagents, ...(intent ? { intent } : {}) }]
 		}
 	});
 	expect(created.status()).toBe(201);
 	return (await created.json()).id;
+}
+
+/** A two-node route made through the API, for the tests that are about something else. */
+export function makeRoute(page: Page, name: string, reagents = 'MeMgBr, THF'): Promise<string> {
+	return oneStepRoute(page, {
+		name,
+		from: { label: 'OG-2031-A keto ester', structure: KETO_ESTER },
+		to: { label: 'OG-2031-C hydroxy ketone', structure: HYDROXY_KETONE },
+		reagents
+	});
 }

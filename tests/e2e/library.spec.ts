@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { asUser, cormorantId, unique } from './helpers';
+import { asUser, oneStepRoute, unique } from './helpers';
 
 // The condition library (issue 16): a chemist saves a step's conditions to the library from the
 // route map, the lead approves the entry, and a step on another route uses it from the step
@@ -17,18 +17,14 @@ const usesOf = (page: Page, reagents: string) => entryRow(page, reagents).getByR
 
 /** A route in Cormorant with one step that puts a TBS on a diol, opened on its step. */
 async function silylationRoute(page: Page, reagents: string) {
-	const created = await page.request.post(`/api/projects/${await cormorantId(page)}/routes`, {
-		data: {
-			name: unique('Diol silylation'),
-			intermediates: [
-				{ id: 'a', label: 'diol', structure: DIOL, position: { x: 0, y: 0 } },
-				{ id: 'b', label: 'mono-TBS ether', structure: MONO_TBS, position: { x: 360, y: 0 } }
-			],
-			steps: [{ id: 's1', from: ['a'], to: 'b', reagents, intent: 'protect' }]
-		}
+	const id = await oneStepRoute(page, {
+		name: unique('Diol silylation'),
+		from: { label: 'diol', structure: DIOL },
+		to: { label: 'mono-TBS ether', structure: MONO_TBS },
+		reagents,
+		intent: 'protect'
 	});
-	expect(created.status()).toBe(201);
-	await page.goto(`/routes/${(await created.json()).id}`);
+	await page.goto(`/routes/${id}`);
 	await page.getByTestId('step-label').getByRole('button', { name: reagents }).click();
 }
 

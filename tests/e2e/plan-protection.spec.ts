@@ -124,8 +124,9 @@ test('a route with no possible plan says why instead of showing plans', async ({
 	const doc = await (await page.request.get(`/api/routes/${id}`)).json();
 	const kept = {
 		...doc.document,
-		intermediates: doc.document.intermediates.map((n: { id: string }) =>
-			n.id === 'c' ? { ...n, label: 'OG-2031-D hydroxy ester', structure: 'CC(O)(C)CCC(=O)OC' } : n
+		// The product node (makeRoute's second intermediate) becomes the hydroxy ester.
+		intermediates: doc.document.intermediates.map((n: { id: string }, i: number) =>
+			i === 1 ? { ...n, label: 'OG-2031-D hydroxy ester', structure: 'CC(O)(C)CCC(=O)OC' } : n
 		)
 	};
 	expect(

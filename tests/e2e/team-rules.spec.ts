@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { cormorantId, signInAndWait, unique } from './helpers';
+import { oneStepRoute, signInAndWait, unique } from './helpers';
 
 // The team's rules page in the browser: the lead adds an override with the form and sees its cell
 // bordered and named "team rule"; a chemist reads the same table without the form; the lead
@@ -79,18 +79,12 @@ test('a lead adds a team rule for one reagent and the route map flags the step w
 	test.slow();
 	const lead = await (await browser.newContext()).newPage();
 	await signInAndWait(lead, 'lead@example.com');
-	const created = await lead.request.post(`/api/projects/${await cormorantId(lead)}/routes`, {
-		data: {
-			name: unique('TBS acid by saponification'),
-			intermediates: [
-				{ id: 'a', label: 'TBS ester', structure: TBS_ESTER, position: { x: 0, y: 0 } },
-				{ id: 'b', label: 'TBS acid', structure: TBS_ACID, position: { x: 380, y: 0 } }
-			],
-			steps: [{ id: 's1', from: ['a'], to: 'b', reagents: 'LiOH, THF, H2O' }]
-		}
+	const routeId = await oneStepRoute(lead, {
+		name: unique('TBS acid by saponification'),
+		from: { label: 'TBS ester', structure: TBS_ESTER },
+		to: { label: 'TBS acid', structure: TBS_ACID },
+		reagents: 'LiOH, THF, H2O'
 	});
-	expect(created.status()).toBe(201);
-	const routeId = (await created.json()).id as string;
 	await lead.goto(`/routes/${routeId}`);
 	// Before the rule: the book's rating, no clash on the step.
 	await lead.getByTestId('step-label').getByRole('button', { name: 'LiOH, THF, H2O' }).click();
