@@ -170,7 +170,7 @@ describe('SidePanel: saving a step’s conditions to the library', () => {
 			(structure: string) =>
 				new Promise((resolve) => {
 					late[structure] = (a) => resolve({ ok: true, status: 200, data: a });
-				}) as never
+				})
 		);
 		editor.select({ kind: 'step', id: 's1' });
 		renderWithEditor(editor, SidePanel, {});

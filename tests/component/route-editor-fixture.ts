@@ -7,6 +7,7 @@ import { vi } from 'vitest';
 import { RouteEditor } from '$lib/components/route-map/route-editor.svelte';
 import type { Analysis, ConditionLabel, RouteClient, StepCheck } from '$lib/client/route-client';
 import type { SavedConditionAnswer } from '$lib/api/answers';
+import type { ApiResult } from '$lib/client/api';
 import { Toasts } from '$lib/client/toasts.svelte';
 import type { RouteDocument } from '$lib/route/document';
 import type { ReviewState } from '$lib/components/review/review-state.svelte';
@@ -72,7 +73,12 @@ export async function makeEditor({
 			status: 200,
 			data: new Map((checks ?? []).map((c) => [c.id, c]))
 		})),
-		analyze: vi.fn(async () => ({ ok: false, status: 400, code: 'x', message: 'not in tests' }))
+		analyze: vi.fn(async (structure: string): Promise<ApiResult<Analysis>> => ({
+			ok: false,
+			status: 400,
+			code: 'x',
+			message: `not in tests: ${structure}`
+		}))
 	};
 	const editor = new RouteEditor(
 		{
