@@ -19,8 +19,8 @@ export type TeamPlanning = {
 };
 
 /** The first clash or unreadable step of a route, or null when it re-checks clean. */
-export function firstClash(route: RouteDocument, layer?: RuleOverridesInput): string | null {
-	return firstClashIn(checkRouteDocument(route, rulesFor(layer).rules));
+export function firstClash(route: RouteDocument): string | null {
+	return firstClashIn(checkRouteDocument(route));
 }
 
 function firstClashIn(checks: RouteStepCheck[]): string | null {
